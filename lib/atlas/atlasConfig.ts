@@ -1,0 +1,21 @@
+import type { Band } from "../core/index.ts";
+
+/** The standard temperatures of the atlas, set here and nowhere else. */
+export const standardTemperaturesK: readonly number[] = [273.15, 296, 298.15, 1000];
+export const defaultTemperatureK = 296;
+
+export type BandKind = "fundamental" | "hot" | "overtone";
+
+/** The bands every species is built with: the fundamental, two hot bands, two overtones. */
+export const atlasBands: ReadonlyArray<{ band: Band; kind: BandKind }> = [
+  { band: { vUpper: 1, vLower: 0 }, kind: "fundamental" },
+  { band: { vUpper: 2, vLower: 1 }, kind: "hot" },
+  { band: { vUpper: 3, vLower: 2 }, kind: "hot" },
+  { band: { vUpper: 2, vLower: 0 }, kind: "overtone" },
+  { band: { vUpper: 3, vLower: 0 }, kind: "overtone" },
+];
+
+/** Hot bands are shown with the fundamental when their strongest line reaches this fraction of its strongest. */
+export const hotBandDisplayFraction = 1e-3;
+/** Default threshold of `find`, relative to the strongest line of each band. */
+export const defaultFindMinRelative = 1e-3;

@@ -1,0 +1,54 @@
+import { bandLabel, bandLines, lineResiduals, partitionFunction, type Band, type BandLines, type LineResidual } from "../core/index.ts";
+import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
+import { atlasBands, hotBandDisplayFraction, type BandKind } from "./atlasConfig.ts";
+
+export interface AtlasBand {
+  kind: BandKind;
+  label: string;
+  lines: BandLines;
+  /** Strongest line of this band over the strongest of the fundamental (null without intensity data). */
+  strengthRelativeToFundamental: number | null;
+  /** Whether the band is strong enough to be drawn with the fundamental. */
+  shownWithFundamental: boolean;
+}
+
+/** One species of one molecule at one temperature: everything a page, a sheet or the CLI shows. */
+export interface AtlasEntry {
+  moleculeId: string;
+  species: string;
+  temperatureK: number;
+  partitionFunction: number;
+  bands: AtlasBand[];
+  residuals: LineResidual[];
+}
+
+/**
+ * Computes one entry. Bands are compared with the fundamental through their absolute
+ * intensities; without dipole data a hot band is compared by the harmonic rule (the core labels it).
+ */
+export function atlasEntry(molecule: Molecule, species: SpeciesInfo, temperatureK: number, minRelative?: number): AtlasEntry {
+  const q = partitionFunction(species.model.dunham, temperatureK);
+  const computed = atlasBands.map(({ band, kind }) => ({ kind, band, lines: bandLines(species.model, band, { temperatureK, partitionFunction: q, minRelative }) }));
+  const fundamental = computed[0].lines;
+  const bands: AtlasBand[] = computed.map(({ kind, band, lines }) => {
+    let ratio: number | null = null;
+    if (fundamental.strongestLineIntensity && lines.strongestLineIntensity !== null) ratio = lines.strongestLineIntensity / fundamental.strongestLineIntensity;
+    else if (kind === "hot" && fundamental.strongestLinePerDebyeSquared > 0) {
+      // Harmonic rule |μ(v+1←v)|² = (v+1)|μ(1←0)|² (Bernath, ch. 7) when no dipole is cited.
+      ratio = (band.vUpper * lines.strongestLinePerDebyeSquared) / fundamental.strongestLinePerDebyeSquared;
+    }
+    return {
+      kind,
+      label: bandLabel(band),
+      lines,
+      strengthRelativeToFundamental: kind === "fundamental" ? 1 : ratio,
+      shownWithFundamental: kind === "fundamental" || (kind === "hot" && ratio !== null && ratio >= hotBandDisplayFraction),
+    };
+  });
+  return { moleculeId: molecule.id, species: species.model.label, temperatureK, partitionFunction: q, bands, residuals: lineResiduals(species.model) };
+}
+
+/** Lines of one band on request (any v'←v'', not only the atlas's standard set). */
+export function bandOf(species: SpeciesInfo, band: Band, temperatureK: number, minRelative?: number): BandLines {
+  return bandLines(species.model, band, { temperatureK, minRelative });
+}

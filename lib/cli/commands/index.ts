@@ -1,0 +1,21 @@
+import { checkHelp, runCheck } from "./check.ts";
+import { findHelp, runFind } from "./find.ts";
+import { linesHelp, runLines } from "./lines.ts";
+
+export interface CommandResult {
+  output: string;
+  exitCode: number;
+}
+
+export interface Command {
+  summary: string;
+  help: string;
+  run: (args: string[]) => CommandResult | string | Promise<CommandResult | string>;
+}
+
+/** Every subcommand, in the order `bandatlas --help` lists them. */
+export const commands: Record<string, Command> = {
+  lines: { summary: "predicted P and R lines of one band of one species", help: linesHelp, run: runLines },
+  find: { summary: "lines of the whole atlas near a wavenumber", help: findHelp, run: runFind },
+  check: { summary: "validate molecule files (file:line:column for every problem)", help: checkHelp, run: runCheck },
+};

@@ -1,0 +1,29 @@
+import { CoreInputError } from "./coreInputError.ts";
+import type { Band } from "./types.ts";
+
+export function bandLabel(band: Band): string {
+  return `${band.vUpper}-${band.vLower}`;
+}
+
+/** Parses "v'-v''" (absorption: v' > v'' ≥ 0), e.g. "1-0", "2-0", "2-1". */
+export function parseBand(text: string): Band {
+  const match = /^\s*(\d{1,2})\s*-\s*(\d{1,2})\s*$/.exec(text);
+  if (!match) throw new CoreInputError(`band "${text}" is not of the form v'-v'' (for example 1-0, 2-0 or 2-1)`);
+  const band = { vUpper: Number(match[1]), vLower: Number(match[2]) };
+  if (band.vUpper <= band.vLower) {
+    throw new CoreInputError(
+      `band "${text}": the upper level v' must be above the lower level v'' (absorption from v'' to v'), for example 1-0`,
+    );
+  }
+  return band;
+}
+
+export function sameBand(a: Band, b: Band): boolean {
+  return a.vUpper === b.vUpper && a.vLower === b.vLower;
+}
+
+export function checkTemperature(temperatureK: number): void {
+  if (!Number.isFinite(temperatureK) || temperatureK <= 0) {
+    throw new CoreInputError(`temperature ${temperatureK} K is not possible: it must be a finite number above 0 K`);
+  }
+}

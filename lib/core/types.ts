@@ -1,0 +1,123 @@
+// Plain data shared by the core, the atlas and every renderer. Units live in the type aliases.
+
+/** Wavenumber in cm⁻¹ (vacuum). */
+export type WavenumberCm = number;
+/** Energy expressed as a term value in cm⁻¹. */
+export type EnergyCm = number;
+/** Absolute temperature in K. */
+export type TemperatureK = number;
+/** Atomic or molecular mass in unified atomic mass units (u = Da). */
+export type MassU = number;
+/** Line intensity in cm/molecule (cm⁻¹ / (molecule cm⁻²)). */
+export type LineIntensityCmPerMolecule = number;
+/** Electric dipole moment in debye. */
+export type DipoleDebye = number;
+
+/** One Dunham coefficient Y_kl in E(v,J) = Σ Y_kl (v+½)^k [J(J+1)]^l. */
+export interface DunhamCoefficient {
+  k: number;
+  l: number;
+  valueCm: EnergyCm;
+  /** One standard uncertainty in cm⁻¹; 0 where the source gives none. */
+  uncertaintyCm: EnergyCm;
+}
+
+/** Handbook equilibrium constants (all cm⁻¹), each with an optional uncertainty. */
+export interface EquilibriumConstants {
+  omegaE: number;
+  omegaExe?: number;
+  omegaEye?: number;
+  omegaEze?: number;
+  bE: number;
+  alphaE?: number;
+  gammaE?: number;
+  dE?: number;
+  betaE?: number;
+  hE?: number;
+}
+export type EquilibriumUncertainties = Partial<Record<keyof EquilibriumConstants, number>>;
+
+export interface Band {
+  vUpper: number;
+  vLower: number;
+}
+
+export interface HermanWallisCoefficients {
+  /** F(m) = 1 + a1·m + a2·m², m = J''+1 in R, −J'' in P. */
+  a1: number;
+  a2: number;
+}
+
+/** What the core needs to give a band absolute intensities. */
+export interface BandIntensityData {
+  band: Band;
+  /** |⟨v'|μ|v''⟩| in debye for this species and band. */
+  transitionDipoleDebye: DipoleDebye;
+  transitionDipoleUncertaintyDebye: DipoleDebye;
+  hermanWallis: HermanWallisCoefficients | null;
+  /** How the dipole was obtained, shown beside every absolute intensity. */
+  origin: "cited" | "from-band-strength" | "harmonic-hot-band" | "isotope-scaled";
+  sourceKey: string;
+}
+
+export interface ReferenceLine {
+  band: Band;
+  label: string;
+  wavenumber: WavenumberCm;
+  uncertainty: WavenumberCm | null;
+  sourceKey: string;
+}
+
+/** One isotopologue, ready for the physics: masses resolved, constants as one Y_kl table. */
+export interface SpeciesModel {
+  /** Every atom's mass number, e.g. "12C16O", "1H35Cl". */
+  label: string;
+  massNumbers: number[];
+  atomMassesU: MassU[];
+  /** Product of the atoms' natural isotopic abundances (0–1). */
+  abundance: number;
+  reducedMassU: MassU;
+  dunham: DunhamCoefficient[];
+  constantsOrigin: "cited" | "isotope-scaled";
+  constantsSourceKey: string;
+  intensities: BandIntensityData[];
+  referenceLines: ReferenceLine[];
+}
+
+export type Branch = "P" | "R";
+
+/** One predicted line. Field names follow the JSON contract of `bandatlas lines`. */
+export interface Line {
+  label: string;
+  branch: Branch;
+  jLower: number;
+  jUpper: number;
+  wavenumber: WavenumberCm;
+  wavenumberUncertainty: WavenumberCm;
+  wavelengthVacuumUm: number;
+  wavelengthAirNm: number;
+  frequencyThz: number;
+  lowerStateEnergy: EnergyCm;
+  relativeIntensity: number;
+  lineIntensity: LineIntensityCmPerMolecule | null;
+  populationFraction: number;
+}
+
+export interface BandLines {
+  species: string;
+  band: Band;
+  temperatureK: TemperatureK;
+  /** Band origin ν0 = E(v',0) − E(v'',0), cm⁻¹. */
+  bandOrigin: WavenumberCm;
+  partitionFunction: number;
+  /** Highest J'' reached, and why the list stops there. */
+  jLowerMax: number;
+  truncatedBy: "intensity" | "constants-turn-over" | "j-limit";
+  /** Lines above the relative-intensity threshold, sorted by wavenumber. */
+  lines: Line[];
+  /** Strongest line intensity of the band in cm/molecule, or null without dipole data. */
+  strongestLineIntensity: LineIntensityCmPerMolecule | null;
+  /** Strongest line intensity for a transition dipole of 1 D, cm/molecule/D², always known. */
+  strongestLinePerDebyeSquared: number;
+  intensityOrigin: BandIntensityData["origin"] | null;
+}

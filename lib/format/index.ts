@@ -1,0 +1,4 @@
+export * from "./numbers.ts";
+export * from "./csv.ts";
+export * from "./lineRecords.ts";
+export * from "./linesTable.ts";

@@ -1,0 +1,36 @@
+import { bandLabel, type BandLines } from "../core/index.ts";
+import { lineCells } from "./lineRecords.ts";
+import { significant } from "./numbers.ts";
+
+export function textTable(headings: string[], rows: string[][], rightAligned: boolean[]): string {
+  const widths = headings.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
+  const pad = (cells: string[]) => cells.map((c, i) => (rightAligned[i] ? c.padStart(widths[i]) : c.padEnd(widths[i]))).join("  ").trimEnd();
+  return [pad(headings), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(pad)].join("\n");
+}
+
+export interface LinesTableContext {
+  moleculeName: string;
+  formula: string;
+  constantsNote: string;
+}
+
+/** The human-readable table of `bandatlas lines`: units in every heading. */
+export function linesTable(result: BandLines, context: LinesTableContext): string {
+  const intensity =
+    result.intensityOrigin === null
+      ? "absolute intensities: none (the molecule file cites no band strength or transition dipole for this band)"
+      : `absolute intensities: from ${result.intensityOrigin.replace(/-/g, " ")} dipole data, per molecule of the gas at natural isotopic abundance`;
+  const header = [
+    `${context.moleculeName} (${context.formula}), species ${result.species}, band ${bandLabel(result.band)}, T = ${result.temperatureK} K`,
+    `band origin ${result.bandOrigin.toFixed(4)} cm⁻¹; partition function Q = ${significant(result.partitionFunction, 6)}; ${result.lines.length} lines, J'' up to ${result.jLowerMax}`,
+    `constants: ${context.constantsNote}`,
+    intensity,
+    "",
+  ];
+  const rows = result.lines.map((l) => {
+    const c = lineCells(l);
+    return [l.label, c.wavenumber, c.wavenumberUncertainty, c.wavelengthVacuumUm, c.wavelengthAirNm, c.lowerStateEnergy, c.relativeIntensity, c.lineIntensity || "—", c.populationFraction];
+  });
+  const headings = ["line", "ν̃ / cm⁻¹", "± / cm⁻¹", "λ vac / µm", "λ air / nm", "E'' / cm⁻¹", "rel. int.", "S / cm·molecule⁻¹", "pop. fraction"];
+  return header.join("\n") + textTable(headings, rows, [false, true, true, true, true, true, true, true, true]) + "\n";
+}

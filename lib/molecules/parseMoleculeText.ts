@@ -1,0 +1,254 @@
+import { isMap, isPair, isScalar, LineCounter, parseDocument, type Document } from "yaml";
+import { parseBand, CoreInputError } from "../core/index.ts";
+import { buildMolecule, type Molecule } from "./buildMolecule.ts";
+import { isKnownElement, isotope, stableMassNumbers } from "./isotopes.ts";
+import { formatPath, type Problem } from "./problems.ts";
+import { moleculeFileSchema, type MoleculeFile } from "./schema.ts";
+
+/** Files larger than this are refused before parsing: a molecule file is a few kilobytes. */
+export const maxMoleculeFileBytes = 256 * 1024;
+/** YAML aliases allowed in one file; a handful is plenty, thousands is an expansion attack. */
+export const maxYamlAliases = 20;
+
+export const idPattern = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
+
+type Path = ReadonlyArray<string | number>;
+
+function locate(doc: Document, counter: LineCounter, path: Path): { line: number; column: number } | null {
+  // Walk down as far as the path exists; point at the key where there is one.
+  let node: unknown = doc.contents;
+  let offset: number | null = (doc.contents as { range?: [number, number] } | null)?.range?.[0] ?? null;
+  for (const part of path) {
+    if (isMap(node)) {
+      const pair = node.items.find((p) => isPair(p) && isScalar(p.key) && p.key.value === part);
+      if (!pair) break;
+      offset = (pair.key as { range?: [number, number] }).range?.[0] ?? offset;
+      node = pair.value;
+    } else if (node && typeof node === "object" && "items" in node && typeof part === "number") {
+      const item = (node as { items: unknown[] }).items[part];
+      if (!item) break;
+      offset = (item as { range?: [number, number] }).range?.[0] ?? offset;
+      node = item;
+    } else break;
+  }
+  if (offset === null) return null;
+  const pos = counter.linePos(offset);
+  return { line: pos.line, column: pos.col };
+}
+
+function decode(bytes: Uint8Array, file: string): { text: string } | { problem: Problem } {
+  const whole = (message: string): { problem: Problem } => ({ problem: { file, line: null, column: null, path: "", message } });
+  if (bytes.byteLength > maxMoleculeFileBytes) {
+    return whole(`the file is ${bytes.byteLength} bytes; molecule files are limited to ${maxMoleculeFileBytes} bytes (${maxMoleculeFileBytes / 1024} KiB)`);
+  }
+  try {
+    const text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
+    return { text: text.replace(/^\uFEFF/, "") };
+  } catch {
+    return whole("the file is not valid UTF-8 text; save it as UTF-8 (most editors offer this under 'Save with encoding')");
+  }
+}
+
+export const modelledStates = /^(?:X\s*)?(?:1|¹)\s*(?:Σ|Sigma)\s*(?:\+|⁺)$/i;
+
+function cmPerNumber(value: unknown): number | null {
+  if (typeof value === "number") return value;
+  if (value && typeof value === "object" && "value" in value) return (value as { value: number }).value;
+  return null;
+}
+
+/** Checks no schema can express: references between fields, physics sanity, identity. */
+function semanticProblems(file: MoleculeFile, expectedId: string | null): Array<{ path: Path; message: string }> {
+  const out: Array<{ path: Path; message: string }> = [];
+  const add = (path: Path, message: string) => out.push({ path, message });
+  const sourceKeys = Object.keys(file.sources);
+  const checkSource = (path: Path, key: string) => {
+    if (!sourceKeys.includes(key)) add(path, `source "${key}" is not listed under \`sources\` (known: ${sourceKeys.join(", ") || "none"})`);
+  };
+
+  if (!idPattern.test(file.id)) add(["id"], `id "${file.id}" must be lowercase letters, digits and single dashes (no spaces, dots or slashes)`);
+  else if (expectedId !== null && file.id !== expectedId) add(["id"], `id "${file.id}" must match the file name "${expectedId}.yaml"`);
+  if (!/^\d{2,7}-\d{2}-\d$/.test(file.casNumber)) add(["casNumber"], `CAS number "${file.casNumber}" is not of the form 1234-56-7`);
+  else {
+    // CAS check digit: the last digit is Σ (position × digit) mod 10 over the others, counted from the right.
+    const digits = file.casNumber.replace(/-/g, "");
+    const body = digits.slice(0, -1).split("").reverse();
+    const sum = body.reduce((s, d, i) => s + (i + 1) * Number(d), 0);
+    if (sum % 10 !== Number(digits.at(-1))) add(["casNumber"], `CAS number "${file.casNumber}" fails its check digit (expected ${sum % 10} at the end)`);
+  }
+  if (!modelledStates.test(file.electronicState.trim())) {
+    add(["electronicState"], `electronic state "${file.electronicState}" is not modelled: only ¹Σ⁺ states (written "X 1Σ+") are; other states need spin and Λ-doubling terms and a Q branch that the model does not have yet`);
+  }
+  if (file.atoms.length !== 2) add(["atoms"], `expected 2 atoms for a diatomic molecule, got ${file.atoms.length}`);
+  file.atoms.forEach((symbol, i) => {
+    if (!isKnownElement(symbol)) add(["atoms", i], `"${symbol}" is not an element symbol (write it as in the periodic table, e.g. Cl, Br)`);
+  });
+  file.hazard.ghsPictograms.forEach((code, i) => {
+    if (file.hazard.ghsPictograms.indexOf(code) !== i) add(["hazard", "ghsPictograms", i], `${code} is listed twice`);
+  });
+
+  for (const [key, source] of Object.entries(file.sources)) {
+    if (source.url !== undefined && !/^https?:\/\/[^\s<>"']+$/i.test(source.url)) add(["sources", key, "url"], `a source address must be an https: or http: link, got "${source.url}"`);
+    if (source.doi !== undefined && !/^10\.\d{4,9}\/[^\s<>"']+$/.test(source.doi)) add(["sources", key, "doi"], `a DOI looks like 10.1016/0022-2852(79)90117-0, got "${source.doi}"`);
+  }
+
+  const speciesKeys = new Set<string>();
+  const checkMassNumbers = (path: Path, numbers: number[]) => {
+    if (numbers.length !== file.atoms.length) {
+      add(path, `expected ${file.atoms.length} mass numbers (one per atom: ${file.atoms.join(", ")}), got ${numbers.length}`);
+      return false;
+    }
+    let ok = true;
+    numbers.forEach((a, i) => {
+      const symbol = file.atoms[i];
+      if (!isKnownElement(symbol)) return;
+      const found = isotope(symbol, a);
+      if (!found) {
+        add([...path, i], `${a}${symbol} is not a known isotope (stable ones: ${stableMassNumbers(symbol).map((n) => `${n}${symbol}`).join(", ")})`);
+        ok = false;
+      } else if (found.abundance === null) {
+        add([...path, i], `${a}${symbol} has no natural abundance in the isotope library (it is not a stable isotope); only stable isotopes are modelled`);
+        ok = false;
+      }
+    });
+    return ok;
+  };
+  const references = file.species.filter((s) => s.reference === true).length;
+  if (references !== 1) add(["species"], `exactly one species must have \`reference: true\`, found ${references}`);
+  file.species.forEach((s, i) => {
+    const path = ["species", i];
+    if (checkMassNumbers([...path, "massNumbers"], s.massNumbers)) {
+      const key = s.massNumbers.join(",");
+      if (speciesKeys.has(key)) add([...path, "massNumbers"], `species ${s.massNumbers.join("/")} is listed twice`);
+      speciesKeys.add(key);
+    }
+    if (s.reference === true && !s.constants) add([...path], "the reference species needs a `constants` block (the others can be scaled from it)");
+    if (!s.constants) return;
+    const c = s.constants;
+    checkSource([...path, "constants", "source"], c.source);
+    if (!!c.equilibrium === !!c.dunham) {
+      add([...path, "constants"], "give either `equilibrium` (ωe, ωexe, Be, …) or `dunham` (Y10, Y01, …), exactly one of them");
+      return;
+    }
+    if (c.equilibrium) {
+      const e = c.equilibrium;
+      const we = cmPerNumber(e.omegaE)!;
+      const be = cmPerNumber(e.bE)!;
+      if (!(we > 0)) add([...path, "constants", "equilibrium", "omegaE"], `ωe must be above 0 cm⁻¹, got ${we}`);
+      if (!(be > 0)) add([...path, "constants", "equilibrium", "bE"], `Be (rotational constant) must be above 0 cm⁻¹, got ${be}`);
+      const wexe = e.omegaExe === undefined ? null : cmPerNumber(e.omegaExe)!;
+      // ωexe/ωe is below 0.03 for every known diatomic (H2 ≈ 0.028); a much larger ratio is a typo or a unit slip.
+      if (wexe !== null && we > 0 && (wexe < 0 || wexe > 0.1 * we)) {
+        add([...path, "constants", "equilibrium", "omegaExe"], `ωexe = ${wexe} cm⁻¹ does not make sense for ωe = ${we} cm⁻¹ (expected 0 ≤ ωexe ≤ 0.1·ωe; real molecules have under 0.03·ωe)`);
+      }
+      const de = e.dE === undefined ? null : cmPerNumber(e.dE)!;
+      if (de !== null && be > 0 && (de < 0 || de > 1e-2 * be)) add([...path, "constants", "equilibrium", "dE"], `De = ${de} cm⁻¹ does not make sense for Be = ${be} cm⁻¹ (expected 0 ≤ De ≤ 0.01·Be)`);
+    } else if (c.dunham) {
+      const d = c.dunham;
+      const y10 = d.Y10 === undefined ? null : cmPerNumber(d.Y10);
+      const y01 = d.Y01 === undefined ? null : cmPerNumber(d.Y01);
+      if (y10 === null || !(y10 > 0)) add([...path, "constants", "dunham", "Y10"], `Y10 (≈ ωe) is required and must be above 0 cm⁻¹`);
+      if (y01 === null || !(y01 > 0)) add([...path, "constants", "dunham", "Y01"], `Y01 (≈ Be, the rotational constant) is required and must be above 0 cm⁻¹`);
+      const y20 = d.Y20 === undefined ? null : cmPerNumber(d.Y20);
+      if (y10 !== null && y10 > 0 && y20 !== null && (y20 > 0 || -y20 > 0.1 * y10)) {
+        add([...path, "constants", "dunham", "Y20"], `Y20 = ${y20} cm⁻¹ (−ωexe) does not make sense for Y10 = ${y10} cm⁻¹ (expected −0.1·Y10 ≤ Y20 ≤ 0)`);
+      }
+    }
+  });
+  const checkBand = (path: Path, text: string) => {
+    try {
+      parseBand(text);
+    } catch (error) {
+      if (error instanceof CoreInputError) add(path, error.message);
+      else throw error;
+    }
+  };
+  const checkSpeciesRef = (path: Path, numbers: number[]) => {
+    if (!speciesKeys.has(numbers.join(","))) add(path, `species ${numbers.join("/")} is not among the \`species\` of this file`);
+  };
+  (file.intensity ?? []).forEach((entry, i) => {
+    const path = ["intensity", i];
+    checkSource([...path, "source"], entry.source);
+    checkSpeciesRef([...path, "massNumbers"], entry.massNumbers);
+    checkBand([...path, "band"], entry.band);
+    if ((entry.transitionDipoleDebye === undefined) === (entry.bandStrength === undefined)) {
+      add(path, "give either `transitionDipoleDebye` or `bandStrength`, exactly one of them");
+    }
+    if (entry.transitionDipoleDebye !== undefined && !(cmPerNumber(entry.transitionDipoleDebye)! > 0)) add([...path, "transitionDipoleDebye"], "a transition dipole must be above 0 debye");
+    if (entry.bandStrength) {
+      if (!(cmPerNumber(entry.bandStrength.cmPerMolecule)! > 0)) add([...path, "bandStrength", "cmPerMolecule"], "a band strength must be above 0 cm/molecule");
+      if (!(entry.bandStrength.temperatureK > 0)) add([...path, "bandStrength", "temperatureK"], "the band strength's temperature must be above 0 K");
+    }
+  });
+  (file.referenceLines ?? []).forEach((group, i) => {
+    const path = ["referenceLines", i];
+    checkSource([...path, "source"], group.source);
+    checkSpeciesRef([...path, "massNumbers"], group.massNumbers);
+    checkBand([...path, "band"], group.band);
+    group.lines.forEach((line, j) => {
+      if (!(line.wavenumber > 0)) add([...path, "lines", j, "wavenumber"], "a line position must be above 0 cm⁻¹");
+    });
+  });
+  return out;
+}
+
+export type ParseResult = { ok: true; molecule: Molecule; data: MoleculeFile } | { ok: false; problems: Problem[] };
+
+/**
+ * Validates one molecule file's bytes. `file` is the path shown in messages; `expectedId` is the
+ * file's base name (null to skip the name check, e.g. for text piped in).
+ */
+export function parseMoleculeBytes(bytes: Uint8Array, file: string, expectedId: string | null): ParseResult {
+  const decoded = decode(bytes, file);
+  if ("problem" in decoded) return { ok: false, problems: [decoded.problem] };
+  return parseMoleculeText(decoded.text, file, expectedId);
+}
+
+export function parseMoleculeText(text: string, file: string, expectedId: string | null): ParseResult {
+  const counter = new LineCounter();
+  const doc = parseDocument(text, { lineCounter: counter, uniqueKeys: true, prettyErrors: false, version: "1.2", strict: true });
+  const problems: Problem[] = [];
+  for (const error of [...doc.errors, ...doc.warnings]) {
+    const pos = error.linePos?.[0];
+    const first = error.message.split("\n")[0].replace(/ at line \d+, column \d+.*$/, "");
+    const message = error.code === "DUPLICATE_KEY" ? `a key appears twice in the same mapping (${first})` : `YAML syntax: ${first}`;
+    problems.push({ file, line: pos?.line ?? null, column: pos?.col ?? null, path: "", message });
+  }
+  if (problems.length) return { ok: false, problems };
+  if (!isMap(doc.contents)) {
+    const pos = doc.contents?.range ? counter.linePos(doc.contents.range[0]) : null;
+    return {
+      ok: false,
+      problems: [{ file, line: pos?.line ?? 1, column: pos?.col ?? 1, path: "", message: "the file must be a mapping of fields (id: …, name: …), not a single value or a list" }],
+    };
+  }
+  let raw: unknown;
+  try {
+    raw = doc.toJS({ maxAliasCount: maxYamlAliases });
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    return { ok: false, problems: [{ file, line: null, column: null, path: "", message: `YAML aliases expand too far (${message}); write the values out, at most ${maxYamlAliases} aliases per file` }] };
+  }
+  const located = (path: Path, message: string): Problem => {
+    const pos = locate(doc, counter, path);
+    return { file, line: pos?.line ?? null, column: pos?.column ?? null, path: formatPath(path), message };
+  };
+  const parsed = moleculeFileSchema.safeParse(raw);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) {
+      const path = issue.path as Path;
+      if (issue.code === "unrecognized_keys") {
+        const messages = issue.message.split("; unknown field ");
+        issue.keys.forEach((key, i) => problems.push(located([...path, key], i === 0 ? messages[0] : `unknown field ${messages[i]}`)));
+      } else problems.push(located(path, issue.message));
+    }
+    return { ok: false, problems: sortProblems(problems) };
+  }
+  for (const { path, message } of semanticProblems(parsed.data, expectedId)) problems.push(located(path, message));
+  if (problems.length) return { ok: false, problems: sortProblems(problems) };
+  return { ok: true, molecule: buildMolecule(parsed.data, file), data: parsed.data };
+}
+
+function sortProblems(problems: Problem[]): Problem[] {
+  return problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
+}

@@ -1,0 +1,157 @@
+import { z } from "zod";
+import { describeInput, nearestKnown } from "./describeInput.ts";
+
+// The molecule file's shape. Every object is strict (unknown keys are errors with a suggestion),
+// every number says its unit in the message when it is wrong.
+
+function mapping<Shape extends z.ZodRawShape>(shape: Shape, what: string) {
+  const known = Object.keys(shape);
+  return z.strictObject(shape, {
+    error: (issue) => {
+      if (issue.code === "unrecognized_keys") {
+        return issue.keys
+          .map((key) => {
+            const near = nearestKnown(key, known);
+            return `unknown field "${key}"${near ? ` (did you mean "${near}"?)` : ""}; ${what} takes: ${known.join(", ")}`;
+          })
+          .join("; ");
+      }
+      if (issue.code === "invalid_type") return `expected ${what} (key: value pairs), got ${describeInput(issue.input)}`;
+      return undefined;
+    },
+  });
+}
+
+function numberIn(unit: string) {
+  return z.number({ error: (issue) => `expected a number in ${unit}, got ${describeInput(issue.input)}` });
+}
+
+function text(what: string) {
+  return z
+    .string({ error: (issue) => `expected ${what} as text, got ${describeInput(issue.input)}` })
+    .trim()
+    .min(1, { error: `${what} must not be empty` });
+}
+
+function listOf<T extends z.ZodType>(item: T, what: string) {
+  return z.array(item, { error: (issue) => `expected a list of ${what}, got ${describeInput(issue.input)}` });
+}
+
+/** A constant: a plain number, or { value, uncertainty } with one standard uncertainty. */
+function measuredIn(unit: string) {
+  return z.union(
+    [numberIn(unit), mapping({ value: numberIn(unit), uncertainty: numberIn(unit).nonnegative({ error: "an uncertainty cannot be negative" }) }, "a value with its uncertainty")],
+    { error: (issue) => `expected a number in ${unit} or { value, uncertainty }, got ${describeInput(issue.input)}` },
+  );
+}
+
+const sourceKey = text("a source key (one of the keys under `sources`)");
+const bandText = z
+  .string({ error: (issue) => `expected a band like "1-0" (v'-v''), got ${describeInput(issue.input)}` })
+  .regex(/^\d{1,2}-\d{1,2}$/, { error: `expected a band like "1-0" (v'-v'')` });
+const massNumbers = listOf(
+  z.number({ error: (i) => `expected a mass number (a whole number), got ${describeInput(i.input)}` }).int({ error: "a mass number is a whole number" }).positive({ error: "a mass number is positive" }),
+  "mass numbers, one per atom",
+);
+
+const cm = "cm⁻¹";
+export const equilibriumSchema = mapping(
+  {
+    omegaE: measuredIn(cm),
+    omegaExe: measuredIn(cm).optional(),
+    omegaEye: measuredIn(cm).optional(),
+    omegaEze: measuredIn(cm).optional(),
+    bE: measuredIn(cm),
+    alphaE: measuredIn(cm).optional(),
+    gammaE: measuredIn(cm).optional(),
+    dE: measuredIn(cm).optional(),
+    betaE: measuredIn(cm).optional(),
+    hE: measuredIn(cm).optional(),
+  },
+  "the equilibrium constants",
+);
+
+const dunhamKey = z.string().regex(/^Y\d\d$/, { error: "Dunham coefficients are named Y followed by k and l, e.g. Y10, Y01, Y02" });
+export const dunhamSchema = z.record(dunhamKey, measuredIn(cm), {
+  error: (issue) => `expected Dunham coefficients (Y10: …, Y01: …), got ${describeInput(issue.input)}`,
+});
+
+export const constantsSchema = mapping(
+  { source: sourceKey, equilibrium: equilibriumSchema.optional(), dunham: dunhamSchema.optional() },
+  "a constants block",
+);
+
+const speciesSchema = mapping(
+  { massNumbers, reference: z.boolean({ error: (i) => `expected true or false, got ${describeInput(i.input)}` }).optional(), constants: constantsSchema.optional() },
+  "a species",
+);
+
+const sourceSchema = mapping(
+  {
+    citation: text("the full citation (authors, title, journal, volume, pages, year)"),
+    url: text("a web address").optional(),
+    doi: text("a DOI").optional(),
+  },
+  "a source",
+);
+
+const intensitySchema = mapping(
+  {
+    source: sourceKey,
+    massNumbers,
+    band: bandText,
+    transitionDipoleDebye: measuredIn("debye").optional(),
+    bandStrength: mapping(
+      { cmPerMolecule: measuredIn("cm/molecule"), temperatureK: numberIn("K") },
+      "a band strength",
+    ).optional(),
+    hermanWallis: mapping({ a1: numberIn("units of m (dimensionless)"), a2: numberIn("units of m² (dimensionless)") }, "Herman–Wallis coefficients").optional(),
+  },
+  "an intensity entry",
+);
+
+const referenceLineSchema = mapping(
+  {
+    label: z
+      .string({ error: (i) => `expected a line label like "R(0)" or "P(1)", got ${describeInput(i.input)}` })
+      .regex(/^[PR]\(\d{1,3}\)$/, { error: `expected a line label like "R(0)" or "P(1)"` }),
+    wavenumber: numberIn("cm⁻¹ (vacuum)"),
+    uncertainty: numberIn("cm⁻¹").nonnegative({ error: "an uncertainty cannot be negative" }).optional(),
+  },
+  "a reference line",
+);
+
+export const moleculeFileSchema = mapping(
+  {
+    id: text("the molecule id"),
+    name: text("the molecule's name"),
+    formula: text("the formula"),
+    casNumber: text("the CAS registry number"),
+    aliases: listOf(text("an alias"), "other names").default([]),
+    electronicState: text("the electronic state, e.g. \"X 1Σ+\""),
+    atoms: listOf(text("an element symbol"), "element symbols"),
+    hazard: mapping(
+      {
+        ghsPictograms: listOf(
+          z.string({ error: (i) => `expected a GHS pictogram code like GHS06, got ${describeInput(i.input)}` }).regex(/^GHS0[1-9]$/, { error: "expected a GHS pictogram code GHS01 to GHS09" }),
+          "GHS pictogram codes",
+        ),
+        sentences: listOf(text("a hazard sentence"), "hazard sentences").min(1, { error: "give at least one plain hazard sentence" }),
+      },
+      "the hazard note",
+    ),
+    sources: z.record(z.string().regex(/^[A-Za-z][A-Za-z0-9_-]{0,40}$/, { error: "a source key is a short word of letters, digits, - or _" }), sourceSchema, {
+      error: (issue) => `expected the sources as a mapping of key: { citation, url, doi }, got ${describeInput(issue.input)}`,
+    }),
+    species: listOf(speciesSchema, "species").min(1, { error: "give at least the reference species" }),
+    intensity: listOf(intensitySchema, "intensity entries").optional(),
+    referenceLines: listOf(
+      mapping({ source: sourceKey, massNumbers, band: bandText, lines: listOf(referenceLineSchema, "reference lines").min(1) }, "a group of reference lines"),
+      "groups of reference lines",
+    ).optional(),
+  },
+  "a molecule file",
+);
+
+export type MoleculeFile = z.infer<typeof moleculeFileSchema>;
+export type Measured = number | { value: number; uncertainty: number };
