@@ -206,7 +206,7 @@ export function parseMoleculeBytes(bytes: Uint8Array, file: string, expectedId: 
 
 export function parseMoleculeText(text: string, file: string, expectedId: string | null): ParseResult {
   const counter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter: counter, uniqueKeys: true, prettyErrors: false, version: "1.2", strict: true });
+  const doc = parseDocument(text, { lineCounter: counter, uniqueKeys: true, prettyErrors: true, version: "1.2", strict: true });
   const problems: Problem[] = [];
   for (const error of [...doc.errors, ...doc.warnings]) {
     const pos = error.linePos?.[0];

@@ -1,0 +1,113 @@
+import { execFileSync, spawnSync } from "node:child_process";
+import { join } from "node:path";
+import { describe, expect, it } from "vitest";
+import { runCli } from "../lib/cli/main.ts";
+
+const root = join(import.meta.dirname, "..");
+const cli = (...args: string[]) => runCli(args);
+
+describe("bandatlas lines", () => {
+  it("prints the JSON contract for CO", async () => {
+    const { stdout, exitCode } = await cli("lines", "co", "--format", "json");
+    expect(exitCode).toBe(0);
+    const doc = JSON.parse(stdout);
+    expect(doc).toMatchObject({ molecule: "co", species: "12C16O", band: "1-0", temperatureK: 296 });
+    const keys = ["label", "branch", "jLower", "jUpper", "wavenumber", "wavenumberUncertainty", "wavelengthVacuumUm", "wavelengthAirNm", "lowerStateEnergy", "relativeIntensity", "lineIntensity", "populationFraction"];
+    for (const line of doc.lines) expect(Object.keys(line)).toEqual(keys);
+    const r0 = doc.lines.find((l: { label: string }) => l.label === "R(0)");
+    // CRC Handbook, Maki table of CO 1-0 wavenumbers: R(0) = 2147.081132 cm⁻¹ (read directly).
+    expect(r0).toMatchObject({ branch: "R", jLower: 0, jUpper: 1 });
+    expect(Math.abs(r0.wavenumber - 2147.081132)).toBeLessThan(5e-4);
+    expect(r0.wavelengthVacuumUm).toBeCloseTo(1e4 / r0.wavenumber, 12);
+  });
+  it("prints CSV with units in the header for another species, band and temperature", async () => {
+    const { stdout, exitCode } = await cli("lines", "hcl", "--species", "H37Cl", "--band", "2-0", "--temperature", "500", "--format", "csv");
+    expect(exitCode).toBe(0);
+    const [header, ...rows] = stdout.trim().split("\n");
+    expect(header).toContain("wavenumber (cm-1)");
+    expect(header).toContain("wavelengthAir (nm)");
+    // The HCl first overtone lies near 5668 cm⁻¹ for H35Cl (Huber & Herzberg 1979, from memory); H37Cl ~4 cm⁻¹ lower.
+    const wavenumbers = rows.map((r) => Number(r.split(",")[4]));
+    expect(Math.min(...wavenumbers)).toBeGreaterThan(5000);
+    expect(Math.max(...wavenumbers)).toBeLessThan(6000);
+    const gap = wavenumbers.map((w, i) => [w, wavenumbers[i + 1] - w]).reduce((a, b) => (b[1] > a[1] ? b : a));
+    expect(gap[0] + gap[1] / 2).toBeGreaterThan(5655);
+    expect(gap[0] + gap[1] / 2).toBeLessThan(5675);
+  });
+  it("prints a readable table whose header carries the units", async () => {
+    const { stdout } = await cli("lines", "co");
+    expect(stdout).toMatch(/ν̃ \/ cm⁻¹/);
+    expect(stdout).toMatch(/λ vac \/ µm/);
+    expect(stdout).toMatch(/R\(0\)\s+2147\.081/);
+  });
+  const bad: Array<[string[], RegExp]> = [
+    [["lines", "xenon"], /unknown molecule "xenon"; the atlas has: co/],
+    [["lines", "co", "--species", "14C16O"], /no species "14C16O"; it has: 12C16O/],
+    [["lines", "co", "--band", "1-1"], /upper level v' must be above the lower level/],
+    [["lines", "co", "--band", "0-1"], /upper level v' must be above the lower level/],
+    [["lines", "co", "--band", "one"], /not of the form v'-v''/],
+    [["lines", "co", "--temperature", "0"], /must be above 0 K/],
+    [["lines", "co", "--temperature", "-20"], /must be above 0 K/],
+    [["lines", "co", "--temperature", "warm"], /expects a number in K, got "warm"/],
+    [["lines", "co", "--format", "xml"], /--format xml is not one of: table, csv, json/],
+    [["lines", "co", "--frequency"], /unknown option --frequency/],
+    [["lines"], /which molecule\?/],
+    [["frobnicate"], /unknown command "frobnicate"/],
+    [["find", "abc"], /wavenumber expects a number in cm-1, got "abc"/],
+    [["find", "2143", "--window", "0"], /half-width must be above 0/],
+  ];
+  for (const [args, pattern] of bad) {
+    it(`refuses ${args.join(" ")} with a plain message`, async () => {
+      const { stdout, stderr, exitCode } = await cli(...args);
+      expect(exitCode).toBeGreaterThan(0);
+      expect(stdout).toBe("");
+      expect(stderr).toMatch(pattern);
+      expect(stderr).not.toMatch(/\n\s+at /);
+    });
+  }
+});
+
+describe("bandatlas find", () => {
+  it("lists the lines near 2143.3 cm⁻¹ nearest first", async () => {
+    const { stdout, exitCode } = await cli("find", "2143.3", "--window", "0.6", "--format", "json");
+    expect(exitCode).toBe(0);
+    const { query, matches } = JSON.parse(stdout);
+    expect(query).toMatchObject({ wavenumber: 2143.3, window: 0.6, temperatureK: 296 });
+    expect(matches.length).toBeGreaterThan(0);
+    for (let i = 1; i < matches.length; i++) expect(Math.abs(matches[i].offset)).toBeGreaterThanOrEqual(Math.abs(matches[i - 1].offset));
+    for (const m of matches) {
+      expect(Math.abs(m.offset)).toBeLessThanOrEqual(0.6);
+      expect(Object.keys(m)).toEqual(["molecule", "species", "band", "label", "wavenumber", "relativeIntensity", "offset"]);
+    }
+  });
+  it("finds CO R(0) when asked at its published position", async () => {
+    // CRC Handbook, Maki CO 1-0 table: R(0) = 2147.081132 cm⁻¹.
+    const { stdout } = await cli("find", "2147.0811", "--window", "0.01", "--format", "json");
+    expect(JSON.parse(stdout).matches[0]).toMatchObject({ molecule: "co", species: "12C16O", band: "1-0", label: "R(0)" });
+  });
+});
+
+describe("bandatlas check", () => {
+  it("passes every shipped molecule file", async () => {
+    const { stdout, exitCode } = await cli("check");
+    expect(exitCode).toBe(0);
+    expect(stdout).toMatch(/valid: .*co.*hcl/);
+  });
+  it("exits 1 with one line per problem for a bad file", async () => {
+    const { stderr, exitCode } = await cli("check", join(root, "test/fixtures/bad/unknown-key.yaml"), join(root, "test/fixtures/bad/zero-b.yaml"));
+    expect(exitCode).toBe(1);
+    expect(stderr.trim().split("\n")).toHaveLength(3);
+  });
+});
+
+describe("the installed command", () => {
+  it("runs through bin/bandatlas.js with help and exit codes", () => {
+    const help = execFileSync(process.execPath, [join(root, "bin/bandatlas.js"), "--help"], { encoding: "utf8" });
+    expect(help).toMatch(/lines\s+predicted P and R lines/);
+    const linesHelp = execFileSync(process.execPath, [join(root, "bin/bandatlas.js"), "lines", "--help"], { encoding: "utf8" });
+    expect(linesHelp).toMatch(/--species/);
+    const failed = spawnSync(process.execPath, [join(root, "bin/bandatlas.js"), "lines", "co", "--temperature", "0"], { encoding: "utf8" });
+    expect(failed.status).toBe(2);
+    expect(failed.stderr).toMatch(/above 0 K/);
+  });
+});
