@@ -2,6 +2,7 @@ import { CoreInputError } from "./coreInputError.ts";
 import type { Band } from "./types.ts";
 
 export function bandLabel(band: Band): string {
+  if (band.label !== undefined) return band.label;
   return `${band.vUpper}-${band.vLower}`;
 }
 
@@ -19,6 +20,7 @@ export function parseBand(text: string): Band {
 }
 
 export function sameBand(a: Band, b: Band): boolean {
+  if (a.label !== undefined || b.label !== undefined) return a.label === b.label;
   return a.vUpper === b.vUpper && a.vLower === b.vLower;
 }
 

@@ -1,4 +1,5 @@
 // Plain data shared by the core, the atlas and every renderer. Units live in the type aliases.
+import type { LinearSpeciesData } from "./linearTypes.ts";
 
 /** Wavenumber in cm⁻¹ (vacuum). */
 export type WavenumberCm = number;
@@ -40,6 +41,8 @@ export type EquilibriumUncertainties = Partial<Record<keyof EquilibriumConstants
 export interface Band {
   vUpper: number;
   vLower: number;
+  /** A linear molecule's band name "upper-lower" from its file (then vUpper/vLower index its states). */
+  label?: string;
 }
 
 export interface HermanWallisCoefficients {
@@ -82,6 +85,8 @@ export interface SpeciesModel {
   constantsSourceKey: string;
   intensities: BandIntensityData[];
   referenceLines: ReferenceLine[];
+  /** Present for a linear polyatomic molecule: its states and bands replace the Dunham table. */
+  linear?: LinearSpeciesData;
 }
 
 export type Branch = "P" | "R";

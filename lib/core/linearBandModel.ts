@@ -1,0 +1,60 @@
+import { bandLabel, sameBand } from "./band.ts";
+import type { BandModel, PositionUncertaintyTerm } from "./bandModel.ts";
+import { CoreInputError } from "./coreInputError.ts";
+import { linearPartitionFunction } from "./linearPartitionFunction.ts";
+import { linearStateExpansion } from "./linearStateTerms.ts";
+import type { LinearState } from "./linearTypes.ts";
+import { nuclearSpinWeight } from "./nuclearSpinWeights.ts";
+import type { Band, SpeciesModel, TemperatureK } from "./types.ts";
+
+/** c_l of each state constant (G, B, −D, H): l and the uncertainty; the sign does not matter for σ². */
+function stateUncertainties(state: LinearState): Array<{ l: number; sigma: number }> {
+  return [
+    { l: 0, sigma: state.termEnergy.uncertaintyCm },
+    { l: 1, sigma: state.b.uncertaintyCm },
+    { l: 2, sigma: state.d.uncertaintyCm },
+    { l: 3, sigma: state.h.uncertaintyCm },
+  ];
+}
+
+/**
+ * Position variance of ν = E'(J') − E''(J'') with every state constant independent (the sources
+ * give no correlations). When upper and lower are the same state (never for a real band) the
+ * terms still combine correctly because each constant appears once with both weights.
+ */
+function linearUncertaintyTerms(upper: LinearState, lower: LinearState): PositionUncertaintyTerm[] {
+  const terms: PositionUncertaintyTerm[] = [];
+  for (const { l, sigma } of stateUncertainties(upper)) terms.push({ l, upperWeight: 1, lowerWeight: upper === lower ? 1 : 0, variance: sigma * sigma });
+  if (lower !== upper) for (const { l, sigma } of stateUncertainties(lower)) terms.push({ l, upperWeight: 0, lowerWeight: 1, variance: sigma * sigma });
+  return terms;
+}
+
+/** The band model of one Σ–Σ band of a linear molecule, from the two states' own constants. */
+export function linearBandModel(
+  species: SpeciesModel,
+  band: Band,
+  options: { temperatureK: TemperatureK; partitionFunction?: number },
+): BandModel {
+  const linear = species.linear!;
+  const entry = linear.bands.find((b) => sameBand(b.band, band));
+  if (!entry) {
+    throw new CoreInputError(
+      `${species.label} has no band ${bandLabel(band)}; its file lists: ${linear.bands.map((b) => `${bandLabel(b.band)} (${b.name})`).join(", ")}`,
+    );
+  }
+  const upper = linear.states[entry.upperStateIndex];
+  const lower = linear.states[entry.lowerStateIndex];
+  const ground = linear.states[linear.groundStateIndex];
+  return {
+    species: species.label,
+    band: entry.band,
+    lower: linearStateExpansion(lower),
+    upper: linearStateExpansion(upper),
+    zeroEnergy: ground.termEnergy.valueCm,
+    uncertaintyTerms: linearUncertaintyTerms(upper, lower),
+    partitionFunction: options.partitionFunction ?? linearPartitionFunction(linear, options.temperatureK),
+    lowerWeight: (j) => nuclearSpinWeight(linear.nuclearSpinWeights, lower.symmetry, j),
+    intensity: species.intensities.find((d) => sameBand(d.band, entry.band)) ?? null,
+    abundance: species.abundance,
+  };
+}
