@@ -1,0 +1,106 @@
+import PDFDocument from "pdfkit";
+import type { AtlasEntry } from "../atlas/index.ts";
+import type { Molecule } from "../molecules/index.ts";
+import { buildDate, type SheetBuildIdentity } from "./buildIdentity.ts";
+import { drawLegendLine } from "./drawLegend.ts";
+import { drawTableHead, drawTableRows, tableHeadHeightPt, tableRowHeightPt } from "./drawLineTable.ts";
+import { drawCautionBox, drawContinuationHeader, drawSheetFooter, drawSheetHeader, footerHeight } from "./drawSheetParts.ts";
+import { drawStickPlot } from "./drawStickPlot.ts";
+import { paperSizes, type PaperName } from "./paper.ts";
+import { sheetContent, type SheetContent } from "./sheetContent.ts";
+import { sheetFont } from "./sheetFonts.ts";
+import { ink, marginPt, sheetFonts } from "./sheetStyle.ts";
+
+export interface BenchSheetRequest {
+  molecule: Molecule;
+  /** The atlas entry of one species at one temperature, as the build computed it. */
+  entry: AtlasEntry;
+  paper: PaperName;
+  build: SheetBuildIdentity;
+  /** Calibration-grade line labels of the fundamental, once the molecule files flag them; omit until then. */
+  calibrationLineLabels?: readonly string[];
+}
+
+const plotHeightPt = 178;
+
+function newDocument(content: SheetContent, paper: PaperName, build: SheetBuildIdentity): PDFKit.PDFDocument {
+  const size = paperSizes[paper];
+  const date = buildDate(build);
+  // A fixed creation date makes PDFKit's file ID (an MD5 of the info dictionary) fixed too, and
+  // the font subset tags come from the font's order of use, so equal inputs give equal bytes.
+  const doc = new PDFDocument({
+    size: [size.widthPt, size.heightPt],
+    margin: 0,
+    autoFirstPage: false,
+    bufferPages: true,
+    displayTitle: true,
+    lang: "en",
+    info: {
+      Title: content.documentTitle,
+      Subject: "Predicted vibration–rotation lines; not a certificate",
+      Creator: `bandatlas ${build.version} (${build.commit})`,
+      Producer: "bandatlas with PDFKit",
+      CreationDate: date,
+      ModDate: date,
+    },
+  });
+  doc.registerFont(sheetFonts.regular, sheetFont("regular"));
+  doc.registerFont(sheetFonts.bold, sheetFont("bold"));
+  return doc;
+}
+
+function lay(doc: PDFKit.PDFDocument, content: SheetContent, paper: PaperName): void {
+  const { widthPt, heightPt } = paperSizes[paper];
+  const x = marginPt;
+  const width = widthPt - 2 * marginPt;
+  const bottom = heightPt - marginPt * 0.75;
+  doc.addPage();
+  const footerTop = bottom - footerHeight(doc, content, width) - 6;
+
+  let y = drawSheetHeader(doc, content, x, marginPt * 0.75, width);
+  y = drawCautionBox(doc, content, x, y, width);
+  drawStickPlot(doc, { x, y, width, height: plotHeightPt }, content);
+  y += plotHeightPt + 4;
+  for (const note of [content.otherBandsNote, content.calibrationNote]) {
+    if (!note) continue;
+    doc.font(sheetFonts.regular).fontSize(8).fillColor(ink);
+    const h = doc.heightOfString(note, { width });
+    doc.text(note, x, y, { width });
+    y += h + 2;
+  }
+  y = drawLegendLine(doc, x, y + 2, width);
+
+  let index = 0;
+  while (index < content.rows.length) {
+    const fit = Math.max(1, Math.floor((footerTop - y - tableHeadHeightPt) / tableRowHeightPt));
+    const rows = content.rows.slice(index, index + fit);
+    drawTableHead(doc, x, y, width);
+    drawTableRows(doc, rows, x, y + tableHeadHeightPt, width, index);
+    index += rows.length;
+    if (index < content.rows.length) {
+      doc.addPage();
+      y = drawContinuationHeader(doc, content, x, marginPt * 0.75, width);
+    }
+  }
+
+  const range = doc.bufferedPageRange();
+  for (let i = 0; i < range.count; i++) {
+    doc.switchToPage(range.start + i);
+    drawSheetFooter(doc, content, x, bottom, width, i + 1, range.count);
+  }
+}
+
+/** The PDF bench sheet of one molecule, species, temperature and paper size, as bytes. */
+export function renderBenchSheet(request: BenchSheetRequest): Promise<Buffer> {
+  const content = sheetContent(request);
+  const doc = newDocument(content, request.paper, request.build);
+  const chunks: Buffer[] = [];
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on("data", (chunk: Buffer) => chunks.push(chunk));
+    doc.on("end", () => resolve(Buffer.concat(chunks)));
+    doc.on("error", reject);
+  });
+  lay(doc, content, request.paper);
+  doc.end();
+  return done;
+}

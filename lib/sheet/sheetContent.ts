@@ -1,0 +1,178 @@
+import type { AtlasBand, AtlasEntry } from "../atlas/index.ts";
+import type { Branch, Line } from "../core/index.ts";
+import { fixed, lineCells, significant } from "../format/index.ts";
+import type { Molecule } from "../molecules/index.ts";
+import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
+import { displayText, safeLink } from "./displayText.ts";
+
+/** Lines at least this fraction of the band's strongest are marked strong in the table. */
+export const strongLineFraction = 0.5;
+
+export interface SheetLineCell {
+  label: string;
+  wavenumber: string;
+  wavelengthVacuumUm: string;
+  relativeIntensity: string;
+  strong: boolean;
+}
+
+/** One row of the table: P(J'') and R(J'') of the same lower level side by side. */
+export interface SheetTableRow {
+  jLower: number;
+  p: SheetLineCell | null;
+  r: SheetLineCell | null;
+}
+
+export interface SheetStick {
+  wavenumber: number;
+  relativeIntensity: number;
+  branch: Branch;
+}
+
+export interface SheetSource {
+  key: string;
+  roles: string[];
+  citation: string;
+  link: string | null;
+  /** The address as printed (links only for http(s); other addresses are printed as text). */
+  address: string | null;
+}
+
+/** Everything drawn on a sheet, already formatted: the drawing code adds no digits of its own. */
+export interface SheetContent {
+  title: string;
+  formula: string;
+  species: string;
+  bandText: string;
+  temperatureText: string;
+  bandOriginText: string;
+  summaryText: string;
+  buildText: string;
+  caution: { pictograms: string[]; sentences: string[]; deferral: string };
+  sticks: SheetStick[];
+  bandOrigin: number;
+  rows: SheetTableRow[];
+  otherBandsNote: string | null;
+  calibrationNote: string | null;
+  sources: SheetSource[];
+  modelText: string;
+  accuracyText: string;
+  documentTitle: string;
+}
+
+export interface SheetContentInput {
+  molecule: Molecule;
+  entry: AtlasEntry;
+  build: SheetBuildIdentity;
+  /**
+   * Labels ("R(3)", "P(5)") of the fundamental's lines flagged calibration-grade. Left out until
+   * the molecule files carry those flags; when given, the sheet names them under the table.
+   */
+  calibrationLineLabels?: readonly string[];
+}
+
+export const cautionDeferral =
+  "This sheet predicts a spectrum; it is not a safety document. Before handling the gas follow the supplier's safety data sheet, local codes and your lab's safety officer.";
+
+function cellOf(line: Line): SheetLineCell {
+  const c = lineCells(line);
+  return { label: line.label, wavenumber: c.wavenumber, wavelengthVacuumUm: c.wavelengthVacuumUm, relativeIntensity: c.relativeIntensity, strong: line.relativeIntensity >= strongLineFraction };
+}
+
+export function tableRows(lines: Line[]): SheetTableRow[] {
+  const byJ = new Map<number, SheetTableRow>();
+  for (const line of lines) {
+    let row = byJ.get(line.jLower);
+    if (!row) byJ.set(line.jLower, (row = { jLower: line.jLower, p: null, r: null }));
+    if (line.branch === "P") row.p = cellOf(line);
+    else row.r = cellOf(line);
+  }
+  return [...byJ.values()].sort((a, b) => a.jLower - b.jLower);
+}
+
+function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number): SheetSource[] {
+  const model = molecule.species[speciesIndex].model;
+  const roles = new Map<string, string[]>();
+  const add = (key: string, role: string) => {
+    const list = roles.get(key) ?? [];
+    if (!list.includes(role)) list.push(role);
+    roles.set(key, list);
+  };
+  add(model.constantsSourceKey, model.constantsOrigin === "cited" ? "constants" : `constants of ${molecule.species[0].model.label}`);
+  for (const i of model.intensities) if (i.band.vUpper === 1 && i.band.vLower === 0) add(i.sourceKey, "intensities");
+  for (const r of entry.residuals) add(r.reference.sourceKey, "measured lines");
+  return [...roles.entries()].map(([key, list]) => {
+    const source = molecule.sources.find((s) => s.key === key);
+    const link = safeLink(source?.url);
+    const address = source?.doi ? `doi:${displayText(source.doi)}` : source?.url ? displayText(source.url) : null;
+    return {
+      key: displayText(key),
+      roles: list,
+      citation: source ? displayText(source.citation) : `(source "${displayText(key)}" is not listed in the molecule file)`,
+      link: source?.doi ? safeLink(`https://doi.org/${source.doi.trim()}`) ?? link : link,
+      address,
+    };
+  });
+}
+
+function accuracyOf(entry: AtlasEntry, lines: Line[]): string {
+  const checked = entry.residuals.filter((r) => r.predictedMinusMeasured !== null);
+  const largestUncertainty = Math.max(0, ...lines.map((l) => l.wavenumberUncertainty));
+  const propagated =
+    largestUncertainty > 0 ? ` Position uncertainty propagated from the constants' uncertainties: at most ±${significant(largestUncertainty, 2)} cm⁻¹ in this table.` : "";
+  if (!checked.length) return `Not checked against measured lines (the molecule file cites none for this species).${propagated}`;
+  let worst = checked[0];
+  for (const r of checked) if (Math.abs(r.predictedMinusMeasured!) > Math.abs(worst.predictedMinusMeasured!)) worst = r;
+  const bands = [...new Set(checked.map((r) => `${r.reference.band.vUpper}-${r.reference.band.vLower}`))].join(", ");
+  return (
+    `Checked against ${checked.length} measured line${checked.length === 1 ? "" : "s"} (band ${bands}); largest |predicted − measured| = ` +
+    `${significant(Math.abs(worst.predictedMinusMeasured!), 2)} cm⁻¹ at ${displayText(worst.reference.label)}.${propagated}`
+  );
+}
+
+function otherBandsNoteOf(entry: AtlasEntry): string | null {
+  const shown = entry.bands.filter((b: AtlasBand) => b.kind !== "fundamental" && b.shownWithFundamental);
+  if (!shown.length) return null;
+  const parts = shown.map((b) => `${b.label}${b.strengthRelativeToFundamental !== null ? ` (strongest line ${significant(b.strengthRelativeToFundamental, 2)} of the fundamental's)` : ""}`);
+  return `At ${entry.temperatureK} K the hot band${shown.length === 1 ? "" : "s"} ${parts.join(", ")} also show${shown.length === 1 ? "s" : ""} in a spectrum; only the fundamental is drawn and listed here.`;
+}
+
+export function sheetContent(input: SheetContentInput): SheetContent {
+  const { molecule, entry, build } = input;
+  const speciesIndex = molecule.species.findIndex((s) => s.model.label === entry.species);
+  if (speciesIndex < 0) throw new SheetInputError(`${displayText(molecule.name)} has no species "${entry.species}"`);
+  const fundamental = entry.bands.find((b) => b.kind === "fundamental");
+  if (!fundamental || fundamental.lines.lines.length === 0) throw new SheetInputError(`${displayText(molecule.name)} ${entry.species}: the atlas entry has no fundamental band lines`);
+  const bandLines = fundamental.lines;
+  const model = molecule.species[speciesIndex].model;
+  const constants = model.constantsOrigin === "cited" ? `constants cited for ${model.label}` : `constants scaled from ${molecule.species[0].model.label} by Dunham's isotope relations`;
+  const intensity =
+    bandLines.intensityOrigin === null ? "relative intensities only (no cited band strength or dipole)" : `absolute intensities from ${bandLines.intensityOrigin.replace(/-/g, " ")} dipole data`;
+  const title = displayText(molecule.name);
+  const temperatureText = `T = ${entry.temperatureK} K (${fixed(entry.temperatureK - 273.15, 2).replace(/\.?0+$/, "")} °C)`;
+  const calibration = input.calibrationLineLabels?.length
+    ? `Recommended for calibration (calibration-grade flags of the molecule file): ${input.calibrationLineLabels.map(displayText).join(", ")}.`
+    : null;
+  return {
+    title,
+    formula: displayText(molecule.formula),
+    species: entry.species,
+    bandText: `band ${fundamental.label} (fundamental)`,
+    temperatureText,
+    bandOriginText: `${fixed(bandLines.bandOrigin, 4)} cm⁻¹`,
+    summaryText: `${bandLines.lines.length} lines down to ${significant(Math.min(...bandLines.lines.map((l) => l.relativeIntensity)), 1)} of the strongest; partition function Q = ${significant(entry.partitionFunction, 5)}`,
+    buildText: `bandatlas ${displayText(build.version)} · commit ${displayText(build.commit)} · built ${displayText(build.dateIso).slice(0, 10)}`,
+    caution: { pictograms: molecule.hazard.ghsPictograms.map(displayText), sentences: molecule.hazard.sentences.map(displayText), deferral: cautionDeferral },
+    sticks: bandLines.lines.map((l) => ({ wavenumber: l.wavenumber, relativeIntensity: l.relativeIntensity, branch: l.branch })),
+    bandOrigin: bandLines.bandOrigin,
+    rows: tableRows(bandLines.lines),
+    otherBandsNote: otherBandsNoteOf(entry),
+    calibrationNote: calibration,
+    sources: sourcesOf(molecule, entry, speciesIndex),
+    modelText:
+      `Dunham expansion of the term values E(v, J) in (v + ½) and J(J + 1); ¹Σ⁺ selection rule ΔJ = ±1; Boltzmann populations with (2J + 1) degeneracy and Q summed over the computed levels; ` +
+      `Hönl–London factors; ${constants}; ${intensity}.`,
+    accuracyText: accuracyOf(entry, bandLines.lines),
+    documentTitle: `${title} ${entry.species} ${fundamental.label} band at ${entry.temperatureK} K — bench sheet`,
+  };
+}
