@@ -1,6 +1,7 @@
 import { checkHelp, runCheck } from "./check.ts";
 import { findHelp, runFind } from "./find.ts";
 import { linesHelp, runLines } from "./lines.ts";
+import { newHelp, runNew } from "./new.ts";
 
 export interface CommandResult {
   output: string;
@@ -18,4 +19,5 @@ export const commands: Record<string, Command> = {
   lines: { summary: "predicted P and R lines of one band of one species", help: linesHelp, run: runLines },
   find: { summary: "lines of the whole atlas near a wavenumber", help: findHelp, run: runFind },
   check: { summary: "validate molecule files (file:line:column for every problem)", help: checkHelp, run: runCheck },
+  new: { summary: "start a new molecule file from the commented template", help: newHelp, run: runNew },
 };
