@@ -4,7 +4,8 @@ import type { Band } from "../core/index.ts";
 export const standardTemperaturesK: readonly number[] = [273.15, 296, 298.15, 1000];
 export const defaultTemperatureK = 296;
 
-export type BandKind = "fundamental" | "hot" | "overtone";
+/** "combination" occurs only for linear molecules (e.g. ν1+ν3 of 12C2H2), whose files list their bands. */
+export type BandKind = "fundamental" | "hot" | "overtone" | "combination";
 
 /** The bands every species is built with: the fundamental, two hot bands, two overtones. */
 export const atlasBands: ReadonlyArray<{ band: Band; kind: BandKind }> = [

@@ -1,10 +1,13 @@
-import { bandLabel, bandLines, lineResiduals, partitionFunction, type Band, type BandLines, type LineResidual } from "../core/index.ts";
+import { bandLabel, bandLines, lineResiduals, speciesPartitionFunction, type Band, type BandLines, type LineResidual } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
-import { atlasBands, hotBandDisplayFraction, type BandKind } from "./atlasConfig.ts";
+import { hotBandDisplayFraction, type BandKind } from "./atlasConfig.ts";
+import { speciesBands } from "./moleculeBands.ts";
 
 export interface AtlasBand {
   kind: BandKind;
   label: string;
+  /** The band's usual name (ν3, 2ν3 …) for a linear molecule; the same as `label` for a diatomic. */
+  name: string;
   lines: BandLines;
   /** Strongest line of this band over the strongest of the fundamental (null without intensity data). */
   strengthRelativeToFundamental: number | null;
@@ -27,22 +30,24 @@ export interface AtlasEntry {
  * intensities; without dipole data a hot band is compared by the harmonic rule (the core labels it).
  */
 export function atlasEntry(molecule: Molecule, species: SpeciesInfo, temperatureK: number, minRelative?: number): AtlasEntry {
-  const q = partitionFunction(species.model.dunham, temperatureK);
-  const computed = atlasBands.map(({ band, kind }) => ({ kind, band, lines: bandLines(species.model, band, { temperatureK, partitionFunction: q, minRelative }) }));
+  const q = speciesPartitionFunction(species.model, temperatureK);
+  // The first band (a diatomic's fundamental, a linear molecule's first listed band) is the reference.
+  const computed = speciesBands(species).map(({ band, kind, name }) => ({ kind, band, name, lines: bandLines(species.model, band, { temperatureK, partitionFunction: q, minRelative }) }));
   const fundamental = computed[0].lines;
-  const bands: AtlasBand[] = computed.map(({ kind, band, lines }) => {
+  const bands: AtlasBand[] = computed.map(({ kind, band, name, lines }, index) => {
     let ratio: number | null = null;
     if (fundamental.strongestLineIntensity && lines.strongestLineIntensity !== null) ratio = lines.strongestLineIntensity / fundamental.strongestLineIntensity;
-    else if (kind === "hot" && fundamental.strongestLinePerDebyeSquared > 0) {
+    else if (kind === "hot" && !species.model.linear && fundamental.strongestLinePerDebyeSquared > 0) {
       // Harmonic rule |μ(v+1←v)|² = (v+1)|μ(1←0)|² (Bernath, ch. 7) when no dipole is cited.
       ratio = (band.vUpper * lines.strongestLinePerDebyeSquared) / fundamental.strongestLinePerDebyeSquared;
     }
     return {
       kind,
       label: bandLabel(band),
+      name,
       lines,
-      strengthRelativeToFundamental: kind === "fundamental" ? 1 : ratio,
-      shownWithFundamental: kind === "fundamental" || (kind === "hot" && ratio !== null && ratio >= hotBandDisplayFraction),
+      strengthRelativeToFundamental: index === 0 ? 1 : ratio,
+      shownWithFundamental: index === 0 || (kind === "hot" && ratio !== null && ratio >= hotBandDisplayFraction),
     };
   });
   return { moleculeId: molecule.id, species: species.model.label, temperatureK, partitionFunction: q, bands, residuals: lineResiduals(species.model) };

@@ -1,14 +1,14 @@
-import { bandLabel, bandLines, nearbyLines, partitionFunction, type LocatedLine, type NearbyLine } from "../core/index.ts";
+import { bandLabel, bandLines, nearbyLines, speciesPartitionFunction, type LocatedLine, type NearbyLine } from "../core/index.ts";
 import type { Molecule } from "../molecules/index.ts";
-import { atlasBands } from "./atlasConfig.ts";
+import { speciesBands } from "./moleculeBands.ts";
 
 /** Every line of every molecule, species and atlas band at one temperature, flattened for searching. */
 export function atlasLines(molecules: Molecule[], temperatureK: number, minRelative: number): LocatedLine[] {
   const out: LocatedLine[] = [];
   for (const molecule of molecules) {
     for (const species of molecule.species) {
-      const q = partitionFunction(species.model.dunham, temperatureK);
-      for (const { band } of atlasBands) {
+      const q = speciesPartitionFunction(species.model, temperatureK);
+      for (const { band } of speciesBands(species)) {
         const result = bandLines(species.model, band, { temperatureK, partitionFunction: q, minRelative });
         const label = bandLabel(band);
         for (const line of result.lines) {

@@ -2,3 +2,4 @@ export * from "./atlasConfig.ts";
 export * from "./selectSpecies.ts";
 export * from "./atlasEntry.ts";
 export * from "./atlasLines.ts";
+export * from "./moleculeBands.ts";

@@ -47,7 +47,7 @@ export interface SpeciesInfo {
   model: SpeciesModel;
   spellings: string[];
   isReference: boolean;
-  given: { sourceKey: string; form: "equilibrium" | "dunham"; values: GivenConstant[] } | null;
+  given: { sourceKey: string; form: "equilibrium" | "dunham" | "states"; values: GivenConstant[] } | null;
 }
 
 export interface Molecule {
@@ -63,6 +63,8 @@ export interface Molecule {
   sources: Source[];
   /** Reference species first, then the others in file order. */
   species: SpeciesInfo[];
+  /** "linear": a linear polyatomic molecule whose species carry states and bands (model.linear). */
+  structure: "diatomic" | "linear";
 }
 
 function split(m: Measured): { value: number; uncertainty: number | null } {
@@ -185,5 +187,6 @@ export function buildMolecule(file: MoleculeFile, fileName: string): Molecule {
     hazard: file.hazard,
     sources: Object.entries(file.sources).map(([key, s]) => ({ key, citation: s.citation, url: s.url ?? null, doi: s.doi ?? null })),
     species: models,
+    structure: "diatomic",
   };
 }

@@ -4,6 +4,8 @@ import { buildMolecule, type Molecule } from "./buildMolecule.ts";
 import { isKnownElement, isotope, stableMassNumbers } from "./isotopes.ts";
 import { formatPath, type Problem } from "./problems.ts";
 import { moleculeFileSchema, type MoleculeFile } from "./schema.ts";
+import { parseLinearMolecule } from "./parseLinearMolecule.ts";
+import type { LinearMoleculeFile } from "./linearSchema.ts";
 
 /** Files larger than this are refused before parsing: a molecule file is a few kilobytes. */
 export const maxMoleculeFileBytes = 256 * 1024;
@@ -58,7 +60,7 @@ function cmPerNumber(value: unknown): number | null {
 }
 
 /** Checks no schema can express: references between fields, physics sanity, identity. */
-function semanticProblems(file: MoleculeFile, expectedId: string | null): Array<{ path: Path; message: string }> {
+export function semanticProblems(file: MoleculeFile, expectedId: string | null): Array<{ path: Path; message: string }> {
   const out: Array<{ path: Path; message: string }> = [];
   const add = (path: Path, message: string) => out.push({ path, message });
   const sourceKeys = Object.keys(file.sources);
@@ -192,7 +194,7 @@ function semanticProblems(file: MoleculeFile, expectedId: string | null): Array<
   return out;
 }
 
-export type ParseResult = { ok: true; molecule: Molecule; data: MoleculeFile } | { ok: false; problems: Problem[] };
+export type ParseResult = { ok: true; molecule: Molecule; data: MoleculeFile | LinearMoleculeFile } | { ok: false; problems: Problem[] };
 
 /**
  * Validates one molecule file's bytes. `file` is the path shown in messages; `expectedId` is the
@@ -233,6 +235,10 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
     const pos = locate(doc, counter, path);
     return { file, line: pos?.line ?? null, column: pos?.column ?? null, path: formatPath(path), message };
   };
+  const structure = (raw as { structure?: unknown }).structure;
+  if (structure === "linear") return parseLinearMolecule(raw, file, expectedId, located);
+  if (structure === "diatomic") delete (raw as { structure?: unknown }).structure;
+  else if (structure !== undefined) return { ok: false, problems: [located(["structure"], `structure ${JSON.stringify(structure)} is not known: leave it out (or write diatomic) for a diatomic, write linear for a linear polyatomic molecule`)] };
   const parsed = moleculeFileSchema.safeParse(raw);
   if (!parsed.success) {
     for (const issue of parsed.error.issues) {

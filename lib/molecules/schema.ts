@@ -4,7 +4,7 @@ import { describeInput, nearestKnown } from "./describeInput.ts";
 // The molecule file's shape. Every object is strict (unknown keys are errors with a suggestion),
 // every number says its unit in the message when it is wrong.
 
-function mapping<Shape extends z.ZodRawShape>(shape: Shape, what: string) {
+export function mapping<Shape extends z.ZodRawShape>(shape: Shape, what: string) {
   const known = Object.keys(shape);
   return z.strictObject(shape, {
     error: (issue) => {
@@ -22,34 +22,34 @@ function mapping<Shape extends z.ZodRawShape>(shape: Shape, what: string) {
   });
 }
 
-function numberIn(unit: string) {
+export function numberIn(unit: string) {
   return z.number({ error: (issue) => `expected a number in ${unit}, got ${describeInput(issue.input)}` });
 }
 
-function text(what: string) {
+export function text(what: string) {
   return z
     .string({ error: (issue) => `expected ${what} as text, got ${describeInput(issue.input)}` })
     .trim()
     .min(1, { error: `${what} must not be empty` });
 }
 
-function listOf<T extends z.ZodType>(item: T, what: string) {
+export function listOf<T extends z.ZodType>(item: T, what: string) {
   return z.array(item, { error: (issue) => `expected a list of ${what}, got ${describeInput(issue.input)}` });
 }
 
 /** A constant: a plain number, or { value, uncertainty } with one standard uncertainty. */
-function measuredIn(unit: string) {
+export function measuredIn(unit: string) {
   return z.union(
     [numberIn(unit), mapping({ value: numberIn(unit), uncertainty: numberIn(unit).nonnegative({ error: "an uncertainty cannot be negative" }) }, "a value with its uncertainty")],
     { error: (issue) => `expected a number in ${unit} or { value, uncertainty }, got ${describeInput(issue.input)}` },
   );
 }
 
-const sourceKey = text("a source key (one of the keys under `sources`)");
+export const sourceKey = text("a source key (one of the keys under `sources`)");
 const bandText = z
   .string({ error: (issue) => `expected a band like "1-0" (v'-v''), got ${describeInput(issue.input)}` })
   .regex(/^\d{1,2}-\d{1,2}$/, { error: `expected a band like "1-0" (v'-v'')` });
-const massNumbers = listOf(
+export const massNumbers = listOf(
   z.number({ error: (i) => `expected a mass number (a whole number), got ${describeInput(i.input)}` }).int({ error: "a mass number is a whole number" }).positive({ error: "a mass number is positive" }),
   "mass numbers, one per atom",
 );
@@ -86,7 +86,7 @@ const speciesSchema = mapping(
   "a species",
 );
 
-const sourceSchema = mapping(
+export const sourceSchema = mapping(
   {
     citation: text("the full citation (authors, title, journal, volume, pages, year)"),
     url: text("a web address").optional(),
@@ -110,7 +110,7 @@ const intensitySchema = mapping(
   "an intensity entry",
 );
 
-const referenceLineSchema = mapping(
+export const referenceLineSchema = mapping(
   {
     label: z
       .string({ error: (i) => `expected a line label like "R(0)" or "P(1)", got ${describeInput(i.input)}` })

@@ -1,5 +1,4 @@
-import { parseBand } from "../../core/index.ts";
-import { bandOf, defaultTemperatureK, selectSpecies } from "../../atlas/index.ts";
+import { bandOf, defaultTemperatureK, resolveBand, selectSpecies } from "../../atlas/index.ts";
 import { linesCsv, linesDocument, linesTable } from "../../format/index.ts";
 import type { Molecule, SpeciesInfo } from "../../molecules/index.ts";
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
@@ -13,7 +12,9 @@ Predicted P- and R-branch lines of one band of one species.
   <molecule>              id, formula, CAS number or alias (co, HCl, 7647-01-0)
   --species <name>        isotopologue, every atom's mass number (12C16O, 1H37Cl) or a
                           common short form (H37Cl, D35Cl, 13CO); default: the most abundant
-  --band <v'-v''>         vibrational band, e.g. 1-0 (default), 2-1 (hot band), 2-0 (overtone)
+  --band <v'-v''>         vibrational band, e.g. 1-0 (default), 2-1 (hot band), 2-0 (overtone);
+                          for a linear molecule upper-lower state ids or the band's name
+                          (co2: 00011-00001 or ν3/nu3; default: the first band its file lists)
   --temperature <K>       gas temperature in kelvin (default ${defaultTemperatureK})
   --min-relative <x>      leave out lines weaker than x times the strongest (default 1e-4)
   --format table|csv|json table (default), CSV with units in the header, or JSON
@@ -40,9 +41,9 @@ export function runLines(args: string[]): string {
   const temperatureK = temperatureOption(values.temperature as string | undefined, defaultTemperatureK);
   const minRelative = numberOption("min-relative", values["min-relative"] as string | undefined, 1e-4);
   if (!(minRelative >= 0 && minRelative < 1)) throw new UsageError(`--min-relative ${minRelative} must be at least 0 and below 1`);
-  const band = parseBand((values.band as string | undefined) ?? "1-0");
   const molecule = loadOneMolecule(moleculesDir(values.molecules as string | undefined), positionals[0]);
   const species = selectSpecies(molecule, values.species as string | undefined);
+  const band = resolveBand(molecule, species, values.band as string | undefined);
   const result = bandOf(species, band, temperatureK, minRelative);
   if (format === "json") return JSON.stringify(linesDocument(molecule.id, result), null, 2) + "\n";
   if (format === "csv") return linesCsv(result);
