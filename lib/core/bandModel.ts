@@ -3,10 +3,10 @@ import { checkTemperature } from "./band.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { hermanWallisFactor } from "./hermanWallis.ts";
 import { hoenlLondon, runningIndex } from "./hoenlLondon.ts";
-import { absoluteLineIntensity, intensityShape } from "./lineIntensity.ts";
+import { absoluteLineIntensity, intensityShapeFromBoltzmann } from "./lineIntensity.ts";
 import { jLimit } from "./partitionFunction.ts";
 import { secondRadiationConstantCmK, speedOfLightMs } from "./physicalConstants.ts";
-import { highestRisingJ, termFromExpansion } from "./termValues.ts";
+import { termFromExpansion } from "./termValues.ts";
 import type { Band, BandIntensityData, BandLines, Branch, Line, TemperatureK } from "./types.ts";
 
 export const defaultMinRelativeIntensity = 1e-4;
@@ -52,15 +52,40 @@ export interface ModelLineOptions {
 
 function uncertaintyFunction(terms: readonly PositionUncertaintyTerm[]) {
   const used = terms.filter((t) => t.variance > 0);
+  const count = used.length;
+  const ls = used.map((t) => t.l);
+  const upperWeights = used.map((t) => t.upperWeight);
+  const lowerWeights = used.map((t) => t.lowerWeight);
+  const variances = used.map((t) => t.variance);
   return (xUpper: number, xLower: number): number => {
     let variance = 0;
-    for (const t of used) {
-      const d = t.upperWeight * xUpper ** t.l - t.lowerWeight * xLower ** t.l;
-      variance += d * d * t.variance;
+    for (let i = 0; i < count; i++) {
+      // x^l by repeated multiplication: l is a small whole number (0–4) and this is the hot path.
+      let powUpper = 1;
+      let powLower = 1;
+      for (let k = ls[i]; k > 0; k--) {
+        powUpper *= xUpper;
+        powLower *= xLower;
+      }
+      const d = upperWeights[i] * powUpper - lowerWeights[i] * powLower;
+      variance += d * d * variances[i];
     }
     return Math.sqrt(variance);
   };
 }
+
+const scratchCapacity = 2 * (jLimit + 2);
+// Line labels are the same strings for every band: made once instead of once per line.
+const labelsR = Array.from({ length: jLimit + 2 }, (_, j) => `R(${j})`);
+const labelsP = Array.from({ length: jLimit + 2 }, (_, j) => `P(${j})`);
+const scratch = {
+  wavenumbers: new Float64Array(scratchCapacity),
+  shapes: new Float64Array(scratchCapacity),
+  lowerEnergies: new Float64Array(scratchCapacity),
+  populations: new Float64Array(scratchCapacity),
+  jLowers: new Int32Array(scratchCapacity),
+  isR: new Uint8Array(scratchCapacity),
+};
 
 /**
  * Every P and R line of one Σ–Σ band (ΔJ = ±1, no Q branch), from J'' = 0 until the lines fall
@@ -78,72 +103,103 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
   const q = model.partitionFunction;
   const c2OverT = secondRadiationConstantCmK / temperatureK;
   const { lower, upper } = model;
-  const jTopLower = highestRisingJ(lower, jLimit);
-  const jTopUpper = highestRisingJ(upper, jLimit);
   const hw = model.intensity?.hermanWallis ?? null;
   const uncertaintyOf = uncertaintyFunction(model.uncertaintyTerms);
 
-  const all: Array<Line & { shape: number }> = [];
+  // The scan stores plain numbers in scratch arrays; Line objects are made once, only for the
+  // lines kept. The arrays are reused between calls (nothing here is re-entrant or asynchronous).
+  const { wavenumbers, shapes, lowerEnergies, populations, jLowers, isR } = scratch;
+  let count = 0;
   let strongestShape = 0;
   let truncatedBy: BandLines["truncatedBy"] = "j-limit";
   let jLowerMax = 0;
 
-  const push = (branch: Branch, jLower: number, jUpper: number, lowerEnergy: number, population: number, weight: number) => {
-    const wavenumber = termFromExpansion(upper, jUpper) - termFromExpansion(lower, jLower);
+  const push = (branch: Branch, jLower: number, wavenumber: number, lowerEnergy: number, boltzmann: number, population: number, weight: number) => {
     const hermanWallis = hermanWallisFactor(hw, runningIndex(branch, jLower));
-    const shape = weight * intensityShape(wavenumber, lowerEnergy, temperatureK, q, hoenlLondon(branch, jLower), hermanWallis);
+    const shape = weight * intensityShapeFromBoltzmann(wavenumber, boltzmann, c2OverT, q, hoenlLondon(branch, jLower), hermanWallis);
     if (shape > strongestShape) strongestShape = shape;
-    all.push({
-      label: `${branch}(${jLower})`,
-      branch,
-      jLower,
-      jUpper,
-      wavenumber,
-      wavenumberUncertainty: uncertaintyOf(jUpper * (jUpper + 1), jLower * (jLower + 1)),
-      wavelengthVacuumUm: 1e4 / wavenumber,
-      wavelengthAirNm: 1e7 / wavenumber / airRefractiveIndexEdlen(wavenumber),
-      frequencyThz: wavenumber * speedOfLightMs * 1e-10,
-      lowerStateEnergy: lowerEnergy,
-      relativeIntensity: 0,
-      lineIntensity: null,
-      populationFraction: population,
-      shape,
-    });
+    wavenumbers[count] = wavenumber;
+    shapes[count] = shape;
+    lowerEnergies[count] = lowerEnergy;
+    populations[count] = population;
+    jLowers[count] = jLower;
+    isR[count] = branch === "R" ? 1 : 0;
+    count++;
     return shape;
   };
 
+  // Term values roll along J: E''(J''), E'(J''−1), E'(J''), E'(J''+1). A level whose energy stops
+  // rising with J is where the truncated expansion turns over; the list ends there.
+  let lowerPrevious = -Infinity;
+  let upperPrevious = NaN;
+  let upperCurrent = termFromExpansion(upper, 0);
   for (let jLower = 0; jLower <= jLimit; jLower++) {
-    if (jLower > jTopLower || jLower + 1 > jTopUpper) {
+    const lowerTerm = termFromExpansion(lower, jLower);
+    const upperNext = termFromExpansion(upper, jLower + 1);
+    if (!(lowerTerm > lowerPrevious) || !(upperNext > upperCurrent)) {
       truncatedBy = "constants-turn-over";
       break;
     }
+    lowerPrevious = lowerTerm;
     jLowerMax = jLower;
     const weight = model.lowerWeight(jLower);
     // A level of weight 0 does not exist (e.g. odd J in the ground state of 12C16O2): no lines.
-    if (weight === 0) continue;
-    const lowerEnergy = termFromExpansion(lower, jLower) - model.zeroEnergy;
-    const population = (weight * (2 * jLower + 1) * Math.exp(-c2OverT * lowerEnergy)) / q;
-    const shapeR = push("R", jLower, jLower + 1, lowerEnergy, population, weight);
-    const shapeP = jLower >= 1 ? push("P", jLower, jLower - 1, lowerEnergy, population, weight) : 0;
-    // Past the population maximum every further J'' is weaker still; stop two decades below the
-    // threshold so that a line near the threshold is never cut by the stopping rule itself.
-    const cutoff = Math.max(minRelative, 1e-12) * 1e-2 * strongestShape;
-    if (jLower > 2 && shapeR < cutoff && shapeP < cutoff) {
-      truncatedBy = "intensity";
+    if (weight !== 0) {
+      const lowerEnergy = lowerTerm - model.zeroEnergy;
+      const boltzmann = Math.exp(-c2OverT * lowerEnergy);
+      const population = (weight * (2 * jLower + 1) * boltzmann) / q;
+      const shapeR = push("R", jLower, upperNext - lowerTerm, lowerEnergy, boltzmann, population, weight);
+      const shapeP = jLower >= 1 ? push("P", jLower, upperPrevious - lowerTerm, lowerEnergy, boltzmann, population, weight) : 0;
+      // Past the population maximum every further J'' is weaker still; stop two decades below the
+      // threshold so that a line near the threshold is never cut by the stopping rule itself.
+      const cutoff = Math.max(minRelative, 1e-12) * 1e-2 * strongestShape;
+      if (jLower > 2 && shapeR < cutoff && shapeP < cutoff) {
+        truncatedBy = "intensity";
+        break;
+      }
+    }
+    upperPrevious = upperCurrent;
+    upperCurrent = upperNext;
+  }
+
+  // Order by wavenumber. Usually P descending then R ascending is already in order; a band head
+  // breaks that, and then the indices are sorted (never assume the branches are monotonic).
+  const order: number[] = [];
+  for (let i = count - 1; i >= 0; i--) if (!isR[i]) order.push(i);
+  for (let i = 0; i < count; i++) if (isR[i]) order.push(i);
+  for (let i = 1; i < order.length; i++) {
+    if (wavenumbers[order[i]] < wavenumbers[order[i - 1]]) {
+      order.sort((a, b) => wavenumbers[a] - wavenumbers[b]);
       break;
     }
   }
 
   const lines: Line[] = [];
   const dipole = model.intensity?.transitionDipoleDebye ?? null;
-  for (const { shape, ...line } of all) {
-    const relativeIntensity = strongestShape > 0 ? shape / strongestShape : 0;
-    if (relativeIntensity < minRelative) continue;
-    line.relativeIntensity = relativeIntensity;
-    line.lineIntensity = dipole === null ? null : absoluteLineIntensity(shape, dipole, model.abundance);
-    lines.push(line);
+  const toAbsolute = dipole === null ? 0 : absoluteLineIntensity(1, dipole, model.abundance);
+  const keepAbove = minRelative * strongestShape;
+  for (const i of order) {
+    const shape = shapes[i];
+    if (shape < keepAbove || !(strongestShape > 0)) continue;
+    const wavenumber = wavenumbers[i];
+    const jLower = jLowers[i];
+    const branch: Branch = isR[i] ? "R" : "P";
+    lines.push({
+      label: isR[i] ? labelsR[jLower] : labelsP[jLower],
+      branch,
+      jLower,
+      jUpper: isR[i] ? jLower + 1 : jLower - 1,
+      wavenumber,
+      wavenumberUncertainty: isR[i] ? uncertaintyOf((jLower + 1) * (jLower + 2), jLower * (jLower + 1)) : uncertaintyOf((jLower - 1) * jLower, jLower * (jLower + 1)),
+      wavelengthVacuumUm: 1e4 / wavenumber,
+      wavelengthAirNm: 1e7 / wavenumber / airRefractiveIndexEdlen(wavenumber),
+      frequencyThz: wavenumber * speedOfLightMs * 1e-10,
+      lowerStateEnergy: lowerEnergies[i],
+      relativeIntensity: shape / strongestShape,
+      lineIntensity: dipole === null ? null : toAbsolute * shape,
+      populationFraction: populations[i],
+    });
   }
-  lines.sort((a, b) => a.wavenumber - b.wavenumber);
 
   return {
     species: model.species,

@@ -25,6 +25,18 @@ export function intensityShape(
   );
 }
 
+/** The same, with the Boltzmann factor e^(−c2E''/T) already computed (it is shared by P(J'') and R(J'')). */
+export function intensityShapeFromBoltzmann(
+  wavenumber: WavenumberCm,
+  boltzmannFactor: number,
+  c2OverT: number,
+  partitionFunction: number,
+  hoenlLondonFactor: number,
+  hermanWallisFactor: number,
+): number {
+  return (wavenumber * boltzmannFactor * -Math.expm1(-c2OverT * wavenumber) * hoenlLondonFactor * hermanWallisFactor) / partitionFunction;
+}
+
 /** Converts the dipole-free shape to cm/molecule for a species of isotopic abundance `abundance`. */
 export function absoluteLineIntensity(shape: number, transitionDipoleDebye: DipoleDebye, abundance: number): number {
   const dipoleEsuCm = transitionDipoleDebye * debyeEsuCm;
