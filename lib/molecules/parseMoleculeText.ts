@@ -241,18 +241,52 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
   else if (structure !== undefined) return { ok: false, problems: [located(["structure"], `structure ${JSON.stringify(structure)} is not known: leave it out (or write diatomic) for a diatomic, write linear for a linear polyatomic molecule`)] };
   const parsed = moleculeFileSchema.safeParse(raw);
   if (!parsed.success) {
-    for (const issue of parsed.error.issues) {
+    for (const issue of expandUnions(parsed.error.issues, raw)) {
       const path = issue.path as Path;
       if (issue.code === "unrecognized_keys") {
         const messages = issue.message.split("; unknown field ");
-        issue.keys.forEach((key, i) => problems.push(located([...path, key], i === 0 ? messages[0] : `unknown field ${messages[i]}`)));
+        (issue.keys ?? []).forEach((key, i) => problems.push(located([...path, key], i === 0 ? messages[0] : `unknown field ${messages[i]}`)));
       } else problems.push(located(path, issue.message));
     }
     return { ok: false, problems: sortProblems(problems) };
   }
-  for (const { path, message } of semanticProblems(parsed.data, expectedId)) problems.push(located(path, message));
+  for (const { path, message } of [...placeholderProblems(raw, []), ...semanticProblems(parsed.data, expectedId)]) problems.push(located(path, message));
   if (problems.length) return { ok: false, problems: sortProblems(problems) };
   return { ok: true, molecule: buildMolecule(parsed.data, file), data: parsed.data };
+}
+
+type Issue = { code: string; path: PropertyKey[]; message: string; keys?: string[]; errors?: Issue[][] };
+
+function valueAt(root: unknown, path: PropertyKey[]): unknown {
+  let node = root;
+  for (const part of path) node = node && typeof node === "object" ? (node as Record<PropertyKey, unknown>)[part] : undefined;
+  return node;
+}
+
+/**
+ * A constant may be a number or { value, uncertainty }. When a mapping was given and is wrong
+ * inside, report the mapping's own problems ("value: expected a number …"), not the union's summary.
+ */
+function expandUnions(issues: ReadonlyArray<unknown>, raw: unknown): Issue[] {
+  const out: Issue[] = [];
+  for (const item of issues as Issue[]) {
+    const input = valueAt(raw, item.path);
+    if (item.code === "invalid_union" && item.errors && input && typeof input === "object" && !Array.isArray(input)) {
+      const branch = item.errors[item.errors.length - 1];
+      out.push(...expandUnions(branch.map((e) => ({ ...e, path: [...item.path, ...e.path] })), raw));
+    } else out.push(item);
+  }
+  return out;
+}
+
+/** Text the template marks for replacement must not survive into a submitted file. */
+function placeholderProblems(node: unknown, path: Array<string | number>): Array<{ path: Path; message: string }> {
+  if (typeof node === "string") {
+    return /\bREPLACE\b/.test(node) ? [{ path, message: "still holds the template's placeholder REPLACE; put the real value (and its source) here" }] : [];
+  }
+  if (Array.isArray(node)) return node.flatMap((item, i) => placeholderProblems(item, [...path, i]));
+  if (node && typeof node === "object") return Object.entries(node).flatMap(([key, value]) => placeholderProblems(value, [...path, key]));
+  return [];
 }
 
 function sortProblems(problems: Problem[]): Problem[] {
