@@ -1,17 +1,14 @@
-/**
- * Which build made a sheet, printed on it so an old printout can be recognised. Structurally the
- * same as the build's identity type (lib/build/buildIdentity.ts, written by the build); declared
- * here so the sheet renderer does not wait for it.
- */
-export interface SheetBuildIdentity {
-  version: string;
-  commit: string;
-  /** ISO 8601 date or date-time; also the PDF's creation date, so a rebuild gives the same bytes. */
-  dateIso: string;
-}
+import type { BuildIdentity } from "../build/buildIdentity.ts";
 
-/** The build date as a Date, or a plain error: a sheet without a valid date would not be reproducible. */
+/** Which build made a sheet (the build's own identity type), printed so an old printout can be recognised. */
+export type SheetBuildIdentity = BuildIdentity;
+
+/**
+ * The PDF's creation date: the build date, so a rebuild of the same commit gives the same bytes.
+ * Outside a git checkout the build date is "unknown"; the Unix epoch then stands in, still fixed.
+ */
 export function buildDate(build: SheetBuildIdentity): Date {
+  if (build.dateIso === "unknown") return new Date(0);
   const date = new Date(build.dateIso);
   if (!/^\d{4}-\d{2}-\d{2}/.test(build.dateIso) || Number.isNaN(date.getTime())) {
     throw new SheetInputError(`build date "${build.dateIso}" is not an ISO 8601 date such as 2025-03-14 or 2025-03-14T09:30:00Z`);

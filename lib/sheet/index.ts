@@ -3,3 +3,5 @@ export * from "./paper.ts";
 export * from "./sheetFileName.ts";
 export * from "./sheetContent.ts";
 export * from "./renderBenchSheet.ts";
+export * from "./writeFileAtomic.ts";
+export * from "./writeBenchSheets.ts";

@@ -44,8 +44,8 @@ function newDocument(content: SheetContent, paper: PaperName, build: SheetBuildI
       ModDate: date,
     },
   });
-  doc.registerFont(sheetFonts.regular, sheetFont("regular"));
-  doc.registerFont(sheetFonts.bold, sheetFont("bold"));
+  doc.registerFont(sheetFonts.regular, sheetFont("regular") as Buffer);
+  doc.registerFont(sheetFonts.bold, sheetFont("bold") as Buffer);
   return doc;
 }
 

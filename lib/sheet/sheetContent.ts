@@ -3,6 +3,7 @@ import type { Branch, Line } from "../core/index.ts";
 import { fixed, lineCells, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
+import { describeBuild } from "../build/buildIdentity.ts";
 import { displayText, safeLink } from "./displayText.ts";
 
 /** Lines at least this fraction of the band's strongest are marked strong in the table. */
@@ -161,7 +162,7 @@ export function sheetContent(input: SheetContentInput): SheetContent {
     temperatureText,
     bandOriginText: `${fixed(bandLines.bandOrigin, 4)} cm⁻¹`,
     summaryText: `${bandLines.lines.length} lines down to ${significant(Math.min(...bandLines.lines.map((l) => l.relativeIntensity)), 1)} of the strongest; partition function Q = ${significant(entry.partitionFunction, 5)}`,
-    buildText: `bandatlas ${displayText(build.version)} · commit ${displayText(build.commit)} · built ${displayText(build.dateIso).slice(0, 10)}`,
+    buildText: describeBuild(build),
     caution: { pictograms: molecule.hazard.ghsPictograms.map(displayText), sentences: molecule.hazard.sentences.map(displayText), deferral: cautionDeferral },
     sticks: bandLines.lines.map((l) => ({ wavenumber: l.wavenumber, relativeIntensity: l.relativeIntensity, branch: l.branch })),
     bandOrigin: bandLines.bandOrigin,

@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
 
 // The sheet's fonts come from the dejavu-fonts-ttf package, never from the system, so every
-// machine embeds the same glyphs (DejaVu covers ν̃, cm⁻¹, µ, °, ±, ≥ and the GHS codes' letters).
+// machine embeds the same glyphs (DejaVu covers ν̃, cm⁻¹, µ, °, ±, ≥, ★ and ⚠).
 const require = createRequire(import.meta.url);
 
 export const sheetFontFiles = {
@@ -12,14 +12,20 @@ export const sheetFontFiles = {
 
 export type SheetFontName = keyof typeof sheetFontFiles;
 
-const cache = new Map<SheetFontName, Buffer>();
+/** The fontkit PDFKit itself depends on, resolved from PDFKit's folder so it is the same copy. */
+const fontkit = createRequire(require.resolve("pdfkit"))("fontkit") as { create(bytes: Buffer): unknown };
 
-/** The font file's bytes, read once per process. */
-export function sheetFont(name: SheetFontName): Buffer {
-  let bytes = cache.get(name);
-  if (!bytes) {
-    bytes = readFileSync(require.resolve(sheetFontFiles[name]));
-    cache.set(name, bytes);
+const cache = new Map<SheetFontName, unknown>();
+
+/**
+ * The parsed font, once per process: parsing DejaVu's tables took most of a sheet's render time.
+ * PDFKit takes a fontkit font as a font source and makes a fresh subset of it for each document.
+ */
+export function sheetFont(name: SheetFontName): unknown {
+  let font = cache.get(name);
+  if (!font) {
+    font = fontkit.create(readFileSync(require.resolve(sheetFontFiles[name])));
+    cache.set(name, font);
   }
-  return bytes;
+  return font;
 }

@@ -1,6 +1,7 @@
 import { checkHelp, runCheck } from "./check.ts";
 import { findHelp, runFind } from "./find.ts";
 import { linesHelp, runLines } from "./lines.ts";
+import { runSheet, sheetHelp } from "./sheet.ts";
 import { newHelp, runNew } from "./new.ts";
 
 export interface CommandResult {
@@ -18,6 +19,7 @@ export interface Command {
 export const commands: Record<string, Command> = {
   lines: { summary: "predicted P and R lines of one band of one species", help: linesHelp, run: runLines },
   find: { summary: "lines of the whole atlas near a wavenumber", help: findHelp, run: runFind },
+  sheet: { summary: "printable PDF bench sheet of one gas at one temperature", help: sheetHelp, run: runSheet },
   check: { summary: "validate molecule files (file:line:column for every problem)", help: checkHelp, run: runCheck },
   new: { summary: "start a new molecule file from the commented template", help: newHelp, run: runNew },
 };

@@ -1,0 +1,17 @@
+import { mkdirSync } from "node:fs";
+import { dirname } from "node:path";
+import { renderBenchSheet, type BenchSheetRequest } from "./renderBenchSheet.ts";
+import { writeFileAtomic } from "./writeFileAtomic.ts";
+
+/** One sheet to render and where to put it: plain data, so it can cross to a worker thread. */
+export interface BenchSheetJob {
+  request: BenchSheetRequest;
+  path: string;
+}
+
+export async function runBenchSheetJob(job: BenchSheetJob): Promise<string> {
+  const bytes = await renderBenchSheet(job.request);
+  mkdirSync(dirname(job.path), { recursive: true });
+  writeFileAtomic(job.path, bytes);
+  return job.path;
+}
