@@ -43,6 +43,7 @@ const cases: Array<[string, number | null, RegExp]> = [
   ["bad-url", 17, /must be an https: or http: link/],
   ["no-reference", 17, /exactly one species must have `reference: true`/],
   ["bad-cas", 6, /fails its check digit/],
+  ["control-characters", 4, /invisible control character U\+202E/],
 ];
 
 describe("malformed molecule files", () => {

@@ -279,9 +279,17 @@ function expandUnions(issues: ReadonlyArray<unknown>, raw: unknown): Issue[] {
   return out;
 }
 
-/** Text the template marks for replacement must not survive into a submitted file. */
+// Control characters and bidirectional overrides can hide text or reorder it on screen (the
+// "Trojan Source" trick): refused in every text of a molecule file.
+const invisibleCharacters = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u200E\u200F\u202A-\u202E\u2066-\u2069]/;
+
+/** Per-text checks: template placeholders left in, and invisible or reordering characters. */
 function placeholderProblems(node: unknown, path: Array<string | number>): Array<{ path: Path; message: string }> {
   if (typeof node === "string") {
+    if (invisibleCharacters.test(node)) {
+      const code = node.match(invisibleCharacters)![0].codePointAt(0)!.toString(16).toUpperCase().padStart(4, "0");
+      return [{ path, message: `contains the invisible control character U+${code}; retype the text without it` }];
+    }
     return /\bREPLACE\b/.test(node) ? [{ path, message: "still holds the template's placeholder REPLACE; put the real value (and its source) here" }] : [];
   }
   if (Array.isArray(node)) return node.flatMap((item, i) => placeholderProblems(item, [...path, i]));
