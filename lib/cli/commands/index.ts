@@ -3,6 +3,7 @@ import { findHelp, runFind } from "./find.ts";
 import { linesHelp, runLines } from "./lines.ts";
 import { runSheet, sheetHelp } from "./sheet.ts";
 import { newHelp, runNew } from "./new.ts";
+import { buildHelp, runBuild } from "./build.ts";
 
 export interface CommandResult {
   output: string;
@@ -21,5 +22,6 @@ export const commands: Record<string, Command> = {
   find: { summary: "lines of the whole atlas near a wavenumber", help: findHelp, run: runFind },
   sheet: { summary: "printable PDF bench sheet of one gas at one temperature", help: sheetHelp, run: runSheet },
   check: { summary: "validate molecule files (file:line:column for every problem)", help: checkHelp, run: runCheck },
+  build: { summary: "build the atlas website (pages, downloads, search, sheets) into site/", help: buildHelp, run: runBuild },
   new: { summary: "start a new molecule file from the commented template", help: newHelp, run: runNew },
 };

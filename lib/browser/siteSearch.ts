@@ -1,0 +1,131 @@
+// The site's one script: name and wavenumber search on the home page. Loaded as an external file
+// (the pages' Content-Security-Policy allows no inline script); everything it shows is written
+// with textContent, never innerHTML.
+import MiniSearch from "minisearch";
+import { fixed, significant } from "../format/numbers.ts";
+import { decodeLineIndex, type DecodedLineIndex, type LineIndexFile } from "./lineIndexCodec.ts";
+import { nameIndexOptions, nameSearchOptions } from "./nameSearchOptions.ts";
+import { searchWavenumber } from "./wavenumberSearch.ts";
+import { lineRowId } from "../site/sitePaths.ts";
+
+const root = document.documentElement.dataset.root ?? "";
+
+function el<K extends keyof HTMLElementTagNameMap>(tag: K, text?: string, attrs: Record<string, string> = {}): HTMLElementTagNameMap[K] {
+  const node = document.createElement(tag);
+  if (text !== undefined) node.textContent = text;
+  for (const [k, v] of Object.entries(attrs)) node.setAttribute(k, v);
+  return node;
+}
+
+async function fetchJson<T>(path: string): Promise<T> {
+  const response = await fetch(root + path);
+  if (!response.ok) throw new Error(`could not load ${path} (${response.status})`);
+  return (await response.json()) as T;
+}
+
+function show(output: HTMLElement, ...nodes: Node[]) {
+  output.replaceChildren(...nodes);
+}
+
+function setupNameSearch(form: HTMLFormElement) {
+  const output = document.getElementById(form.dataset.output!)!;
+  const input = form.elements.namedItem("q") as HTMLInputElement;
+  let index: Promise<MiniSearch> | null = null;
+  const load = () => (index ??= fetchJson<object>(form.dataset.index!).then((json) => MiniSearch.loadJS(json as never, nameIndexOptions)));
+  const run = async () => {
+    const query = input.value.trim();
+    if (!query) return show(output, el("p", "Type a name, formula, alias or CAS number."));
+    try {
+      const results = (await load()).search(query, nameSearchOptions);
+      if (!results.length) return show(output, el("p", `No molecule matches “${query}”.`));
+      const list = el("ul");
+      for (const r of results) {
+        const item = el("li");
+        item.append(el("a", `${r.name} (${r.formula})`, { href: root + r.path }), ` — CAS ${r.casNumber}`);
+        list.append(item);
+      }
+      show(output, el("p", `${results.length} molecule${results.length === 1 ? "" : "s"} match “${query}”:`), list);
+    } catch (error) {
+      show(output, el("p", `Search failed: ${(error as Error).message}`, { class: "error" }));
+    }
+  };
+  form.addEventListener("submit", (event) => {
+    event.preventDefault();
+    history.replaceState(null, "", `?q=${encodeURIComponent(input.value.trim())}#search`);
+    void run();
+  });
+  const initial = new URLSearchParams(location.search).get("q");
+  if (initial !== null) {
+    input.value = initial;
+    void run();
+  }
+}
+
+function setupWavenumberSearch(form: HTMLFormElement) {
+  const output = document.getElementById(form.dataset.output!)!;
+  const field = (name: string) => form.elements.namedItem(name) as HTMLInputElement | HTMLSelectElement;
+  const indexes = new Map<string, Promise<DecodedLineIndex>>();
+  const load = (token: string) => {
+    let index = indexes.get(token);
+    if (!index) {
+      const option = (field("temperature") as HTMLSelectElement).querySelector(`option[value="${CSS.escape(token)}"]`) as HTMLOptionElement | null;
+      if (!option) throw new Error(`no line index for ${token} K`);
+      index = fetchJson<LineIndexFile>(option.dataset.index!).then(decodeLineIndex);
+      indexes.set(token, index);
+    }
+    return index;
+  };
+  const fail = (message: string) => show(output, el("p", message, { class: "error", role: "alert" }));
+  const run = async () => {
+    const wavenumber = Number(field("wavenumber").value.trim().replace(/\s*cm-1$/i, ""));
+    const windowCm = Number(field("window").value.trim());
+    const minRelative = Number(field("minRelative").value.trim());
+    const token = field("temperature").value;
+    if (!(wavenumber > 0)) return fail("The wavenumber must be a number of cm⁻¹ above 0.");
+    if (!(windowCm > 0) || windowCm > 500) return fail("The window (half-width) must be above 0 and at most 500 cm⁻¹.");
+    if (!(minRelative < 1)) return fail("The minimum relative intensity must be below 1.");
+    try {
+      const index = await load(token);
+      if (minRelative < index.minRelative) return fail(`The site's index holds lines down to ${index.minRelative} of their band's strongest line; for weaker lines use \`bandatlas find --min-relative\`.`);
+      const matches = searchWavenumber(index, wavenumber, windowCm, minRelative);
+      const head = el("p", `Lines within ±${windowCm} cm⁻¹ of ${wavenumber} cm⁻¹ at ${index.temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}`);
+      if (!matches.length) return show(output, head);
+      const table = el("table", undefined, { class: "lines compact" });
+      const headRow = el("tr");
+      for (const h of ["molecule", "species", "band", "line", "wavenumber / cm⁻¹", "offset / cm⁻¹", "rel. intensity"]) headRow.append(el("th", h, { scope: "col" }));
+      table.append(el("thead"), el("tbody"));
+      table.tHead!.append(headRow);
+      for (const m of matches) {
+        const row = el("tr");
+        const link = el("a", m.label, { href: `${root}${m.page}#${lineRowId(m.band, m.label)}` });
+        const lineCell = el("td");
+        lineCell.append(link);
+        row.append(el("td", m.molecule), el("td", m.species), el("td", m.band), lineCell, el("td", fixed(m.wavenumber, 4), { class: "num" }), el("td", (m.offset >= 0 ? "+" : "") + fixed(m.offset, 4), { class: "num" }), el("td", significant(m.relativeIntensity, 3), { class: "num" }));
+        table.tBodies[0].append(row);
+      }
+      show(output, head, table);
+    } catch (error) {
+      fail(`Search failed: ${(error as Error).message}`);
+    }
+  };
+  form.addEventListener("submit", (event) => {
+    event.preventDefault();
+    const params = new URLSearchParams();
+    for (const name of ["wavenumber", "window", "temperature", "minRelative"]) params.set(name, field(name).value.trim());
+    history.replaceState(null, "", `?${params}#find`);
+    void run();
+  });
+  const params = new URLSearchParams(location.search);
+  if (params.has("wavenumber")) {
+    for (const name of ["wavenumber", "window", "temperature", "minRelative"]) {
+      const value = params.get(name);
+      if (value !== null) field(name).value = value;
+    }
+    void run();
+  }
+}
+
+for (const form of document.querySelectorAll<HTMLFormElement>("form[data-search]")) {
+  if (form.dataset.search === "name") setupNameSearch(form);
+  if (form.dataset.search === "wavenumber") setupWavenumberSearch(form);
+}

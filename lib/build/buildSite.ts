@@ -1,0 +1,150 @@
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync, cpSync } from "node:fs";
+import { dirname, join, resolve } from "node:path";
+import { fileURLToPath, pathToFileURL } from "node:url";
+import { atlasEntry, standardTemperaturesK, type AtlasEntry } from "../atlas/index.ts";
+import { linesCsv, linesDocument } from "../format/index.ts";
+import { loadMoleculesOrThrow, type Molecule } from "../molecules/index.ts";
+import { bandOverviewDescription, bandOverviewSvg } from "../plot/index.ts";
+import { lineIndexBytesPerLine } from "../browser/lineIndexCodec.ts";
+import { contentDir, runEleventy } from "../site/runEleventy.ts";
+import { siteData, type EntryPlots } from "../site/pageData.ts";
+import { lineIndex, nameIndexJson } from "../site/searchIndexes.ts";
+import { downloadPath, temperatureToken } from "../site/sitePaths.ts";
+import { bundleBrowserScript } from "./bundleBrowser.ts";
+import { buildIdentity, type BuildIdentity } from "./buildIdentity.ts";
+import { checkInternalLinks } from "./checkLinks.ts";
+import { swapDirectory } from "./swapDirectory.ts";
+
+export const repoDir = fileURLToPath(new URL("../..", import.meta.url));
+
+export interface BuildOptions {
+  moleculesDir: string;
+  outDir: string;
+  /** Default: from package.json and git. */
+  build?: BuildIdentity;
+  /** Progress lines for the person running the build. */
+  log?: (line: string) => void;
+}
+
+export interface BuildReport {
+  outDir: string;
+  molecules: number;
+  pages: number;
+  entries: number;
+  sheets: number;
+  lineIndex: Array<{ temperatureK: number; lines: number; bytes: number }>;
+  build: BuildIdentity;
+}
+
+/** A build that cannot finish for a reason the person running it can fix (not a bug). */
+export class BuildError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "BuildError";
+  }
+}
+
+type WriteBenchSheets = (options: { molecules: Molecule[]; entries: AtlasEntry[]; outDir: string; build: BuildIdentity }) => Promise<string[]>;
+
+/** The sheet renderer, once lib/sheet exports it; until then the site is built without sheets. */
+async function findSheetWriter(): Promise<WriteBenchSheets | null> {
+  const index = fileURLToPath(new URL("../sheet/index.ts", import.meta.url));
+  if (!existsSync(index)) return null;
+  const sheetModule = (await import(pathToFileURL(index).href)) as { writeBenchSheets?: WriteBenchSheets };
+  return typeof sheetModule.writeBenchSheets === "function" ? sheetModule.writeBenchSheets : null;
+}
+
+function writeFile(root: string, path: string, text: string) {
+  const full = join(root, path);
+  mkdirSync(dirname(full), { recursive: true });
+  writeFileSync(full, text);
+}
+
+/**
+ * The whole atlas: every molecule loaded and validated first (a bad file stops the build before
+ * anything is written), each AtlasEntry computed once and shared by pages, plots, downloads and
+ * sheets, everything written into a fresh folder beside the target and swapped in only when all
+ * of it succeeded.
+ */
+export async function buildSite(options: BuildOptions): Promise<BuildReport> {
+  const log = options.log ?? (() => {});
+  const molecules = loadMoleculesOrThrow(options.moleculesDir).sort((a, b) => a.id.localeCompare(b.id));
+  const entries: AtlasEntry[] = [];
+  for (const molecule of molecules) {
+    for (const species of molecule.species) {
+      for (const temperatureK of standardTemperaturesK) entries.push(atlasEntry(molecule, species, temperatureK));
+    }
+  }
+  const build = options.build ?? buildIdentity(repoDir);
+  const writeBenchSheets = await findSheetWriter();
+
+  const outDir = resolve(options.outDir);
+  mkdirSync(dirname(outDir), { recursive: true });
+  const work = mkdtempSync(join(dirname(outDir), ".site-build-"));
+  try {
+    const plots = new Map<AtlasEntry, EntryPlots>();
+    for (const entry of entries) {
+      plots.set(entry, {
+        linearSvg: await bandOverviewSvg(entry, "linear"),
+        logSvg: await bandOverviewSvg(entry, "log"),
+        description: bandOverviewDescription(entry, "linear"),
+      });
+    }
+    log(`plots: ${plots.size * 2} SVGs`);
+
+    const nameIndexPath = "assets/search/names.json";
+    writeFile(work, nameIndexPath, nameIndexJson(molecules));
+    const lineIndexPaths = [];
+    const lineIndexReport = [];
+    for (const temperatureK of standardTemperaturesK) {
+      const path = `assets/search/lines-${temperatureToken(temperatureK)}K.json`;
+      const file = lineIndex(molecules, temperatureK);
+      const text = JSON.stringify(file);
+      writeFile(work, path, text);
+      lineIndexPaths.push({ temperatureK, path });
+      lineIndexReport.push({ temperatureK, lines: file.count, bytes: Buffer.byteLength(text) });
+    }
+    log(`search index: ${lineIndexReport.map((r) => `${r.lines} lines at ${r.temperatureK} K`).join(", ")} (${lineIndexBytesPerLine} bytes a line before base64)`);
+
+    for (const entry of entries) {
+      for (const band of entry.bands) {
+        writeFile(work, downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"), linesCsv(band.lines));
+        writeFile(work, downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"), JSON.stringify(linesDocument(entry.moleculeId, band.lines), null, 2) + "\n");
+      }
+    }
+
+    await bundleBrowserScript(join(work, "assets/search.js"));
+    cpSync(join(contentDir, "assets/site.css"), join(work, "assets/site.css"));
+
+    const data = siteData({
+      molecules,
+      entries,
+      plots,
+      build,
+      sheetsAvailable: writeBenchSheets !== null,
+      developersMarkdownPath: join(repoDir, "DEVELOPERS.md"),
+      nameIndexPath,
+      lineIndexPaths,
+    });
+    await runEleventy(work, data);
+
+    let sheets: string[] = [];
+    if (writeBenchSheets) {
+      sheets = await writeBenchSheets({ molecules, entries, outDir: work, build });
+      log(`bench sheets: ${sheets.length} PDFs`);
+    } else log("bench sheets: skipped (lib/sheet does not export writeBenchSheets yet)");
+
+    const links = checkInternalLinks(work);
+    if (links.broken.length) {
+      const sample = links.broken.slice(0, 10).map((b) => `  ${b.page}: ${b.href} (${b.reason})`).join("\n");
+      throw new BuildError(`${links.broken.length} broken internal link${links.broken.length === 1 ? "" : "s"}; the previous site is left in place:\n${sample}`);
+    }
+
+    swapDirectory(work, outDir);
+    return { outDir, molecules: molecules.length, pages: links.pages, entries: entries.length, sheets: sheets.length, lineIndex: lineIndexReport, build };
+  } catch (error) {
+    rmSync(work, { recursive: true, force: true });
+    throw error;
+  }
+}
+

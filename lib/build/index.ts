@@ -1,0 +1,6 @@
+export * from "./buildIdentity.ts";
+export * from "./buildSite.ts";
+export * from "./checkLinks.ts";
+export * from "./swapDirectory.ts";
+export * from "./bundleBrowser.ts";
+export * from "./siteStats.ts";

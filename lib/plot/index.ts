@@ -1,0 +1,4 @@
+export * from "./branchStyle.ts";
+export * from "./bandOverviewSpec.ts";
+export * from "./renderSvg.ts";
+export * from "./bandOverviewSvg.ts";

@@ -1,0 +1,31 @@
+import MiniSearch from "minisearch";
+import { atlasLines, defaultFindMinRelative } from "../atlas/index.ts";
+import type { Molecule } from "../molecules/index.ts";
+import { encodeLineIndex, type LineIndexFile } from "../browser/lineIndexCodec.ts";
+import { nameIndexOptions, type NameDocument } from "../browser/nameSearchOptions.ts";
+import { moleculePagePath, speciesPagePath } from "./sitePaths.ts";
+
+/** The name/formula/alias/CAS index as MiniSearch's JSON, molecules in id order. */
+export function nameIndexJson(molecules: Molecule[]): string {
+  const search = new MiniSearch<NameDocument>(nameIndexOptions);
+  search.addAll(
+    molecules.map((m) => ({
+      id: m.id,
+      name: m.name,
+      formula: m.formula,
+      casNumber: m.casNumber,
+      aliases: m.aliases.join(", "),
+      species: m.species.flatMap((s) => s.spellings).join(" "),
+      path: moleculePagePath(m.id),
+    })),
+  );
+  return JSON.stringify(search);
+}
+
+/**
+ * The wavenumber index at one temperature: exactly the lines `bandatlas find` searches (the
+ * atlas's atlasLines at find's default threshold), each pointing at its species page.
+ */
+export function lineIndex(molecules: Molecule[], temperatureK: number): LineIndexFile {
+  return encodeLineIndex(atlasLines(molecules, temperatureK, defaultFindMinRelative), (l) => speciesPagePath(l.molecule, l.species, temperatureK), temperatureK, defaultFindMinRelative);
+}
