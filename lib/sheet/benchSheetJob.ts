@@ -1,5 +1,6 @@
 import { mkdirSync } from "node:fs";
 import { dirname } from "node:path";
+import { SheetInputError } from "./buildIdentity.ts";
 import { renderBenchSheet, type BenchSheetRequest } from "./renderBenchSheet.ts";
 import { writeFileAtomic } from "./writeFileAtomic.ts";
 
@@ -11,7 +12,11 @@ export interface BenchSheetJob {
 
 export async function runBenchSheetJob(job: BenchSheetJob): Promise<string> {
   const bytes = await renderBenchSheet(job.request);
-  mkdirSync(dirname(job.path), { recursive: true });
+  try {
+    mkdirSync(dirname(job.path), { recursive: true });
+  } catch (error) {
+    throw new SheetInputError(`cannot create the folder ${dirname(job.path)}: ${(error as NodeJS.ErrnoException).code ?? String(error)}`);
+  }
   writeFileAtomic(job.path, bytes);
   return job.path;
 }

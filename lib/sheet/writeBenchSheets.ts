@@ -82,7 +82,7 @@ export async function writeBenchSheets(options: WriteBenchSheetsOptions): Promis
       jobs.push({ request: { molecule, entry, paper, build: options.build }, path: join(options.outDir, sheetPath(molecule.id, entry.species, entry.temperatureK, paper)) });
     }
   }
-  const workers = Math.min(options.workers ?? Math.min(2, availableParallelism()), Math.floor(jobs.length / sheetsPerWorkerStart));
+  const workers = Math.min(options.workers ?? Math.min(2, availableParallelism(), Math.floor(jobs.length / sheetsPerWorkerStart)), jobs.length);
   if (workers >= 2) await runInWorkers(jobs, workers);
   else for (const job of jobs) await runBenchSheetJob(job);
   return jobs.map((j) => j.path);
