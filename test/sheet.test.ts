@@ -86,11 +86,12 @@ describe("bench sheet of 12C16O at 296 K on A4", () => {
     const flat = text.replace(/\s+/g, " ");
     for (const source of co().sources) expect(flat).toContain(source.citation);
     expect(flat).toContain("Dunham expansion of the term values");
+    expect(flat).toContain("selection rule ΔJ = ±1"); // \s also matches the no-break spaces that keep it on one line
     expect(flat).toMatch(/Checked against 8 measured lines \(band 1-0\); largest \|predicted − measured\| = [\d.e-]+ cm⁻¹ at [PR]\(\d+\)/);
   });
 
   it("shows the units and symbols in an embedded DejaVu font, no system font", () => {
-    for (const glyphs of ["ν̃ / cm⁻¹", "λ vac / µm", "22.85 °C", "ΔJ = ±1", "ν₀", "★", "⚠"]) expect(text).toContain(glyphs);
+    for (const glyphs of ["ν̃ / cm⁻¹", "λ vac / µm", "22.85 °C", "ΔJ = ±1", "ν₀", "★", "⚠"]) expect(text.replace(/\u00a0/g, " ")).toContain(glyphs);
     const fonts = pdfFonts(path).split("\n").slice(2).filter(Boolean);
     expect(fonts.length).toBeGreaterThanOrEqual(2);
     for (const row of fonts) {

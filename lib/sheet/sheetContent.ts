@@ -1,5 +1,5 @@
 import type { AtlasBand, AtlasEntry } from "../atlas/index.ts";
-import type { Branch, Line } from "../core/index.ts";
+import { sameBand, type Band, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
 import { fixed, lineCells, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
@@ -91,7 +91,7 @@ export function tableRows(lines: Line[]): SheetTableRow[] {
   return [...byJ.values()].sort((a, b) => a.jLower - b.jLower);
 }
 
-function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number): SheetSource[] {
+function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number, band: Band): SheetSource[] {
   const model = molecule.species[speciesIndex].model;
   const roles = new Map<string, string[]>();
   const add = (key: string, role: string) => {
@@ -100,7 +100,7 @@ function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number):
     roles.set(key, list);
   };
   add(model.constantsSourceKey, model.constantsOrigin === "cited" ? "constants" : `constants of ${molecule.species[0].model.label}`);
-  for (const i of model.intensities) if (i.band.vUpper === 1 && i.band.vLower === 0) add(i.sourceKey, "intensities");
+  for (const i of model.intensities) if (sameBand(i.band, band)) add(i.sourceKey, "intensities");
   for (const r of entry.residuals) add(r.reference.sourceKey, "measured lines");
   return [...roles.entries()].map(([key, list]) => {
     const source = molecule.sources.find((s) => s.key === key);
@@ -138,6 +138,14 @@ function otherBandsNoteOf(entry: AtlasEntry): string | null {
   return `At ${entry.temperatureK} K the hot band${shown.length === 1 ? "" : "s"} ${parts.join(", ")} also show${shown.length === 1 ? "s" : ""} in a spectrum; only the fundamental is drawn and listed here.`;
 }
 
+/** The model in words, as the core computes it for this kind of species. */
+function termModel(model: SpeciesModel): string {
+  const linear = model.linear;
+  if (!linear) return "Dunham expansion of the term values E(v, J) in (v + ½) and J(J + 1); ¹Σ⁺–¹Σ⁺ selection rule ΔJ\u00a0=\u00a0±1";
+  const spin = linear.nuclearSpinWeights ? `; nuclear-spin weights even J : odd J = ${linear.nuclearSpinWeights.evenJ} : ${linear.nuclearSpinWeights.oddJ} in Σg⁺ states (swapped in Σu⁺)` : "";
+  return `Each vibrational state's levels G + B·J(J + 1) − D·[J(J + 1)]² + H·[J(J + 1)]³ from the file's state constants; parallel (Σ–Σ) band, ΔJ\u00a0=\u00a0±1${spin}`;
+}
+
 export function sheetContent(input: SheetContentInput): SheetContent {
   const { molecule, entry, build } = input;
   const speciesIndex = molecule.species.findIndex((s) => s.model.label === entry.species);
@@ -158,7 +166,7 @@ export function sheetContent(input: SheetContentInput): SheetContent {
     title,
     formula: displayText(molecule.formula),
     species: entry.species,
-    bandText: `band ${fundamental.label} (fundamental)`,
+    bandText: fundamental.name && fundamental.name !== fundamental.label ? `band ${displayText(fundamental.name)} (${displayText(fundamental.label)})` : `band ${fundamental.label} (fundamental)`,
     temperatureText,
     bandOriginText: `${fixed(bandLines.bandOrigin, 4)} cm⁻¹`,
     summaryText: `${bandLines.lines.length} lines down to ${significant(Math.min(...bandLines.lines.map((l) => l.relativeIntensity)), 1)} of the strongest; partition function Q = ${significant(entry.partitionFunction, 5)}`,
@@ -169,10 +177,8 @@ export function sheetContent(input: SheetContentInput): SheetContent {
     rows: tableRows(bandLines.lines),
     otherBandsNote: otherBandsNoteOf(entry),
     calibrationNote: calibration,
-    sources: sourcesOf(molecule, entry, speciesIndex),
-    modelText:
-      `Dunham expansion of the term values E(v, J) in (v + ½) and J(J + 1); ¹Σ⁺ selection rule ΔJ = ±1; Boltzmann populations with (2J + 1) degeneracy and Q summed over the computed levels; ` +
-      `Hönl–London factors; ${constants}; ${intensity}.`,
+    sources: sourcesOf(molecule, entry, speciesIndex, bandLines.band),
+    modelText: `${termModel(model)}; Boltzmann populations with (2J + 1) degeneracy and Q summed over the computed levels; Hönl–London factors; ${constants}; ${intensity}.`,
     accuracyText: accuracyOf(entry, bandLines.lines),
     documentTitle: `${title} ${entry.species} ${fundamental.label} band at ${entry.temperatureK} K — bench sheet`,
   };
