@@ -22,6 +22,8 @@ export interface BuildOptions {
   outDir: string;
   /** Default: from package.json and git. */
   build?: BuildIdentity;
+  /** Write the PDF bench sheets (default true; tests of the pages turn them off for speed). */
+  sheets?: boolean;
   /** Progress lines for the person running the build. */
   log?: (line: string) => void;
 }
@@ -76,7 +78,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     }
   }
   const build = options.build ?? buildIdentity(repoDir);
-  const writeBenchSheets = await findSheetWriter();
+  const writeBenchSheets = options.sheets === false ? null : await findSheetWriter();
 
   const outDir = resolve(options.outDir);
   mkdirSync(dirname(outDir), { recursive: true });
@@ -132,7 +134,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     if (writeBenchSheets) {
       sheets = await writeBenchSheets({ molecules, entries, outDir: work, build });
       log(`bench sheets: ${sheets.length} PDFs`);
-    } else log("bench sheets: skipped (lib/sheet does not export writeBenchSheets yet)");
+    } else log(options.sheets === false ? "bench sheets: not requested" : "bench sheets: skipped (lib/sheet does not export writeBenchSheets yet)");
 
     const links = checkInternalLinks(work);
     if (links.broken.length) {

@@ -12,3 +12,10 @@ export function pageLineCells(line: Line) {
   const c = lineCells(line);
   return { ...c, lineIntensity: c.lineIntensity || "—" };
 }
+
+const superscriptDigits = "⁰¹²³⁴⁵⁶⁷⁸⁹";
+
+/** A species label as chemists write it: 12C16O → ¹²C¹⁶O (plain text, no markup needed). */
+export function speciesDisplay(label: string): string {
+  return label.replace(/(\d+)(?=[A-Z])/g, (digits) => [...digits].map((d) => superscriptDigits[Number(d)]).join(""));
+}

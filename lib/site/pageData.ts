@@ -3,7 +3,7 @@ import { defaultFindMinRelative, defaultTemperatureK, standardTemperaturesK } fr
 import { fixed, significant } from "../format/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { describeBuild, type BuildIdentity } from "../build/buildIdentity.ts";
-import { pageLineCells, signedSignificant } from "./formatCells.ts";
+import { pageLineCells, signedSignificant, speciesDisplay } from "./formatCells.ts";
 import { ghsPictogramNames } from "./ghsPictograms.ts";
 import { downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "./sitePaths.ts";
 
@@ -145,6 +145,7 @@ export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: En
     formula: molecule.formula,
     moleculePath: moleculePagePath(molecule.id),
     species: entry.species,
+    speciesDisplay: speciesDisplay(entry.species),
     temperatureK: entry.temperatureK,
     token: temperatureToken(entry.temperatureK),
     partitionFunction: significant(entry.partitionFunction, 6),
