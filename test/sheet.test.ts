@@ -100,6 +100,10 @@ describe("bench sheet of 12C16O at 296 K on A4", () => {
     }
   });
 
+  it("says nothing about calibration-grade lines while no flags are given", () => {
+    expect(text).not.toContain("Recommended for calibration");
+  });
+
   it("marks the strongest lines and keys the marks in a legend", () => {
     expect(text).toContain("★ bold: strong line, relative intensity ≥ 0.5");
     // R(7) is the band's strongest line at 296 K (relative intensity 1), so its row is marked.
@@ -167,6 +171,15 @@ describe("bench sheet on Letter, and short tables", () => {
     expect(pdfInfo(path).Pages).toBe("3");
     expect(text).toContain("page 3 of 3");
     expect(text.replace(/\s+/g, " ")).toMatch(/hot bands 2-1 \(strongest line [\d.]+ of the fundamental's\)/);
+  });
+});
+
+describe("calibration-grade flags (optional input)", () => {
+  it("names the flagged lines under the plot when they are given", async () => {
+    const entry = atlasEntry(co(), co().species[0], 296);
+    const bytes = await renderBenchSheet({ molecule: co(), entry, paper: "a4", build, calibrationLineLabels: ["R(3)", "P(4)"] });
+    const text = pdfText(writePdf(dir, "calibration.pdf", bytes)).replace(/\s+/g, " ");
+    expect(text).toContain("Recommended for calibration (calibration-grade flags of the molecule file): R(3), P(4).");
   });
 });
 
