@@ -116,7 +116,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     }
 
     await bundleBrowserScript(join(work, "assets/search.js"));
-    cpSync(join(contentDir, "assets/site.css"), join(work, "assets/site.css"));
+    for (const asset of ["site.css", "favicon.svg"]) cpSync(join(contentDir, "assets", asset), join(work, "assets", asset));
 
     const data = siteData({
       molecules,

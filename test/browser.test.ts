@@ -1,0 +1,140 @@
+// The built site in a real Chromium: search by formula, CAS number and wavenumber, the plot, the
+// CSV download. Chromium must be installed (scripts/ensure-test-tools.sh); without it this test
+// fails, it does not skip.
+import { createReadStream, existsSync, mkdtempSync, readFileSync, rmSync, statSync } from "node:fs";
+import { createServer, type Server } from "node:http";
+import type { AddressInfo } from "node:net";
+import { tmpdir } from "node:os";
+import { extname, join, normalize, sep } from "node:path";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { buildSite } from "../lib/build/index.ts";
+import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
+import { runCli } from "../lib/cli/main.ts";
+
+// The command line's own entry (what bin/bandatlas.js runs), in-process to keep the test fast.
+async function cli(...args: string[]): Promise<string> {
+  const { stdout, stderr, exitCode } = await runCli(args);
+  if (exitCode !== 0) throw new Error(`bandatlas ${args.join(" ")}: ${stderr}`);
+  return stdout;
+}
+const types: Record<string, string> = { ".html": "text/html; charset=utf-8", ".css": "text/css", ".js": "text/javascript", ".json": "application/json", ".csv": "text/csv; charset=utf-8", ".pdf": "application/pdf" };
+
+let work: string;
+let site: string;
+let server: Server;
+let base: string;
+let browser: Browser;
+let page: Page;
+const problems: string[] = [];
+
+beforeAll(async () => {
+  work = mkdtempSync(join(tmpdir(), "bandatlas-browser-"));
+  site = join(work, "site");
+  await buildSite({ moleculesDir: shippedMoleculesDir, outDir: site, sheets: false });
+  server = createServer((req, res) => {
+    const path = normalize(decodeURIComponent(new URL(req.url!, "http://x").pathname)).replace(/^[/\\]+/, "");
+    let file = join(site, path);
+    if (!file.startsWith(site + sep) && file !== site) return void res.writeHead(403).end();
+    if (existsSync(file) && statSync(file).isDirectory()) file = join(file, "index.html");
+    if (!existsSync(file)) return void res.writeHead(404).end("not found");
+    res.writeHead(200, { "content-type": types[extname(file)] ?? "application/octet-stream" });
+    createReadStream(file).pipe(res);
+  });
+  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
+  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}/`;
+  browser = await chromium.launch({
+    executablePath: "/usr/bin/chromium",
+    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--no-first-run", "--disable-sync"],
+  });
+  page = await (await browser.newContext({ acceptDownloads: true })).newPage();
+  // Script errors and Content-Security-Policy violations show up as console errors.
+  page.on("console", (m) => m.type() === "error" && problems.push(m.text()));
+  page.on("pageerror", (e) => problems.push(e.message));
+  page.on("response", (r) => r.status() >= 400 && problems.push(`${r.status()} ${r.url()}`));
+});
+
+afterAll(async () => {
+  await browser?.close();
+  await new Promise((resolve) => server?.close(resolve));
+  if (work) rmSync(work, { recursive: true, force: true });
+});
+
+describe("the site in Chromium", () => {
+  it("opens the home page with the molecule list and the search forms", async () => {
+    await page.goto(base);
+    await expect(page.title()).resolves.toContain("bandatlas");
+    const rows = await page.locator("table.molecules tbody tr").count();
+    expect(rows).toBe(readFileSync(join(site, "assets/search/names.json"), "utf8").match(/"documentCount":(\d+)/)![1] * 1);
+    await expect(page.locator("label[for=q]").textContent()).resolves.toBe("Molecule");
+  });
+
+  it("finds a molecule by formula with the keyboard, and by CAS number", async () => {
+    await page.goto(base);
+    await page.locator("#q").focus();
+    await page.keyboard.type("HCl");
+    await page.keyboard.press("Enter");
+    const first = page.locator("#name-results li a").first();
+    await expect(first.textContent()).resolves.toBe("Hydrogen chloride (HCl)");
+    // CAS number of hydrogen bromide, 10035-10-6 (CAS Registry, as in molecules/hbr.yaml).
+    await page.fill("#q", "10035-10-6");
+    await page.click("form[data-search=name] button");
+    await expect(page.locator("#name-results li a").allTextContents()).resolves.toEqual(["Hydrogen bromide (HBr)"]);
+    await page.locator("#name-results li a").first().click();
+    await page.waitForURL(/molecules\/hbr\//);
+    await expect(page.locator("h1").textContent()).resolves.toContain("Hydrogen bromide");
+    await expect(page.locator(".caution").count()).resolves.toBe(1);
+  });
+
+  it("finds lines near a wavenumber exactly as `bandatlas find` does and lands on the row", async () => {
+    const wavenumber = "2143.3";
+    const expected = JSON.parse(await cli("find", wavenumber, "--format", "json")).matches as Array<{ molecule: string; species: string; band: string; label: string; wavenumber: number; offset: number; relativeIntensity: number }>;
+    expect(expected.length).toBeGreaterThan(2);
+    const table = (await cli("find", wavenumber)).trim().split("\n").slice(4).map((l) => l.trim().split(/\s+/));
+    await page.goto(base);
+    await page.fill("#wavenumber", wavenumber);
+    await page.click("form[data-search=wavenumber] button");
+    await page.locator("#find-results tbody tr").first().waitFor();
+    const rows = await page.locator("#find-results tbody tr").evaluateAll((trs) => trs.map((tr) => [...tr.children].map((td) => td.textContent!.trim())));
+    // Same lines, same order, same printed digits as the CLI table.
+    expect(rows).toEqual(table);
+    expect(rows.map((r) => r.slice(0, 4))).toEqual(expected.map((m) => [m.molecule, m.species, m.band, m.label]));
+    await page.locator("#find-results tbody tr").first().locator("a").click();
+    await page.waitForURL(/#line-/);
+    const target = page.locator("tr:target");
+    await expect(target.locator("th").textContent()).resolves.toBe(expected[0].label);
+    await expect(target.locator("td").first().textContent()).resolves.toBe(expected[0].wavenumber.toFixed(4));
+    expect(page.url()).toContain(`molecules/${expected[0].molecule}/${expected[0].species}-296K/index.html#line-${expected[0].band}-`);
+  });
+
+  it("shows the band overview as an SVG with axes, and switches to a log scale", async () => {
+    await page.goto(`${base}molecules/co/12C16O-296K/index.html`);
+    const linear = page.locator("figure.plot-linear svg[role=img]");
+    await expect(linear.isVisible()).resolves.toBe(true);
+    await expect(linear.getAttribute("aria-label")).resolves.toMatch(/^Stick spectrum of the 1-0 band of 12C16O at 296 K/);
+    const texts = await linear.locator("text").allTextContents();
+    expect(texts).toContain("wavenumber / cm⁻¹");
+    expect(texts).toContain("relative intensity");
+    expect(texts).toContain("2140"); // an x tick label near the CO band origin (2143.27 cm⁻¹)
+    await page.click("label[for=scale-log]");
+    await expect(page.locator("figure.plot-log svg").isVisible()).resolves.toBe(true);
+    await expect(linear.isVisible()).resolves.toBe(false);
+    await expect(page.locator("figure.plot-log svg text").allTextContents()).resolves.toContain("relative intensity (log scale)");
+  });
+
+  it("downloads the CSV byte-identical to `bandatlas lines --format csv`", async () => {
+    await page.goto(`${base}molecules/co/12C16O-296K/index.html`);
+    const [download] = await Promise.all([page.waitForEvent("download"), page.locator("#band-1-0 .downloads a", { hasText: "CSV" }).click()]);
+    const saved = join(work, "download.csv");
+    await download.saveAs(saved);
+    const expected = await cli("lines", "co", "--species", "12C16O", "--band", "1-0", "--temperature", "296", "--format", "csv");
+    expect(readFileSync(saved).equals(Buffer.from(expected, "utf8"))).toBe(true);
+    // And one at a non-default temperature, overtone band, other species, fetched by URL.
+    const other = await (await fetch(`${base}molecules/hcl/1H37Cl-273.15K/hcl-1H37Cl-273.15K-2-0.csv`)).text();
+    expect(other).toBe(await cli("lines", "hcl", "--species", "1H37Cl", "--band", "2-0", "--temperature", "273.15", "--format", "csv"));
+  });
+
+  it("ran without script errors or Content-Security-Policy violations", () => {
+    expect(problems).toEqual([]);
+  });
+});
