@@ -71,13 +71,13 @@ describe("writeBenchSheets", () => {
     expect(sheetFileName("1H35Cl", 298.15, "letter")).toBe("1H35Cl-298.15K-letter.pdf");
   });
 
-  it("writes every entry in A4 and Letter under sheets/<molecule>/, on two worker threads, with the same bytes as in-process", async () => {
+  it("writes every entry in A4 and Letter under sheets/<molecule>/, on the main thread and a worker thread, with the same bytes as in-process", async () => {
     const molecules = shippedMolecules();
     const co = selectMolecule(molecules, "co");
     const hf = selectMolecule(molecules, "hf");
     const entries = [...co.species.map((s) => atlasEntry(co, s, 296)), atlasEntry(hf, hf.species[0], 1000)];
     const outDir = scratchDir("site");
-    const paths = await writeBenchSheets({ molecules, entries, outDir, build, workers: 2 });
+    const paths = await writeBenchSheets({ molecules, entries, outDir, build, threads: 2 });
     const expected = ["co/12C16O-296K", "co/13C16O-296K", "co/12C18O-296K", "hf/1H19F-1000K"].flatMap((n) => [`${n}-a4.pdf`, `${n}-letter.pdf`]).map((n) => join(outDir, "sheets", n));
     expect(paths).toEqual(expected);
     expect(readdirSync(join(outDir, "sheets", "co")).sort()).toEqual(expected.slice(0, 6).map((p) => p.split("/").pop()).sort());
