@@ -1,6 +1,7 @@
 import { spawnSync } from "node:child_process";
 import { mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
+import { Worker } from "node:worker_threads";
 import { fileURLToPath } from "node:url";
 import { beforeAll, describe, expect, it } from "vitest";
 import { atlasEntry, selectMolecule } from "../lib/atlas/index.ts";
@@ -84,6 +85,25 @@ describe("writeBenchSheets", () => {
     const inProcess = await renderBenchSheet({ molecule: hf, entry: entries[3], paper: "letter", build });
     expect(Buffer.compare(readFileSync(paths[7]), inProcess)).toBe(0);
     expect(pdfText(paths[7])).toContain("1H19F · band 1-0 (fundamental) · T = 1000 K");
+  });
+
+  it("renders on a worker thread the same bytes as on the main thread", async () => {
+    const hcl = selectMolecule(shippedMolecules(), "hcl");
+    const entry = atlasEntry(hcl, hcl.species[1], 273.15);
+    const path = join(scratchDir("worker"), "sheets", "hcl", "1H37Cl-273.15K-a4.pdf");
+    const worker = new Worker(new URL("../lib/sheet/sheetWorkerEntry.mjs", import.meta.url));
+    try {
+      const reply = await new Promise<{ id: number; ok: boolean; message?: string }>((resolve, reject) => {
+        worker.once("message", resolve);
+        worker.once("error", reject);
+        worker.postMessage({ id: 7, job: { request: { molecule: hcl, entry, paper: "a4", build }, path } });
+      });
+      expect(reply).toEqual({ id: 7, ok: true });
+    } finally {
+      await worker.terminate();
+    }
+    const inProcess = await renderBenchSheet({ molecule: hcl, entry, paper: "a4", build });
+    expect(Buffer.compare(readFileSync(path), inProcess)).toBe(0);
   });
 
   it("fails with a plain message when the site folder cannot hold the sheets, leaving no partial file", async () => {
