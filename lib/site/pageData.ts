@@ -1,10 +1,12 @@
 import type { AtlasBand, AtlasEntry } from "../atlas/index.ts";
 import { defaultFindMinRelative, defaultTemperatureK, standardTemperaturesK } from "../atlas/index.ts";
 import { fixed, significant } from "../format/index.ts";
+import { bandLabel } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { describeBuild, type BuildIdentity } from "../build/buildIdentity.ts";
 import { pageLineCells, signedSignificant, speciesDisplay } from "./formatCells.ts";
 import { ghsPictogramNames } from "./ghsPictograms.ts";
+import { nearInfraredLimitNm, nearInfraredRows } from "./nearInfraredIndex.ts";
 import { downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "./sitePaths.ts";
 
 /** Plots of one entry, rendered beforehand (lib/plot) and inlined by the template. */
@@ -57,7 +59,8 @@ export function moleculeView(molecule: Molecule) {
       label: species.model.label,
       isReference: species.isReference,
       abundance: significant(species.model.abundance, 4),
-      reducedMassU: fixed(species.model.reducedMassU, 6),
+      // A linear species has no reduced mass (it belongs to a diatomic): shown as a dash.
+      reducedMassU: Number.isFinite(species.model.reducedMassU) ? fixed(species.model.reducedMassU, 6) : "—",
       constantsNote: constantsNote(molecule, species),
       constantsSource: citationOf(molecule, species.model.constantsSourceKey),
       given: species.given
@@ -84,7 +87,7 @@ export function moleculeView(molecule: Molecule) {
 
 export type MoleculeView = ReturnType<typeof moleculeView>;
 
-const bandTitles: Record<AtlasBand["kind"], string> = { fundamental: "fundamental", hot: "hot band", overtone: "overtone" };
+const bandTitles: Record<AtlasBand["kind"], string> = { fundamental: "fundamental", hot: "hot band", overtone: "overtone", combination: "combination band" };
 
 function intensityNote(band: AtlasBand): string {
   const origin = band.lines.intensityOrigin;
@@ -101,13 +104,13 @@ export function bandView(entry: AtlasEntry, band: AtlasBand) {
   const residualByLabel = new Map<string, number>();
   for (const r of entry.residuals) {
     if (r.predictedMinusMeasured === null) continue;
-    if (`${r.reference.band.vUpper}-${r.reference.band.vLower}` !== band.label) continue;
+    if (bandLabel(r.reference.band) !== band.label) continue;
     residualByLabel.set(r.reference.label, r.predictedMinusMeasured);
   }
   return {
     label: band.label,
     kind: band.kind,
-    title: `${band.label} ${bandTitles[band.kind]}`,
+    title: `${band.label}${band.name !== band.label ? ` (${band.name})` : ""} ${bandTitles[band.kind]}`,
     anchor: `band-${band.label}`,
     bandOrigin: fixed(band.lines.bandOrigin, 4),
     lineCount: band.lines.lines.length,
@@ -153,7 +156,7 @@ export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: En
     plots,
     fundamental: bands.filter((b) => b.kind === "fundamental"),
     hot: bands.filter((b) => b.kind === "hot"),
-    overtones: bands.filter((b) => b.kind === "overtone"),
+    overtones: bands.filter((b) => b.kind === "overtone" || b.kind === "combination"),
     temperatures: sameSpecies.map((e) => ({ token: temperatureToken(e.temperatureK), path: speciesPagePath(e.moleculeId, e.species, e.temperatureK), current: e === entry })),
     otherSpecies: molecule.species
       .filter((s) => s.model.label !== entry.species)
@@ -184,12 +187,12 @@ export function accuracyRows(molecules: Molecule[], entries: AtlasEntry[]) {
       worst: worst
         ? {
             species: worst.species,
-            band: `${worst.r.reference.band.vUpper}-${worst.r.reference.band.vLower}`,
+            band: bandLabel(worst.r.reference.band),
             label: worst.r.reference.label,
             measured: String(worst.r.reference.wavenumber),
             measuredMinusPredicted: signedSignificant(-worst.r.predictedMinusMeasured!, 2),
             path: speciesPagePath(molecule.id, worst.species, defaultTemperatureK),
-            rowId: lineRowId(`${worst.r.reference.band.vUpper}-${worst.r.reference.band.vLower}`, worst.r.reference.label),
+            rowId: lineRowId(bandLabel(worst.r.reference.band), worst.r.reference.label),
             source: citationOf(molecule, worst.r.reference.sourceKey),
           }
         : null,
@@ -217,6 +220,7 @@ export function siteData(input: SiteDataInput) {
     molecules: input.molecules.map(moleculeView),
     speciesPages: input.entries.map((e) => speciesPageView(byId.get(e.moleculeId)!, e, input.plots.get(e)!, input.sheetsAvailable, input.entries)),
     accuracy: accuracyRows(input.molecules, input.entries),
+    nearInfrared: { rows: nearInfraredRows(input.molecules, input.entries), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },
     temperatures: standardTemperaturesK.map((t) => ({ value: t, token: temperatureToken(t), isDefault: t === defaultTemperatureK })),
     find: { windowCm: 1.0, minRelative: defaultFindMinRelative, temperatureK: defaultTemperatureK },
     search: { nameIndex: input.nameIndexPath, lineIndexes: input.lineIndexPaths.map((x) => ({ token: temperatureToken(x.temperatureK), path: x.path })) },

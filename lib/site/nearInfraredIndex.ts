@@ -1,0 +1,50 @@
+import { defaultTemperatureK, type AtlasEntry } from "../atlas/index.ts";
+import { fixed } from "../format/index.ts";
+import type { Molecule } from "../molecules/index.ts";
+import { speciesPagePath } from "./sitePaths.ts";
+
+/** The short-wavelength end of the near infrared as the telecom and NIR trade reads it, 2.5 µm (common practice, no source). */
+export const nearInfraredLimitNm = 2500;
+
+/**
+ * One row per band of every species at the default temperature: its vacuum wavelength range in
+ * nm over the lines the atlas lists, the band origin, and a link to the species page. Sorted by
+ * the band origin's wavelength, shortest first, because near-infrared laboratories read bands by
+ * wavelength. Diatomic overtones and linear-molecule bands appear alike: the rows come from the
+ * atlas entries, whatever kind of molecule made them.
+ */
+export function nearInfraredRows(molecules: Molecule[], entries: AtlasEntry[]) {
+  const byId = new Map(molecules.map((m) => [m.id, m]));
+  const rows = [];
+  for (const entry of entries) {
+    if (entry.temperatureK !== defaultTemperatureK) continue;
+    const molecule = byId.get(entry.moleculeId)!;
+    for (const band of entry.bands) {
+      const lines = band.lines.lines;
+      if (!lines.length) continue;
+      // Lines are sorted by wavenumber: the last has the shortest wavelength.
+      const shortestNm = 1e7 / lines.at(-1)!.wavenumber;
+      const longestNm = 1e7 / lines[0].wavenumber;
+      const originNm = 1e7 / band.lines.bandOrigin;
+      rows.push({
+        originNmValue: originNm,
+        nearInfrared: shortestNm < nearInfraredLimitNm,
+        moleculeName: molecule.name,
+        formula: molecule.formula,
+        species: entry.species,
+        band: band.label,
+        bandName: band.name,
+        kind: band.kind,
+        originNm: fixed(originNm, 3),
+        originCm: fixed(band.lines.bandOrigin, 4),
+        shortestNm: fixed(shortestNm, 3),
+        longestNm: fixed(longestNm, 3),
+        lineCount: lines.length,
+        path: speciesPagePath(entry.moleculeId, entry.species, entry.temperatureK),
+        anchor: `band-${band.label}`,
+      });
+    }
+  }
+  rows.sort((a, b) => a.originNmValue - b.originNmValue || a.species.localeCompare(b.species));
+  return rows.map(({ originNmValue: _omit, ...row }) => row);
+}
