@@ -4,6 +4,7 @@ import { linesHelp, runLines } from "./lines.ts";
 import { runSheet, sheetHelp } from "./sheet.ts";
 import { newHelp, runNew } from "./new.ts";
 import { buildHelp, runBuild } from "./build.ts";
+import { runServe, serveHelp } from "./serve.ts";
 
 export interface CommandResult {
   output: string;
@@ -23,5 +24,6 @@ export const commands: Record<string, Command> = {
   sheet: { summary: "printable PDF bench sheet of one gas at one temperature", help: sheetHelp, run: runSheet },
   check: { summary: "validate molecule files (file:line:column for every problem)", help: checkHelp, run: runCheck },
   build: { summary: "build the atlas website (pages, downloads, search, sheets) into site/", help: buildHelp, run: runBuild },
+  serve: { summary: "build the site and serve it on localhost, rebuilding when molecule files change", help: serveHelp, run: runServe },
   new: { summary: "start a new molecule file from the commented template", help: newHelp, run: runNew },
 };
