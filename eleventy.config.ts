@@ -4,6 +4,7 @@
 import syntaxHighlight from "@11ty/eleventy-plugin-syntaxhighlight";
 import { EleventyRenderPlugin } from "@11ty/eleventy";
 import { relativeUrl } from "./lib/site/sitePaths.ts";
+import { constantSymbol } from "./lib/site/constantSymbols.ts";
 
 interface EleventyPageContext {
   page: { url: string };
@@ -30,6 +31,7 @@ export default function eleventyConfig(config: any): void {
   config.addFilter("href", function (this: EleventyPageContext, target: string) {
     return relativeUrl(pagePath(this.page.url), target);
   });
+  config.addFilter("constantSymbol", constantSymbol);
   /** The way from the current page back to the site root ("", "../", "../../../"). */
   config.addFilter("rootPrefix", function (this: EleventyPageContext) {
     return relativeUrl(pagePath(this.page.url), "x").slice(0, -1);

@@ -65,7 +65,7 @@ describe("the site in Chromium", () => {
     await page.goto(base);
     await expect(page.title()).resolves.toContain("bandatlas");
     const rows = await page.locator("table.molecules tbody tr").count();
-    expect(rows).toBe(readFileSync(join(site, "assets/search/names.json"), "utf8").match(/"documentCount":(\d+)/)![1] * 1);
+    expect(rows).toBe(Number(readFileSync(join(site, "assets/search/names.json"), "utf8").match(/"documentCount":(\d+)/)![1]));
     await expect(page.locator("label[for=q]").textContent()).resolves.toBe("Molecule");
   });
 

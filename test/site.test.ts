@@ -14,6 +14,7 @@ import { accuracyRows, bandView } from "../lib/site/pageData.ts";
 import { lineIndex, nameIndexJson } from "../lib/site/searchIndexes.ts";
 import { lineRowId, relativeUrl, speciesPagePath } from "../lib/site/sitePaths.ts";
 import { speciesDisplay } from "../lib/site/formatCells.ts";
+import { constantSymbol } from "../lib/site/constantSymbols.ts";
 
 const root = join(import.meta.dirname, "..");
 const molecules = loadMoleculesOrThrow(shippedMoleculesDir);
@@ -59,6 +60,9 @@ describe("page data", () => {
   it("writes species as chemists do and links relatively", () => {
     expect(speciesDisplay("12C16O")).toBe("¹²C¹⁶O");
     expect(speciesDisplay("1H35Cl")).toBe("¹H³⁵Cl");
+    // Handbook notation of the constants (Huber & Herzberg 1979, fact of the trade).
+    expect(constantSymbol("omegaExe")).toBe("ωₑxₑ");
+    expect(constantSymbol("Y12")).toBe("Y₁₂");
     expect(relativeUrl("molecules/co/12C16O-296K/index.html", "assets/site.css")).toBe("../../../assets/site.css");
     expect(relativeUrl("index.html", speciesPagePath("co", "12C16O", 273.15))).toBe("molecules/co/12C16O-273.15K/index.html");
     expect(relativeUrl("molecules/co/index.html", "molecules/co/12C16O-296K/index.html")).toBe("12C16O-296K/index.html");
@@ -129,8 +133,10 @@ describe("the build", () => {
 
   it("escapes every text from a molecule file and allows no inline script", () => {
     const pages = files(siteA).filter((f) => f.endsWith(".html"));
-    // home, method, cautions, contributing, the molecule page and one page per standard temperature
-    expect(pages).toHaveLength(5 + standardTemperaturesK.length);
+    // home, method, cautions, contributing, the molecule page, one page per standard temperature
+    // (and any further hand-written page in content/)
+    expect(pages.length).toBeGreaterThanOrEqual(5 + standardTemperaturesK.length);
+    for (const t of standardTemperaturesK) expect(pages).toContain(`molecules/hostile/12C16O-${t}K/index.html`);
     const molecule = readFileSync(join(siteA, "molecules/hostile/index.html"), "utf8");
     // The hostile fixture's name, formula, hazard sentence and citation arrive as text only.
     expect(molecule).toContain("&lt;img src=x onerror=alert(1)&gt;Evil&lt;/script&gt;&lt;script&gt;alert(2)&lt;/script&gt;");
