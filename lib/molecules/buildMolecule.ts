@@ -10,6 +10,7 @@ import {
   type DunhamCoefficient,
   type EquilibriumConstants,
   type EquilibriumUncertainties,
+  type GasBroadening,
   type SpeciesModel,
 } from "../core/index.ts";
 import { isotope } from "./isotopes.ts";
@@ -65,6 +66,8 @@ export interface Molecule {
   species: SpeciesInfo[];
   /** "linear": a linear polyatomic molecule whose species carry states and bands (model.linear). */
   structure: "diatomic" | "linear";
+  /** Cited self and air broadening from the file; absent or null: none given (spectra use a flagged typical value). */
+  broadening?: GasBroadening | null;
 }
 
 function split(m: Measured): { value: number; uncertainty: number | null } {
@@ -188,5 +191,11 @@ export function buildMolecule(file: MoleculeFile, fileName: string): Molecule {
     sources: Object.entries(file.sources).map(([key, s]) => ({ key, citation: s.citation, url: s.url ?? null, doi: s.doi ?? null })),
     species: models,
     structure: "diatomic",
+    broadening: file.broadening ? { self: broadeningOf(file.broadening.self), air: broadeningOf(file.broadening.air) } : null,
   };
+}
+
+function broadeningOf(block: NonNullable<MoleculeFile["broadening"]>["self"]): GasBroadening["self"] {
+  const table = block.byAbsM ? [...block.byAbsM].sort((a, b) => a.absM - b.absM) : null;
+  return { hwhmCmPerAtm: block.hwhmCmPerAtm, byAbsM: table, temperatureExponent: block.temperatureExponent, sourceKey: block.source, origin: "cited" };
 }

@@ -182,6 +182,9 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
       if (!(entry.bandStrength.temperatureK > 0)) add([...path, "bandStrength", "temperatureK"], "the band strength's temperature must be above 0 K");
     }
   });
+  if (file.broadening) {
+    for (const which of ["self", "air"] as const) checkSource(["broadening", which, "source"], file.broadening[which].source);
+  }
   (file.referenceLines ?? []).forEach((group, i) => {
     const path = ["referenceLines", i];
     checkSource([...path, "source"], group.source);

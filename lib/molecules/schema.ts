@@ -110,6 +110,22 @@ const intensitySchema = mapping(
   "an intensity entry",
 );
 
+const broadeningCoefficientSchema = mapping(
+  {
+    source: sourceKey,
+    hwhmCmPerAtm: numberIn("cm⁻¹/atm (HWHM at 296 K)").positive({ error: "a broadening coefficient is above 0" }),
+    temperatureExponent: numberIn("the exponent n of (296/T)^n (dimensionless)"),
+    byAbsM: listOf(
+      mapping({ absM: numberIn("|m| (m = J''+1 in R, −J'' in P)").int({ error: "|m| is a whole number" }).positive({ error: "|m| is at least 1" }), hwhmCmPerAtm: numberIn("cm⁻¹/atm (HWHM at 296 K)").positive({ error: "a broadening coefficient is above 0" }) }, "a J-dependent broadening value"),
+      "J-dependent values by |m|, in increasing |m|",
+    ).optional(),
+  },
+  "a broadening coefficient",
+);
+
+/** Pressure broadening of the molecule's lines by itself and by air (HWHM per atm at 296 K). */
+export const broadeningSchema = mapping({ self: broadeningCoefficientSchema, air: broadeningCoefficientSchema }, "a broadening block");
+
 export const referenceLineSchema = mapping(
   {
     label: z
@@ -145,6 +161,7 @@ export const moleculeFileSchema = mapping(
     }),
     species: listOf(speciesSchema, "species").min(1, { error: "give at least the reference species" }),
     intensity: listOf(intensitySchema, "intensity entries").optional(),
+    broadening: broadeningSchema.optional(),
     referenceLines: listOf(
       mapping({ source: sourceKey, massNumbers, band: bandText, lines: listOf(referenceLineSchema, "reference lines").min(1) }, "a group of reference lines"),
       "groups of reference lines",
