@@ -1,14 +1,16 @@
 import type { Branch } from "../core/index.ts";
+import { branchStyle as plotBranchStyle } from "../plot/branchStyle.ts";
 
-// The sheet's look in one place. The branch colours are a blue/orange pair, told apart with
-// every common colour-vision deficiency (blue–orange is the pair colour-blind-safe palettes
-// build on, e.g. Okabe & Ito, "Color Universal Design", 2008); the stroke and the marker tell P
-// from R again on a black-and-white printout.
+// The sheet's look in one place. The branch colours, stick patterns and marker shapes are the
+// website plot's (lib/plot/branchStyle.ts), so a printed sheet and a page read the same way;
+// the stroke and the marker tell P from R again on a black-and-white printout.
 export const sheetFonts = { regular: "sheet-regular", bold: "sheet-bold" } as const;
 
-export const branchStyle: Record<Branch, { colour: string; dash: [number, number] | null; marker: "disc" | "diamond"; name: string; rule: string }> = {
-  P: { colour: "#1f5fa8", dash: null, marker: "disc", name: "P branch", rule: "J′ = J″ − 1" },
-  R: { colour: "#c9650c", dash: [2.4, 1.6], marker: "diamond", name: "R branch", rule: "J′ = J″ + 1" },
+const pattern = (dash: number[]): [number, number] | null => (dash[1] > 0 ? [dash[0] * 0.8, dash[1] * 0.8] : null);
+
+export const branchStyle: Record<Branch, { colour: string; dash: [number, number] | null; marker: "triangle-down" | "disc"; name: string; rule: string }> = {
+  P: { colour: plotBranchStyle.P.colour, dash: pattern(plotBranchStyle.P.dash), marker: "triangle-down", name: "P branch", rule: "J′ = J″ − 1" },
+  R: { colour: plotBranchStyle.R.colour, dash: pattern(plotBranchStyle.R.dash), marker: "disc", name: "R branch", rule: "J′ = J″ + 1" },
 };
 
 export const ink = "#000000";
