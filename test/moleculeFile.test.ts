@@ -44,6 +44,8 @@ const cases: Array<[string, number | null, RegExp]> = [
   ["no-reference", 17, /exactly one species must have `reference: true`/],
   ["bad-cas", 6, /fails its check digit/],
   ["control-characters", 4, /invisible control character U\+202E/],
+  ["wrong-type", 7, /`aliases`: expected a list of other names, got a mapping/],
+  ["negative-mass-number", 28, /`species\[1\]\.massNumbers\[0\]`: a mass number is positive/],
 ];
 
 describe("malformed molecule files", () => {
@@ -63,6 +65,11 @@ describe("malformed molecule files", () => {
       expect(text).not.toMatch(/\n\s+at /);
     });
   }
+  it("refuses two files with the same id", () => {
+    const dir = join(fixtures, "duplicate-id");
+    const { problems } = loadMoleculeFiles([join(dir, "a/same-xo.yaml"), join(dir, "b/same-xo.yaml")]);
+    expect(problems.map(formatProblem)).toEqual([expect.stringMatching(/b\/same-xo\.yaml: `id`: id "same-xo" is already used by .*a\/same-xo\.yaml/)]);
+  });
   it("refuses two files with the same CAS number", () => {
     const dir = join(fixtures, "duplicate-cas");
     const { problems } = loadMoleculeFiles(readdirSync(dir).map((n) => join(dir, n)));
