@@ -3,3 +3,4 @@ export * from "./selectSpecies.ts";
 export * from "./atlasEntry.ts";
 export * from "./atlasLines.ts";
 export * from "./moleculeBands.ts";
+export * from "./cellSpectrum.ts";

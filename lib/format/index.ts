@@ -2,3 +2,4 @@ export * from "./numbers.ts";
 export * from "./csv.ts";
 export * from "./lineRecords.ts";
 export * from "./linesTable.ts";
+export * from "./spectrumCells.ts";

@@ -5,6 +5,8 @@ import { runSheet, sheetHelp } from "./sheet.ts";
 import { newHelp, runNew } from "./new.ts";
 import { buildHelp, runBuild } from "./build.ts";
 import { runServe, serveHelp } from "./serve.ts";
+import { runSpectrum, spectrumHelp } from "./spectrum.ts";
+import { calibrationLinesHelp, runCalibrationLines } from "./calibrationLines.ts";
 
 export interface CommandResult {
   output: string;
@@ -22,6 +24,8 @@ export const commands: Record<string, Command> = {
   lines: { summary: "predicted P and R lines of one band of one species", help: linesHelp, run: runLines },
   find: { summary: "lines of the whole atlas near a wavenumber", help: findHelp, run: runFind },
   sheet: { summary: "printable PDF bench sheet of one gas at one temperature", help: sheetHelp, run: runSheet },
+  spectrum: { summary: "predicted gas-cell transmittance at an instrument's resolution (CSV or JSON)", help: spectrumHelp, run: runSpectrum },
+  "calibration-lines": { summary: "strong, isolated lines to calibrate against at a resolution, with their peak shifts", help: calibrationLinesHelp, run: runCalibrationLines },
   check: { summary: "validate molecule files (file:line:column for every problem)", help: checkHelp, run: runCheck },
   build: { summary: "build the atlas website (pages, downloads, search, sheets) into site/", help: buildHelp, run: runBuild },
   serve: { summary: "build the site and serve it on localhost, rebuilding when molecule files change", help: serveHelp, run: runServe },

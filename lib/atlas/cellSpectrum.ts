@@ -1,0 +1,187 @@
+import {
+  absorbingLines,
+  bandLabel,
+  bandLines,
+  broadeningIsTypical,
+  calibrationLines,
+  cellSpectrum,
+  defaultCalibrationCriteria,
+  scaleTransitionDipoleToIsotopologue,
+  speciesPartitionFunction,
+  typicalBroadening,
+  type AbsorbingLine,
+  type CalibrationCriteria,
+  type CalibrationLine,
+  type CellConditions,
+  type CellSpectrum,
+  type GasBroadening,
+  type Instrument,
+  type IntensityScale,
+  type SpeciesModel,
+} from "../core/index.ts";
+import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
+import { speciesBands } from "./moleculeBands.ts";
+
+/** Resolutions (cm⁻¹) at which pages and sheets mark calibration-grade lines. */
+export const calibrationResolutionsCm: readonly number[] = [0.125, 0.5, 1, 2, 4];
+/** The apodization those marks assume (common practice for FT survey work, no source). */
+export const calibrationApodization = "triangular" as const;
+/** The default cell: 10 cm of the pure gas at 296 K and 20 Torr (2666.45 Pa). */
+export const defaultCellConditions: CellConditions = { temperatureK: 296, pressurePa: (20 * 101325) / 760, moleFraction: 1, pathCm: 10 };
+/** Lines weaker than this fraction of the gas's strongest line are left out of spectra (they change no printed digit). */
+export const negligibleLineFraction = 1e-7;
+
+export interface CellBand {
+  species: string;
+  band: string;
+  /** How its intensities were obtained: a core intensity origin, or "unit-dipole" in relative mode. */
+  intensityOrigin: string;
+}
+
+/** Every line of the gas that a cell spectrum uses, and what it had to assume. */
+export interface CellLineSet {
+  moleculeId: string;
+  intensityScale: IntensityScale;
+  lines: AbsorbingLine[];
+  bandsUsed: CellBand[];
+  bandsLeftOut: Array<{ species: string; band: string; reason: string }>;
+  /** True when a typical (not cited) broadening coefficient was used: every output must say so. */
+  broadeningTypical: boolean;
+  broadening: GasBroadening;
+  /** Plain sentences every output that shows these lines must carry. */
+  notes: string[];
+}
+
+function hasAbsoluteData(molecule: Molecule): boolean {
+  return molecule.species.some((s) => s.model.intensities.length > 0);
+}
+
+/**
+ * Without any cited intensity the spectrum can only be relative: each species gets a 1 D dipole
+ * for its first band (isotope-scaled from the reference species as the core does for real data),
+ * diatomic hot bands follow by the harmonic rule, overtones are left out.
+ */
+function unitDipoleModel(species: SpeciesInfo, reference: SpeciesInfo): SpeciesModel {
+  const first = speciesBands(species)[0].band;
+  const unit = { band: first, transitionDipoleDebye: 1, transitionDipoleUncertaintyDebye: 0, hermanWallis: null, origin: "cited" as const, sourceKey: "unit-dipole" };
+  const data = species === reference ? unit : scaleTransitionDipoleToIsotopologue(unit, reference.model.reducedMassU, species.model.reducedMassU);
+  return { ...species.model, intensities: [data] };
+}
+
+/** All species at natural abundance, every band the atlas builds that has intensity data. */
+export function cellLineSet(molecule: Molecule, conditions: CellConditions): CellLineSet {
+  const scale: IntensityScale = hasAbsoluteData(molecule) ? "absolute" : "relative-thin";
+  const broadening = molecule.broadening ?? typicalBroadening;
+  const used: CellBand[] = [];
+  const leftOut: CellLineSet["bandsLeftOut"] = [];
+  let lines: AbsorbingLine[] = [];
+  for (const species of molecule.species) {
+    const model = scale === "absolute" ? species.model : unitDipoleModel(species, molecule.species[0]);
+    const q = speciesPartitionFunction(model, conditions.temperatureK);
+    for (const { band } of speciesBands(species)) {
+      const result = bandLines(model, band, { temperatureK: conditions.temperatureK, partitionFunction: q });
+      const label = bandLabel(band);
+      if (result.strongestLineIntensity === null) {
+        leftOut.push({ species: model.label, band: label, reason: "no intensity data for this band" });
+        continue;
+      }
+      used.push({ species: model.label, band: label, intensityOrigin: scale === "absolute" ? result.intensityOrigin ?? "cited" : result.intensityOrigin === "harmonic-hot-band" ? "unit-dipole, harmonic hot band" : "unit-dipole" });
+      lines = lines.concat(absorbingLines(model, result, conditions, broadening, (l) => l.lineIntensity));
+    }
+  }
+  let strongest = 0;
+  for (const l of lines) if (l.intensity > strongest) strongest = l.intensity;
+  lines = lines.filter((l) => l.intensity >= negligibleLineFraction * strongest);
+  const typical = broadeningIsTypical(broadening, conditions.moleFraction);
+  const notes: string[] = [];
+  if (scale === "relative-thin") {
+    notes.push(`${molecule.name} has no cited band intensity: no transmittance can be given. Shapes are relative, optically thin, with a 1 D stand-in dipole; peak shifts assume a weak absorber.`);
+  }
+  if (typical) notes.push("Line widths use a typical pressure-broadening coefficient (0.07 cm⁻¹/atm, n = 0.75), not a measured one for this gas.");
+  if (leftOut.length) notes.push(`Left out for want of intensity data: ${leftOut.map((b) => `${b.species} ${b.band}`).join(", ")}.`);
+  return { moleculeId: molecule.id, intensityScale: scale, lines, bandsUsed: used, bandsLeftOut: leftOut, broadeningTypical: typical, broadening, notes };
+}
+
+export interface CellSpectrumSettings {
+  conditions: CellConditions;
+  fromCm: number;
+  toCm: number;
+  instrument: Instrument;
+  stepCm?: number;
+}
+
+export interface MoleculeCellSpectrum {
+  set: CellLineSet;
+  spectrum: CellSpectrum;
+}
+
+export function moleculeCellSpectrum(molecule: Molecule, settings: CellSpectrumSettings, set = cellLineSet(molecule, settings.conditions)): MoleculeCellSpectrum {
+  const spectrum = cellSpectrum({ lines: set.lines, conditions: settings.conditions, intensityScale: set.intensityScale, fromCm: settings.fromCm, toCm: settings.toCm, instrument: settings.instrument, stepCm: settings.stepCm });
+  return { set, spectrum };
+}
+
+/** The range worth computing for calibration lines: the strong lines of the gas, plus a margin. */
+export function calibrationRange(set: CellLineSet, resolutionCm: number, criteria: CalibrationCriteria = defaultCalibrationCriteria): { fromCm: number; toCm: number } {
+  let strongest = 0;
+  for (const l of set.lines) if (l.intensity > strongest) strongest = l.intensity;
+  const strong = set.lines.filter((l) => l.intensity >= criteria.strongFraction * strongest).map((l) => l.wavenumber);
+  const margin = Math.max(5 * resolutionCm, 2);
+  return { fromCm: Math.max(1, Math.min(...strong) - margin), toCm: Math.max(...strong) + margin };
+}
+
+export interface MoleculeCalibrationLines extends MoleculeCellSpectrum {
+  resolutionCm: number;
+  criteria: CalibrationCriteria;
+  lines: CalibrationLine[];
+}
+
+export function moleculeCalibrationLines(
+  molecule: Molecule,
+  settings: Omit<CellSpectrumSettings, "fromCm" | "toCm"> & { fromCm?: number; toCm?: number },
+  criteria: CalibrationCriteria = defaultCalibrationCriteria,
+): MoleculeCalibrationLines {
+  if (settings.instrument.kind === "monochromatic") throw new Error("calibration lines need an instrument resolution");
+  const resolutionCm = settings.instrument.resolutionCm;
+  const set = cellLineSet(molecule, settings.conditions);
+  const range = calibrationRange(set, resolutionCm, criteria);
+  const full = { ...settings, fromCm: settings.fromCm ?? range.fromCm, toCm: settings.toCm ?? range.toCm };
+  const { spectrum } = moleculeCellSpectrum(molecule, full, set);
+  return { set, spectrum, resolutionCm, criteria, lines: calibrationLines(set.lines, spectrum, resolutionCm, criteria) };
+}
+
+/** Plain data for species pages and sheets: calibration-grade lines at the default resolutions. */
+export interface CalibrationMarks {
+  moleculeId: string;
+  conditions: CellConditions;
+  apodization: typeof calibrationApodization;
+  criteria: CalibrationCriteria;
+  intensityScale: IntensityScale;
+  broadeningTypical: boolean;
+  notes: string[];
+  byResolution: Array<{
+    resolutionCm: number;
+    lines: Array<{ species: string; band: string; label: string; wavenumber: number; relativeToStrongest: number; peakShiftCm: number | null }>;
+  }>;
+}
+
+export function calibrationMarks(molecule: Molecule, conditions: CellConditions = defaultCellConditions): CalibrationMarks {
+  const byResolution: CalibrationMarks["byResolution"] = [];
+  let last: MoleculeCalibrationLines | null = null;
+  for (const resolutionCm of calibrationResolutionsCm) {
+    last = moleculeCalibrationLines(molecule, { conditions, instrument: { kind: "fourier-transform", resolutionCm, apodization: calibrationApodization } });
+    byResolution.push({
+      resolutionCm,
+      lines: last.lines.map((l) => ({ species: l.species, band: l.band, label: l.label, wavenumber: l.wavenumber, relativeToStrongest: l.relativeToStrongest, peakShiftCm: l.peakShiftCm })),
+    });
+  }
+  return {
+    moleculeId: molecule.id,
+    conditions,
+    apodization: calibrationApodization,
+    criteria: defaultCalibrationCriteria,
+    intensityScale: last!.set.intensityScale,
+    broadeningTypical: last!.set.broadeningTypical,
+    notes: last!.set.notes,
+    byResolution,
+  };
+}

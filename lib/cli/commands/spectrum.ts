@@ -1,0 +1,92 @@
+import { moleculeCellSpectrum } from "../../atlas/index.ts";
+import { csvRow, numeric, opticalDepthDigits, spectrumWavenumberDigits, transmittanceDigits } from "../../format/index.ts";
+import type { Molecule } from "../../molecules/index.ts";
+import { cellConditionsFromOptions, cellOptionSpec, cellOptionsHelp, describeConditions, instrumentFromOptions, joinUnitWords, rangeFromOptions } from "../cellOptions.ts";
+import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
+import { formatOption, numberOption, parseCommandLine } from "../options.ts";
+import { UsageError } from "../usageError.ts";
+
+export const spectrumHelp = `bandatlas spectrum <molecule> --from <cm⁻¹> --to <cm⁻¹> [options]
+
+Predicted transmittance of a gas cell as an instrument of the given resolution shows it:
+all species at natural abundance, every band with intensity data, Voigt line shapes.
+
+${cellOptionsHelp}
+  --step <cm⁻¹>           spacing of the printed samples (default: resolution/10)
+  --relative              for a molecule without a cited band intensity: print the relative,
+                          optically thin apparent absorbance instead of refusing
+  --format csv|json       CSV with units in the header (default), or JSON with the settings
+
+Predictions, not measurements. The gas is hazardous: follow the supplier's safety data sheet,
+local codes and your laboratory safety officer.`;
+
+export function cautionFor(molecule: Molecule): string {
+  return `${molecule.name}: ${molecule.hazard.sentences.join(" ")} Follow the supplier's safety data sheet, local codes and your laboratory safety officer; these numbers are predictions, not certified values.`;
+}
+
+export function runSpectrum(args: string[]): string {
+  const { values, positionals } = parseCommandLine("spectrum", joinUnitWords(args), { ...cellOptionSpec, step: { type: "string" }, relative: { type: "boolean" } }, 1);
+  if (values.help) return spectrumHelp + "\n";
+  if (positionals.length === 0) throw new UsageError("which molecule? e.g. `bandatlas spectrum co --from 2000 --to 2250` (see bandatlas spectrum --help)");
+  const format = formatOption(values.format as string | undefined, ["csv", "json"]);
+  const conditions = cellConditionsFromOptions(values);
+  const instrument = instrumentFromOptions(values, 0.5);
+  const { fromCm, toCm } = rangeFromOptions(values);
+  if (fromCm === undefined || toCm === undefined) throw new UsageError("give the range with --from and --to (cm⁻¹), e.g. --from 2000 --to 2250");
+  if (toCm - fromCm > 2000) throw new UsageError(`--from ${fromCm} --to ${toCm}: at most 2000 cm⁻¹ at a time`);
+  const molecule = loadOneMolecule(moleculesDir(values.molecules as string | undefined), positionals[0]);
+  const { set, spectrum } = moleculeCellSpectrum(molecule, { conditions, fromCm, toCm, instrument });
+  if (set.intensityScale === "relative-thin" && !values.relative) {
+    throw new UsageError(`${molecule.name} has no cited band intensity, so its transmittance cannot be predicted; add a cited intensity block to ${molecule.id}.yaml, or use --relative for the relative optically thin absorbance`);
+  }
+  const gridStep = spectrum.grid.stepCm;
+  const step = numberOption("step", values.step as string | undefined, instrument.kind === "monochromatic" ? gridStep : instrument.resolutionCm / 10, "cm-1");
+  if (!(step > 0)) throw new UsageError(`--step ${values.step}: must be above 0`);
+  const stride = Math.max(1, Math.round(step / gridStep));
+  const indices: number[] = [];
+  for (let i = spectrum.windowFirst; i <= spectrum.windowLast; i += stride) indices.push(i);
+  const nu = (i: number) => spectrum.grid.startCm + i * gridStep;
+
+  if (set.intensityScale === "relative-thin") {
+    const thin = spectrum.observedThinOpticalDepth!;
+    let peak = 0;
+    for (let i = spectrum.windowFirst; i <= spectrum.windowLast; i++) if (thin[i] > peak) peak = thin[i];
+    const rel = (i: number) => (peak > 0 ? thin[i] / peak : 0);
+    if (format === "json") {
+      return JSON.stringify({ molecule: molecule.id, intensityScale: set.intensityScale, settings: describeConditions(conditions, instrument), notes: set.notes, caution: cautionFor(molecule), samples: indices.map((i) => ({ wavenumber: Number(spectrumWavenumberDigits(nu(i))), relativeAbsorbance: Number(transmittanceDigits(rel(i))) })) }, null, 2) + "\n";
+    }
+    return [csvRow(["wavenumber_cm-1", "relative_absorbance_optically_thin_NOT_transmittance"]), ...indices.map((i) => csvRow([numeric(spectrumWavenumberDigits(nu(i))), numeric(transmittanceDigits(rel(i)))]))].join("\n") + "\n";
+  }
+  const observed = spectrum.observedTransmittance!;
+  const mono = spectrum.transmittance!;
+  const tau = spectrum.opticalDepth;
+  if (format === "json") {
+    return (
+      JSON.stringify(
+        {
+          molecule: molecule.id,
+          intensityScale: set.intensityScale,
+          conditions: { ...conditions },
+          instrument,
+          settings: describeConditions(conditions, instrument),
+          bandsUsed: set.bandsUsed,
+          bandsLeftOut: set.bandsLeftOut,
+          broadeningTypical: set.broadeningTypical,
+          notes: set.notes,
+          caution: cautionFor(molecule),
+          samples: indices.map((i) => ({
+            wavenumber: Number(spectrumWavenumberDigits(nu(i))),
+            transmittance: Number(transmittanceDigits(observed[i])),
+            monochromaticTransmittance: Number(transmittanceDigits(mono[i])),
+            opticalDepth: Number(opticalDepthDigits(tau[i])),
+          })),
+        },
+        null,
+        2,
+      ) + "\n"
+    );
+  }
+  const rows = [csvRow(["wavenumber_cm-1", "transmittance_instrument", "transmittance_monochromatic", "optical_depth"])];
+  for (const i of indices) rows.push(csvRow([numeric(spectrumWavenumberDigits(nu(i))), numeric(transmittanceDigits(observed[i])), numeric(transmittanceDigits(mono[i])), numeric(opticalDepthDigits(tau[i]))]));
+  return rows.join("\n") + "\n";
+}
