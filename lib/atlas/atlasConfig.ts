@@ -18,5 +18,7 @@ export const atlasBands: ReadonlyArray<{ band: Band; kind: BandKind }> = [
 
 /** Hot bands are shown with the fundamental when their strongest line reaches this fraction of its strongest. */
 export const hotBandDisplayFraction = 1e-3;
+/** Default half-width of the `find` window (CLI and the website's wavenumber search), cm⁻¹. */
+export const defaultFindWindowCm = 1.0;
 /** Default threshold of `find`, relative to the strongest line of each band. */
 export const defaultFindMinRelative = 1e-3;

@@ -1,5 +1,5 @@
 import type { AtlasBand, AtlasEntry } from "../atlas/index.ts";
-import { defaultFindMinRelative, defaultTemperatureK, standardTemperaturesK } from "../atlas/index.ts";
+import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, standardTemperaturesK } from "../atlas/index.ts";
 import { fixed, significant } from "../format/index.ts";
 import { bandLabel } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
@@ -222,7 +222,7 @@ export function siteData(input: SiteDataInput) {
     accuracy: accuracyRows(input.molecules, input.entries),
     nearInfrared: { rows: nearInfraredRows(input.molecules, input.entries), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },
     temperatures: standardTemperaturesK.map((t) => ({ value: t, token: temperatureToken(t), isDefault: t === defaultTemperatureK })),
-    find: { windowCm: 1.0, minRelative: defaultFindMinRelative, temperatureK: defaultTemperatureK },
+    find: { windowCm: defaultFindWindowCm, minRelative: defaultFindMinRelative, temperatureK: defaultTemperatureK },
     search: { nameIndex: input.nameIndexPath, lineIndexes: input.lineIndexPaths.map((x) => ({ token: temperatureToken(x.temperatureK), path: x.path })) },
     developersMarkdownPath: input.developersMarkdownPath,
   };

@@ -1,4 +1,4 @@
-import { defaultFindMinRelative, defaultTemperatureK, findInAtlas } from "../../atlas/index.ts";
+import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, findInAtlas } from "../../atlas/index.ts";
 import { fixed, significant, textTable } from "../../format/index.ts";
 import { loadMoleculesOrThrow } from "../../molecules/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
@@ -11,7 +11,7 @@ Which lines of the whole atlas lie near a wavenumber (an unexpected peak, a cali
 every shipped molecule, species and band, nearest first.
 
   <wavenumber>            vacuum wavenumber in cm⁻¹
-  --window <cm-1>         half-width of the search window (default 1.0)
+  --window <cm-1>         half-width of the search window (default ${defaultFindWindowCm})
   --temperature <K>       gas temperature in kelvin (default ${defaultTemperatureK})
   --min-relative <x>      only lines at least x times the strongest of their band (default ${defaultFindMinRelative})
   --format table|json     table (default) or JSON
@@ -28,7 +28,7 @@ export function runFind(args: string[]): string {
   if (positionals.length === 0) throw new UsageError("which wavenumber? e.g. `bandatlas find 2143.3` (see bandatlas find --help)");
   const wavenumber = numberOption("wavenumber", positionals[0], NaN, "cm-1");
   if (!(wavenumber > 0)) throw new UsageError(`the wavenumber must be a number of cm⁻¹ above 0, got "${positionals[0]}"`);
-  const windowCm = numberOption("window", values.window as string | undefined, 1.0, "cm-1");
+  const windowCm = numberOption("window", values.window as string | undefined, defaultFindWindowCm, "cm-1");
   if (!(windowCm > 0) || windowCm > 500) throw new UsageError(`--window ${windowCm}: the half-width must be above 0 and at most 500 cm⁻¹`);
   const temperatureK = temperatureOption(values.temperature as string | undefined, defaultTemperatureK);
   const minRelative = numberOption("min-relative", values["min-relative"] as string | undefined, defaultFindMinRelative);
