@@ -18,8 +18,17 @@ export function convolveWithInstrument(values: Float64Array, stepCm: number, ins
   re.set(values);
   fft(re, im);
   const dx = 1 / (m * stepCm);
+  // The apodization may jump to zero at x = L (boxcar, Happ–Genzel, weak Norton–Beer): the bin
+  // holding L gets its average over the bin, so the effective OPD is L and not L rounded to a bin.
+  const edge = instrument.kind === "fourier-transform" ? 1 / instrument.resolutionCm : Infinity;
+  const transferAt = (x: number) => {
+    if (Math.abs(x - edge) >= dx) return instrumentTransfer(instrument, x);
+    let sum = 0;
+    for (let j = 0; j < 16; j++) sum += instrumentTransfer(instrument, x + ((j + 0.5) / 16 - 0.5) * dx);
+    return sum / 16;
+  };
   for (let k = 0; k <= m / 2; k++) {
-    const t = instrumentTransfer(instrument, k * dx);
+    const t = transferAt(k * dx);
     re[k] *= t;
     im[k] *= t;
     if (k > 0 && k < m / 2) {

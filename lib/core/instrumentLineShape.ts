@@ -112,6 +112,7 @@ export function instrumentLineShape(instrument: Instrument, offsetCm: Wavenumber
 /** Half the distance a convolution must look beyond a window's edge to see all of the ILS that matters. */
 export function instrumentReachCm(instrument: Instrument): WavenumberCm {
   if (instrument.kind === "monochromatic") return 0;
-  // Boxcar sidelobes fall only as 1/(2πνL): at 20 R the envelope is below 1 % of the peak.
-  return instrument.kind === "grating" ? 3 * instrument.resolutionCm : 20 * instrument.resolutionCm;
+  // FT sidelobes fall slowly (boxcar as 1/(2πν̃L), triangular on average as 1/(2π²ν̃²L)): beyond
+  // 40 R a triangular ILS holds 1/(40π²) ≈ 0.25 % of its area, a Gaussian slit nothing beyond 3 FWHM.
+  return instrument.kind === "grating" ? 3 * instrument.resolutionCm : 40 * instrument.resolutionCm;
 }

@@ -152,7 +152,8 @@ export function buildMolecule(file: MoleculeFile, fileName: string): Molecule {
       return { band, transitionDipoleDebye: value, transitionDipoleUncertaintyDebye: uncertainty ?? 0, hermanWallis, origin: "cited", sourceKey: entry.source };
     }
     const strength = split(entry.bandStrength!.cmPerMolecule);
-    const dipole = transitionDipoleFromBandStrength(info.model, band, strength.value, entry.bandStrength!.temperatureK, hermanWallis);
+    const perSpecies = entry.bandStrength!.includesAbundance ? strength.value / info.model.abundance : strength.value;
+    const dipole = transitionDipoleFromBandStrength(info.model, band, perSpecies, entry.bandStrength!.temperatureK, hermanWallis);
     // |μ| ∝ √S, so the relative uncertainty halves.
     const relative = strength.uncertainty === null ? 0 : strength.uncertainty / strength.value / 2;
     return { band, transitionDipoleDebye: dipole, transitionDipoleUncertaintyDebye: dipole * relative, hermanWallis, origin: "from-band-strength", sourceKey: entry.source };

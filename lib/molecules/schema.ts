@@ -102,7 +102,13 @@ const intensitySchema = mapping(
     band: bandText,
     transitionDipoleDebye: measuredIn("debye").optional(),
     bandStrength: mapping(
-      { cmPerMolecule: measuredIn("cm/molecule"), temperatureK: numberIn("K") },
+      {
+        cmPerMolecule: measuredIn("cm/molecule"),
+        temperatureK: numberIn("K"),
+        // true: the source's value is per molecule of the gas at natural abundance (already
+        // multiplied by this species' abundance); default false: per molecule of this species.
+        includesAbundance: z.boolean({ error: (i) => `expected true or false, got ${describeInput(i.input)}` }).optional(),
+      },
       "a band strength",
     ).optional(),
     hermanWallis: mapping({ a1: numberIn("units of m (dimensionless)"), a2: numberIn("units of m² (dimensionless)") }, "Herman–Wallis coefficients").optional(),
