@@ -28,6 +28,19 @@ describe("unit conversions", () => {
     // In the mid-infrared the dispersion terms flatten: n − 1 ≈ 2.73e-4 at 4.67 µm.
     expect((airRefractiveIndexEdlen(2143) - 1) * 1e4).toBeCloseTo(2.73, 2);
   });
+  it("agrees with Ciddor's (1996) standard-air dispersion to a few parts in 10⁸", () => {
+    // P. E. Ciddor, Appl. Opt. 35, 1566 (1996), standard air (15 °C, 101 325 Pa, 450 ppm CO2):
+    // n − 1 = 0.05792105/(238.0185 − σ²) + 0.00167917/(57.362 − σ²), σ in µm⁻¹ (formula as reproduced
+    // on refractiveindex.info, "Ciddor 1996"). Computed independently here; Edlén's 300 ppm CO2
+    // and older data leave differences of order 1e-8 in n.
+    const ciddor = (wavenumber: number) => {
+      const s2 = (wavenumber * 1e-4) ** 2;
+      return 1 + 0.05792105 / (238.0185 - s2) + 0.00167917 / (57.362 - s2);
+    };
+    for (const wavenumber of [1e7 / 632.991, 6500, 4000, 2143, 1000]) {
+      expect(Math.abs(airRefractiveIndexEdlen(wavenumber) - ciddor(wavenumber)), `${wavenumber} cm⁻¹`).toBeLessThan(3e-8);
+    }
+  });
   it("converts wavenumbers to vacuum µm, air nm and THz", () => {
     expect(vacuumWavelengthUm(2000)).toBe(5);
     expect(airWavelengthNm(2000)).toBeCloseTo(5000 / airRefractiveIndexEdlen(2000), 9);
