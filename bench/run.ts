@@ -1,5 +1,16 @@
-// `npm run bench`: prints figures with their targets. Never part of the tests: machines are noisy.
+// `npm run bench [-- [--quick] [section-prefix]]`: prints figures with their targets. Never part
+// of the tests: machines are noisy. The full run takes several minutes (the 500-molecule builds);
+// --quick uses smaller atlases (scale 10 and 20, browser 50) and finishes in one to two minutes.
+import { benchBrowserSearch } from "./browserSearch.ts";
+import { benchCellTransmittance } from "./cellTransmittance.ts";
 import { benchCoreLines } from "./coreLines.ts";
+import { benchIncremental } from "./incrementalBuild.ts";
+import { benchScale } from "./scaleBuild.ts";
+import { benchShippedBuild } from "./shippedBuild.ts";
+
+const args = process.argv.slice(2);
+const quick = args.includes("--quick");
+const only = args.find((a) => !a.startsWith("--"));
 
 const sections: Array<{ name: string; run: () => Promise<string[]> | string[] }> = [
   {
@@ -9,11 +20,17 @@ const sections: Array<{ name: string; run: () => Promise<string[]> | string[] }>
       return [`${(r.linesPerSecond / 1e6).toFixed(2)} million lines/s (${r.lines} lines in ${r.seconds.toFixed(2)} s); target ≥ 2 million lines/s`];
     },
   },
+  { name: "cell: CO transmittance, 300 cm⁻¹ at 0.002 cm⁻¹, all species, FT 0.5 cm⁻¹, Node", run: benchCellTransmittance },
+  { name: "build: shipped atlas, cold, beside a bare Eleventy baseline", run: benchShippedBuild },
+  { name: "scale: invented molecules, full builds", run: () => benchScale(quick ? [10, 20] : [50, 200, 500]) },
+  { name: "incremental: bandatlas serve, one molecule file saved", run: () => benchIncremental(quick ? 2 : 5) },
+  { name: "browser: wavenumber search in Chromium", run: () => benchBrowserSearch(quick ? 50 : 500, 21) },
 ];
 
-const only = process.argv[2];
+const started = performance.now();
 for (const section of sections) {
   if (only && !section.name.startsWith(only)) continue;
   console.log(`\n## ${section.name}`);
   for (const line of await section.run()) console.log(`  ${line}`);
 }
+console.log(`\n(bench ran ${((performance.now() - started) / 1000).toFixed(0)} s${quick ? ", quick mode" : ""})`);
