@@ -1,0 +1,66 @@
+import { describe, expect, it } from "vitest";
+import { calibrationMarks, calibrationResolutionsCm, defaultCellConditions, moleculeCalibrationLines } from "../lib/atlas/index.ts";
+import { calibrationLines, cellSpectrum, defaultCalibrationCriteria, type AbsorbingLine } from "../lib/core/index.ts";
+import { runCli } from "../lib/cli/main.ts";
+import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
+
+const molecules = loadMoleculesOrThrow(new URL("../molecules", import.meta.url).pathname);
+const co = molecules.find((m) => m.id === "co")!;
+// Invented lines (demo values, not a gas): a strong line and a weaker neighbour.
+const line = (wavenumber: number, intensity: number, label: string): AbsorbingLine => ({ species: "invented", band: "1-0", label, wavenumber, intensity, dopplerHwhmCm: 0.0025, lorentzHwhmCm: 0.002 });
+const thin = (lines: AbsorbingLine[], resolutionCm: number) =>
+  cellSpectrum({ lines, conditions: defaultCellConditions, intensityScale: "relative-thin", fromCm: 2090, toCm: 2130, instrument: { kind: "fourier-transform", resolutionCm, apodization: "triangular" } });
+
+describe("calibration-grade lines", () => {
+  it("an isolated symmetric line shows no peak shift (to 1e-5 cm⁻¹)", () => {
+    const lines = [line(2110, 1, "R(0)")];
+    const [only] = calibrationLines(lines, thin(lines, 1), 1);
+    expect(Math.abs(only.peakShiftCm!)).toBeLessThan(1e-5);
+  });
+
+  it("a neighbour inside ±1 R disqualifies a line; outside it, the line counts and is pulled toward it", () => {
+    const near = [line(2110, 1, "R(0)"), line(2110.8, 0.3, "R(1)")];
+    expect(calibrationLines(near, thin(near, 1), 1).map((l) => l.label)).toEqual([]);
+    const apart = [line(2110, 1, "R(0)"), line(2111.5, 0.3, "R(1)")];
+    const found = calibrationLines(apart, thin(apart, 1), 1);
+    expect(found.map((l) => l.label)).toEqual(["R(0)", "R(1)"]);
+    expect(found[0].peakShiftCm!).toBeGreaterThan(0); // pulled up toward 2111.5
+    expect(found[1].peakShiftCm!).toBeLessThan(0); // and the weaker one down, harder
+    expect(Math.abs(found[1].peakShiftCm!)).toBeGreaterThan(Math.abs(found[0].peakShiftCm!));
+  });
+
+  it("a line below the strong fraction is not listed", () => {
+    const lines = [line(2100, 1, "R(0)"), line(2120, 0.05, "R(1)")];
+    expect(calibrationLines(lines, thin(lines, 1), 1).map((l) => l.label)).toEqual(["R(0)"]);
+  });
+
+  it("CO: fewer usable lines as the resolution coarsens, none of them within R of a counted neighbour", () => {
+    const counts = calibrationResolutionsCm.map((r) => {
+      const result = moleculeCalibrationLines(co, { conditions: defaultCellConditions, instrument: { kind: "fourier-transform", resolutionCm: r, apodization: "triangular" } });
+      for (const l of result.lines) if (l.nearestNeighbourCm !== null) expect(l.nearestNeighbourCm).toBeGreaterThan(defaultCalibrationCriteria.isolationMultiple * r);
+      return result.lines.length;
+    });
+    for (let i = 1; i < counts.length; i++) expect(counts[i]).toBeLessThanOrEqual(counts[i - 1]);
+    // CO 1-0 lines are 3.5–4.5 cm⁻¹ apart (fact of the trade), so at 4 cm⁻¹ only the wide P-branch gaps survive.
+    expect(counts[0]).toBeGreaterThan(20);
+    expect(counts[4]).toBeLessThan(counts[0] / 3);
+  });
+
+  it("HBr at 0.5 cm⁻¹: no line isolated, the H79Br/H81Br pairs sit a few tenths of a cm⁻¹ apart (fact of the trade)", () => {
+    const hbr = molecules.find((m) => m.id === "hbr")!;
+    const marks = calibrationMarks(hbr);
+    expect(marks.intensityScale).toBe("relative-thin");
+    expect(marks.byResolution.find((b) => b.resolutionCm === 0.5)!.lines).toEqual([]);
+    expect(marks.byResolution.find((b) => b.resolutionCm === 0.125)!.lines.length).toBeGreaterThan(10);
+  });
+
+  it("the CLI lists the same lines and shifts as the atlas, to the printed digits", async () => {
+    const r = await runCli(["calibration-lines", "co", "--resolution", "1", "--format", "json"]);
+    expect(r.exitCode).toBe(0);
+    const doc = JSON.parse(r.stdout);
+    const marks = calibrationMarks(co).byResolution.find((b) => b.resolutionCm === 1)!;
+    expect(doc.lines.map((l: { label: string }) => l.label)).toEqual(marks.lines.map((l) => l.label));
+    expect(doc.lines[0].peakShiftCm).toBeCloseTo(marks.lines[0].peakShiftCm!, 4);
+    expect(doc.caution).toMatch(/safety data sheet/);
+  });
+});
