@@ -2,6 +2,14 @@ import { bandLabel, type BandLines } from "../core/index.ts";
 import { lineCells } from "./lineRecords.ts";
 import { significant } from "./numbers.ts";
 
+/** How a band's transition dipole was obtained, in words for the table header. */
+export const intensityOriginWords: Record<NonNullable<BandLines["intensityOrigin"]>, string> = {
+  cited: "from the cited transition dipole",
+  "from-band-strength": "from the cited band strength",
+  "harmonic-hot-band": "hot band scaled from the cited fundamental by the harmonic rule |μ(v+1←v)|² = (v+1)|μ(1←0)|²",
+  "isotope-scaled": "scaled from the reference species' cited data by the isotope relation |μ|² ∝ μ_red^(−Δv/2)",
+};
+
 export function textTable(headings: string[], rows: string[][], rightAligned: boolean[]): string {
   const widths = headings.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
   const pad = (cells: string[]) => cells.map((c, i) => (rightAligned[i] ? c.padStart(widths[i]) : c.padEnd(widths[i]))).join("  ").trimEnd();
@@ -19,7 +27,7 @@ export function linesTable(result: BandLines, context: LinesTableContext): strin
   const intensity =
     result.intensityOrigin === null
       ? "absolute intensities: none (the molecule file cites no band strength or transition dipole for this band)"
-      : `absolute intensities: from ${result.intensityOrigin.replace(/-/g, " ")} dipole data, per molecule of the gas at natural isotopic abundance`;
+      : `absolute intensities: ${intensityOriginWords[result.intensityOrigin]}; per molecule of the gas at natural isotopic abundance`;
   const header = [
     `${context.moleculeName} (${context.formula}), species ${result.species}, band ${bandLabel(result.band)}, T = ${result.temperatureK} K`,
     `band origin ${result.bandOrigin.toFixed(4)} cm⁻¹; partition function Q = ${significant(result.partitionFunction, 6)}; ${result.lines.length} lines, J'' up to ${result.jLowerMax}`,
