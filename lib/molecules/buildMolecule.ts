@@ -70,6 +70,27 @@ export interface Molecule {
   broadening?: GasBroadening | null;
 }
 
+type IdentityFields = "id" | "file" | "name" | "formula" | "casNumber" | "aliases" | "electronicState" | "atoms" | "hazard" | "sources";
+
+/** The fields every form of molecule file shares: identity, hazard note and sources. */
+export function moleculeIdentity(
+  file: Pick<MoleculeFile, "id" | "name" | "formula" | "casNumber" | "aliases" | "electronicState" | "atoms" | "hazard" | "sources">,
+  fileName: string,
+): Pick<Molecule, IdentityFields> {
+  return {
+    id: file.id,
+    file: fileName,
+    name: file.name,
+    formula: file.formula,
+    casNumber: file.casNumber,
+    aliases: file.aliases,
+    electronicState: file.electronicState,
+    atoms: file.atoms,
+    hazard: file.hazard,
+    sources: Object.entries(file.sources).map(([key, s]) => ({ key, citation: s.citation, url: s.url ?? null, doi: s.doi ?? null })),
+  };
+}
+
 function split(m: Measured): { value: number; uncertainty: number | null } {
   return typeof m === "number" ? { value: m, uncertainty: null } : { value: m.value, uncertainty: m.uncertainty };
 }
@@ -180,16 +201,7 @@ export function buildMolecule(file: MoleculeFile, fileName: string): Molecule {
   }
 
   return {
-    id: file.id,
-    file: fileName,
-    name: file.name,
-    formula: file.formula,
-    casNumber: file.casNumber,
-    aliases: file.aliases,
-    electronicState: file.electronicState,
-    atoms: file.atoms,
-    hazard: file.hazard,
-    sources: Object.entries(file.sources).map(([key, s]) => ({ key, citation: s.citation, url: s.url ?? null, doi: s.doi ?? null })),
+    ...moleculeIdentity(file, fileName),
     species: models,
     structure: "diatomic",
     broadening: file.broadening ? { self: broadeningOf(file.broadening.self), air: broadeningOf(file.broadening.air) } : null,

@@ -1,5 +1,5 @@
 import { transitionDipoleFromBandStrength, type LinearSpeciesData, type LinearState, type LinearStateSymmetry, type SpeciesModel } from "../core/index.ts";
-import { impliedUncertainty, type GivenConstant, type Molecule, type SpeciesInfo } from "./buildMolecule.ts";
+import { impliedUncertainty, moleculeIdentity, type GivenConstant, type Molecule, type SpeciesInfo } from "./buildMolecule.ts";
 import { isotope, stableMassNumbers } from "./isotopes.ts";
 import type { LinearMoleculeFile, LinearSpeciesEntry } from "./linearSchema.ts";
 import type { Measured } from "./schema.ts";
@@ -215,16 +215,7 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string):
     return { model, spellings: [...spellings], isReference: index === 0, given: { sourceKey: entry.states[0].source, form: "states", values: built.flatMap((b) => b.given) } };
   });
   return {
-    id: file.id,
-    file: fileName,
-    name: file.name,
-    formula: file.formula,
-    casNumber: file.casNumber,
-    aliases: file.aliases,
-    electronicState: file.electronicState,
-    atoms: file.atoms,
-    hazard: file.hazard,
-    sources: Object.entries(file.sources).map(([key, s]) => ({ key, citation: s.citation, url: s.url ?? null, doi: s.doi ?? null })),
+    ...moleculeIdentity(file, fileName),
     species,
     structure: "linear",
   };
