@@ -1,4 +1,4 @@
-import chemicalElements from "chemical-elements";
+import * as chemicalElementsModule from "chemical-elements";
 
 // Atomic masses and natural abundances come from the registry package `chemical-elements`
 // (masses of the AME atomic mass evaluation, abundances of the IUPAC isotopic compositions);
@@ -15,7 +15,11 @@ interface RawIsotope {
   mass?: number;
   abundance?: number;
 }
-const elements = chemicalElements.elementsAndIsotopesObject as Record<string, { isotopes: RawIsotope[] } | undefined>;
+// The package is CommonJS: under ESM its exports arrive as `default`, under CJS loaders directly.
+const chemicalElements = ((chemicalElementsModule as { default?: unknown }).default ?? chemicalElementsModule) as {
+  elementsAndIsotopesObject: Record<string, { isotopes: RawIsotope[] } | undefined>;
+};
+const elements = chemicalElements.elementsAndIsotopesObject;
 
 export function isKnownElement(symbol: string): boolean {
   return Object.prototype.hasOwnProperty.call(elements, symbol) && elements[symbol] !== undefined;
