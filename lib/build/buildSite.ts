@@ -36,6 +36,26 @@ export interface BuildReport {
   sheets: number;
   lineIndex: Array<{ temperatureK: number; lines: number; bytes: number }>;
   build: BuildIdentity;
+  /** Wall time of each stage in ms, for `npm run bench` (stages run one after another). */
+  timings: BuildTimings;
+}
+
+export interface BuildTimings {
+  /** Reading and validating the molecule files. */
+  loadingMs: number;
+  /** The AtlasEntry of every species at every temperature. */
+  physicsMs: number;
+  /** The band-overview SVGs (vega). */
+  plotsMs: number;
+  /** Search indexes, CSV/JSON downloads, the browser bundle and static assets. */
+  filesMs: number;
+  /** Eleventy: page data and templates rendered and written. */
+  pagesMs: number;
+  /** The PDF bench sheets (0 when not built). */
+  sheetsMs: number;
+  /** The internal link check and the swap into place. */
+  finishMs: number;
+  totalMs: number;
 }
 
 /** A build that cannot finish for a reason the person running it can fix (not a bug). */
@@ -70,13 +90,24 @@ function writeFile(root: string, path: string, text: string) {
  */
 export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   const log = options.log ?? (() => {});
+  const started = performance.now();
+  let mark = started;
+  /** Milliseconds since the previous lap. */
+  const lap = () => {
+    const now = performance.now();
+    const ms = now - mark;
+    mark = now;
+    return ms;
+  };
   const molecules = loadMoleculesOrThrow(options.moleculesDir).sort((a, b) => a.id.localeCompare(b.id));
+  const loadingMs = lap();
   const entries: AtlasEntry[] = [];
   for (const molecule of molecules) {
     for (const species of molecule.species) {
       for (const temperatureK of standardTemperaturesK) entries.push(atlasEntry(molecule, species, temperatureK));
     }
   }
+  const physicsMs = lap();
   const build = options.build ?? buildIdentity(repoDir);
   const writeBenchSheets = options.sheets === false ? null : await findSheetWriter();
 
@@ -93,6 +124,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       });
     }
     log(`plots: ${plots.size * 2} SVGs`);
+    const plotsMs = lap();
 
     const nameIndexPath = "assets/search/names.json";
     writeFile(work, nameIndexPath, nameIndexJson(molecules));
@@ -118,6 +150,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     await bundleBrowserScript(join(work, "assets/search.js"));
     for (const asset of ["site.css", "favicon.svg"]) cpSync(join(contentDir, "assets", asset), join(work, "assets", asset));
 
+    const filesMs = lap();
     const data = siteData({
       molecules,
       entries,
@@ -129,6 +162,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       lineIndexPaths,
     });
     await runEleventy(work, data);
+    const pagesMs = lap();
 
     let sheets: string[] = [];
     if (writeBenchSheets) {
@@ -136,6 +170,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       log(`bench sheets: ${sheets.length} PDFs`);
     } else log(options.sheets === false ? "bench sheets: not requested" : "bench sheets: skipped (lib/sheet does not export writeBenchSheets yet)");
 
+    const sheetsMs = writeBenchSheets ? lap() : 0;
     const links = checkInternalLinks(work);
     if (links.broken.length) {
       const sample = links.broken.slice(0, 10).map((b) => `  ${b.page}: ${b.href} (${b.reason})`).join("\n");
@@ -143,7 +178,9 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     }
 
     swapDirectory(work, outDir);
-    return { outDir, molecules: molecules.length, pages: links.pages, entries: entries.length, sheets: sheets.length, lineIndex: lineIndexReport, build };
+    const finishMs = lap();
+    const timings = { loadingMs, physicsMs, plotsMs, filesMs, pagesMs, sheetsMs, finishMs, totalMs: performance.now() - started };
+    return { outDir, molecules: molecules.length, pages: links.pages, entries: entries.length, sheets: sheets.length, lineIndex: lineIndexReport, build, timings };
   } catch (error) {
     rmSync(work, { recursive: true, force: true });
     throw error;

@@ -14,7 +14,8 @@ molecule file (or a template or page) rebuilds the site; a failed rebuild prints
 and keeps serving the last good site. Stop with Ctrl-C.
 
   --port <n>              port to listen on (default 8080; the next free one if taken)
-  --molecules <dir>       read molecule files from <dir> instead of the shipped ones`;
+  --molecules <dir>       read molecule files from <dir> instead of the shipped ones
+  --out <dir>             build and serve <dir> instead of site/`;
 
 function describeFailure(error: unknown): string {
   if (error instanceof MoleculeFileError) return error.problems.map(formatProblem).join("\n");
@@ -22,12 +23,12 @@ function describeFailure(error: unknown): string {
 }
 
 export async function runServe(args: string[]): Promise<string> {
-  const { values } = parseCommandLine("serve", args, { port: { type: "string" }, molecules: { type: "string" } }, 0);
+  const { values } = parseCommandLine("serve", args, { port: { type: "string" }, molecules: { type: "string" }, out: { type: "string" } }, 0);
   if (values.help) return serveHelp + "\n";
   const port = numberOption("port", values.port as string | undefined, 8080);
   if (!Number.isInteger(port) || port < 1 || port > 65535) throw new UsageError(`--port ${values.port}: a port is a whole number from 1 to 65535`);
   const molecules = moleculesDir(values.molecules as string | undefined);
-  const siteDir = join(repoDir, "site");
+  const siteDir = (values.out as string | undefined) ?? join(repoDir, "site");
   const say = (line: string) => process.stdout.write(`${line}\n`);
 
   const rebuild = async (): Promise<boolean> => {

@@ -1,0 +1,89 @@
+import { createReadStream, existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync } from "node:fs";
+import { createServer } from "node:http";
+import type { AddressInfo } from "node:net";
+import { tmpdir } from "node:os";
+import { extname, join, normalize } from "node:path";
+import { gzipSync } from "node:zlib";
+import { chromium } from "playwright-core";
+import { loadNote, runChild, seconds } from "./childProcess.ts";
+import { writeSyntheticMolecules } from "./syntheticMolecules.ts";
+
+const types: Record<string, string> = { ".html": "text/html", ".js": "text/javascript", ".json": "application/json", ".css": "text/css", ".svg": "image/svg+xml", ".bin": "application/octet-stream" };
+
+/**
+ * The home page's wavenumber search over an atlas of N invented molecules, in Chromium: the
+ * index's compressed size per line (gzip, as a web server sends it) and the time of a query
+ * from submitting the form to the result table shown.
+ */
+export async function benchBrowserSearch(n: number, queries: number): Promise<string[]> {
+  const work = mkdtempSync(join(tmpdir(), "bandatlas-bench-browser-"));
+  const server = createServer((req, res) => {
+    const path = join(work, "site", normalize(decodeURIComponent(new URL(req.url!, "http://x").pathname)).replace(/^[/\\]+/, "") || "index.html");
+    const file = existsSync(path) && statSync(path).isDirectory() ? join(path, "index.html") : path;
+    if (!file.startsWith(join(work, "site")) || !existsSync(file)) return res.writeHead(404).end();
+    res.writeHead(200, { "content-type": types[extname(file)] ?? "application/octet-stream" });
+    createReadStream(file).pipe(res);
+  });
+  try {
+    const moleculesDir = writeSyntheticMolecules(join(work, "molecules"), n);
+    const built = await runChild<{ lines: Array<{ temperatureK: number; lines: number }> }>("./buildChild.ts", { moleculesDir, outDir: join(work, "site"), sheets: false });
+    const searchDir = join(work, "site/assets/search");
+    const out = [`machine: ${await loadNote()}`, `atlas of ${n} invented molecules built in ${seconds(built.wallMs)} (no sheets)`];
+    let totalLines = 0;
+    let totalGzip = 0;
+    let totalRaw = 0;
+    for (const { temperatureK, lines } of built.value.lines) {
+      const files = readdirSync(searchDir).filter((f) => f.startsWith(`lines-${temperatureK}K.`));
+      const raw = files.reduce((s, f) => s + statSync(join(searchDir, f)).size, 0);
+      const gz = files.reduce((s, f) => s + gzipSync(readFileSync(join(searchDir, f))).length, 0);
+      totalLines += lines;
+      totalGzip += gz;
+      totalRaw += raw;
+      if (temperatureK === 296) out.push(`index at 296 K: ${lines} lines, ${raw} bytes, ${gz} gzip = ${(gz / lines).toFixed(2)} bytes/line compressed (${(raw / lines).toFixed(2)} uncompressed)`);
+    }
+    out.push(`index, all temperatures: ${totalLines} lines, ${(totalGzip / totalLines).toFixed(2)} bytes/line compressed (${(totalRaw / totalLines).toFixed(2)} uncompressed); target ≤ 16 bytes/line`);
+
+    await new Promise<void>((r) => server.listen(0, "127.0.0.1", r));
+    const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}/`;
+    const browser = await chromium.launch({
+      executablePath: "/usr/bin/chromium",
+      args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--no-first-run", "--disable-sync"],
+    });
+    try {
+      const page = await browser.newPage();
+      await page.goto(base);
+      const times: number[] = await page.evaluate(async (count) => {
+        const form = document.querySelector<HTMLFormElement>("form[data-search=wavenumber]")!;
+        const output = document.getElementById("find-results")!;
+        (form.elements.namedItem("temperature") as HTMLSelectElement).value = "296";
+        const field = form.elements.namedItem("wavenumber") as HTMLInputElement;
+        const result: number[] = [];
+        for (let i = 0; i < count; i++) {
+          field.value = (1300 + ((i * 977) % 2900) + 0.37).toFixed(2);
+          const shown = new Promise<void>((resolve) => {
+            const observer = new MutationObserver(() => {
+              observer.disconnect();
+              resolve();
+            });
+            observer.observe(output, { childList: true });
+          });
+          const started = performance.now();
+          form.requestSubmit();
+          await shown;
+          result.push(performance.now() - started);
+        }
+        return result;
+      }, queries);
+      const [first, ...rest] = times;
+      rest.sort((a, b) => a - b);
+      out.push(`first query (fetching and decoding the 296 K index): ${first.toFixed(1)} ms`);
+      out.push(`query in Chromium over ${n} molecules: median ${rest[Math.floor(rest.length / 2)].toFixed(2)} ms, slowest ${rest[rest.length - 1].toFixed(2)} ms of ${rest.length}; target ≤ 20 ms`);
+    } finally {
+      await browser.close();
+    }
+    return out;
+  } finally {
+    server.close();
+    rmSync(work, { recursive: true, force: true });
+  }
+}
