@@ -10,6 +10,7 @@ import {
   speciesPartitionFunction,
   typicalBroadening,
   type AbsorbingLine,
+  type Band,
   type CalibrationCriteria,
   type CalibrationLine,
   type CellConditions,
@@ -68,17 +69,49 @@ function unitDipoleModel(species: SpeciesInfo, reference: SpeciesInfo): SpeciesM
   return { ...species.model, intensities: [data] };
 }
 
+/**
+ * The atlas's decisions for a gas cell as plain, JSON-able data: which species, which bands,
+ * which intensity data (cited, or the unit-dipole stand-in), which broadening. The build writes
+ * it for the bench page, whose browser turns it into lines with the same cellLinesOfModel the
+ * CLI uses, so both compute the same lines at any temperature.
+ */
+export interface CellModel {
+  moleculeId: string;
+  moleculeName: string;
+  intensityScale: IntensityScale;
+  broadening: GasBroadening;
+  species: Array<{ model: SpeciesModel; bands: Band[] }>;
+}
+
+export function cellModel(molecule: Molecule): CellModel {
+  const scale: IntensityScale = hasAbsoluteData(molecule) ? "absolute" : "relative-thin";
+  return {
+    moleculeId: molecule.id,
+    moleculeName: molecule.name,
+    intensityScale: scale,
+    broadening: molecule.broadening ?? typicalBroadening,
+    species: molecule.species.map((species) => ({
+      model: scale === "absolute" ? species.model : unitDipoleModel(species, molecule.species[0]),
+      bands: speciesBands(species).map((b) => b.band),
+    })),
+  };
+}
+
 /** All species at natural abundance, every band the atlas builds that has intensity data. */
 export function cellLineSet(molecule: Molecule, conditions: CellConditions): CellLineSet {
-  const scale: IntensityScale = hasAbsoluteData(molecule) ? "absolute" : "relative-thin";
-  const broadening = molecule.broadening ?? typicalBroadening;
+  return cellLinesOfModel(cellModel(molecule), conditions);
+}
+
+/** The lines of a cell model at the cell's conditions (pure: runs in the browser too). */
+export function cellLinesOfModel(cell: CellModel, conditions: CellConditions): CellLineSet {
+  const scale = cell.intensityScale;
+  const broadening = cell.broadening;
   const used: CellBand[] = [];
   const leftOut: CellLineSet["bandsLeftOut"] = [];
   let lines: AbsorbingLine[] = [];
-  for (const species of molecule.species) {
-    const model = scale === "absolute" ? species.model : unitDipoleModel(species, molecule.species[0]);
+  for (const { model, bands } of cell.species) {
     const q = speciesPartitionFunction(model, conditions.temperatureK);
-    for (const { band } of speciesBands(species)) {
+    for (const band of bands) {
       const result = bandLines(model, band, { temperatureK: conditions.temperatureK, partitionFunction: q });
       const label = bandLabel(band);
       if (result.strongestLineIntensity === null) {
@@ -95,11 +128,11 @@ export function cellLineSet(molecule: Molecule, conditions: CellConditions): Cel
   const typical = broadeningIsTypical(broadening, conditions.moleFraction);
   const notes: string[] = [];
   if (scale === "relative-thin") {
-    notes.push(`${molecule.name} has no cited band intensity: no transmittance can be given. Shapes are relative, optically thin, with a 1 D stand-in dipole; peak shifts assume a weak absorber.`);
+    notes.push(`${cell.moleculeName} has no cited band intensity: no transmittance can be given. Shapes are relative, optically thin, with a 1 D stand-in dipole; peak shifts assume a weak absorber.`);
   }
   if (typical) notes.push("Line widths use a typical pressure-broadening coefficient (0.07 cm⁻¹/atm, n = 0.75), not a measured one for this gas.");
   if (leftOut.length) notes.push(`Left out for want of intensity data: ${leftOut.map((b) => `${b.species} ${b.band}`).join(", ")}.`);
-  return { moleculeId: molecule.id, intensityScale: scale, lines, bandsUsed: used, bandsLeftOut: leftOut, broadeningTypical: typical, broadening, notes };
+  return { moleculeId: cell.moleculeId, intensityScale: scale, lines, bandsUsed: used, bandsLeftOut: leftOut, broadeningTypical: typical, broadening, notes };
 }
 
 export interface CellSpectrumSettings {

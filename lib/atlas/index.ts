@@ -4,3 +4,4 @@ export * from "./atlasEntry.ts";
 export * from "./atlasLines.ts";
 export * from "./moleculeBands.ts";
 export * from "./cellSpectrum.ts";
+export * from "./cellUnits.ts";

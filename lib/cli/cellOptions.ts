@@ -1,5 +1,5 @@
 import { apodizations, standardAtmospherePa, type Apodization, type CellConditions, type Instrument } from "../core/index.ts";
-import { defaultCellConditions } from "../atlas/index.ts";
+import { defaultCellConditions, lengthUnitsCm, maxCellPressurePa, pressureUnitsPa } from "../atlas/index.ts";
 import { numberOption, temperatureOption, type OptionSpec } from "./options.ts";
 import { UsageError } from "./usageError.ts";
 
@@ -29,8 +29,9 @@ export const cellOptionsHelp = `  --temperature <K>       gas temperature (defau
   --from <cm⁻¹> --to <cm⁻¹>  wavenumber range
   --molecules <dir>       read molecule files from <dir> instead of the shipped ones`;
 
-const pressureUnits: Record<string, number> = { pa: 1, kpa: 1000, hpa: 100, mbar: 100, torr: standardAtmospherePa / 760, atm: standardAtmospherePa };
-const lengthUnits: Record<string, number> = { m: 100, cm: 1, mm: 0.1 };
+const lowerCaseKeys = (units: Readonly<Record<string, number>>) => Object.fromEntries(Object.entries(units).map(([k, v]) => [k.toLowerCase(), v]));
+const pressureUnits = lowerCaseKeys(pressureUnitsPa);
+const lengthUnits = lowerCaseKeys(lengthUnitsCm);
 
 /** "--pressure 20 Torr" arrives as two words: join a unit word to the number before it. */
 export function joinUnitWords(args: string[]): string[] {
@@ -61,7 +62,7 @@ function quantity(name: string, text: string, units: Record<string, number>, exa
 export function pressureOptionPa(text: string | undefined): number {
   if (text === undefined) return defaultCellConditions.pressurePa;
   const pa = quantity("pressure", text, pressureUnits, `"20 Torr" or "2.5 kPa"`);
-  if (pa > 100 * standardAtmospherePa) throw new UsageError(`--pressure ${text}: above 100 atm the ideal-gas and Voigt models mean nothing`);
+  if (pa > maxCellPressurePa) throw new UsageError(`--pressure ${text}: above 100 atm the ideal-gas and Voigt models mean nothing`);
   return pa;
 }
 
