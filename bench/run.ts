@@ -6,6 +6,7 @@ import { benchCellTransmittance } from "./cellTransmittance.ts";
 import { benchCoreLines } from "./coreLines.ts";
 import { benchIncremental } from "./incrementalBuild.ts";
 import { benchScale } from "./scaleBuild.ts";
+import { benchSheetRender } from "./sheetRender.ts";
 import { benchShippedBuild } from "./shippedBuild.ts";
 
 const args = process.argv.slice(2);
@@ -21,6 +22,7 @@ const sections: Array<{ name: string; run: () => Promise<string[]> | string[] }>
     },
   },
   { name: "cell: CO transmittance, 300 cm⁻¹ at 0.002 cm⁻¹, all species, FT 0.5 cm⁻¹, Node", run: benchCellTransmittance },
+  { name: "sheets: one bench sheet, one core", run: benchSheetRender },
   { name: "build: shipped atlas, cold, beside a bare Eleventy baseline", run: benchShippedBuild },
   { name: "scale: invented molecules, full builds", run: () => benchScale(quick ? [10, 20] : [50, 200, 500]) },
   { name: "incremental: bandatlas serve, one molecule file saved", run: () => benchIncremental(quick ? 2 : 5) },

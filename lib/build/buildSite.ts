@@ -51,7 +51,7 @@ export interface BuildTimings {
   filesMs: number;
   /** Eleventy: page data and templates rendered and written. */
   pagesMs: number;
-  /** The PDF bench sheets (0 when not built). */
+  /** The PDF bench sheets still left once the pages were written (they start beside the plots; 0 when not built). */
   sheetsMs: number;
   /** The internal link check and the swap into place. */
   finishMs: number;
@@ -66,14 +66,14 @@ export class BuildError extends Error {
   }
 }
 
-type WriteBenchSheets = (options: { molecules: Molecule[]; entries: AtlasEntry[]; outDir: string; build: BuildIdentity }) => Promise<string[]>;
+type StartBenchSheets = (options: { molecules: Molecule[]; entries: AtlasEntry[]; outDir: string; build: BuildIdentity }) => { finish(): Promise<string[]>; cancel(): Promise<void> };
 
 /** The sheet renderer, once lib/sheet exports it; until then the site is built without sheets. */
-async function findSheetWriter(): Promise<WriteBenchSheets | null> {
+async function findSheetWriter(): Promise<StartBenchSheets | null> {
   const index = fileURLToPath(new URL("../sheet/index.ts", import.meta.url));
   if (!existsSync(index)) return null;
-  const sheetModule = (await import(pathToFileURL(index).href)) as { writeBenchSheets?: WriteBenchSheets };
-  return typeof sheetModule.writeBenchSheets === "function" ? sheetModule.writeBenchSheets : null;
+  const sheetModule = (await import(pathToFileURL(index).href)) as { startBenchSheets?: StartBenchSheets };
+  return typeof sheetModule.startBenchSheets === "function" ? sheetModule.startBenchSheets : null;
 }
 
 function writeFile(root: string, path: string, text: string) {
@@ -109,12 +109,16 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   }
   const physicsMs = lap();
   const build = options.build ?? buildIdentity(repoDir);
-  const writeBenchSheets = options.sheets === false ? null : await findSheetWriter();
+  const startBenchSheets = options.sheets === false ? null : await findSheetWriter();
 
   const outDir = resolve(options.outDir);
   mkdirSync(dirname(outDir), { recursive: true });
   const work = mkdtempSync(join(dirname(outDir), ".site-build-"));
+  // The sheets start first, on a worker thread, beside the plots and pages on this thread; this
+  // thread joins in once the pages are written (the entries are shared, never recomputed).
+  let sheetRun: ReturnType<StartBenchSheets> | null = null;
   try {
+    sheetRun = startBenchSheets ? startBenchSheets({ molecules, entries, outDir: work, build }) : null;
     const plots = new Map<AtlasEntry, EntryPlots>();
     for (const entry of entries) {
       plots.set(entry, {
@@ -156,7 +160,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       entries,
       plots,
       build,
-      sheetsAvailable: writeBenchSheets !== null,
+      sheetsAvailable: startBenchSheets !== null,
       developersMarkdownPath: join(repoDir, "DEVELOPERS.md"),
       nameIndexPath,
       lineIndexPaths,
@@ -165,12 +169,12 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     const pagesMs = lap();
 
     let sheets: string[] = [];
-    if (writeBenchSheets) {
-      sheets = await writeBenchSheets({ molecules, entries, outDir: work, build });
+    if (sheetRun) {
+      sheets = await sheetRun.finish();
       log(`bench sheets: ${sheets.length} PDFs`);
     } else log(options.sheets === false ? "bench sheets: not requested" : "bench sheets: skipped (lib/sheet does not export writeBenchSheets yet)");
 
-    const sheetsMs = writeBenchSheets ? lap() : 0;
+    const sheetsMs = sheetRun ? lap() : 0;
     const links = checkInternalLinks(work);
     if (links.broken.length) {
       const sample = links.broken.slice(0, 10).map((b) => `  ${b.page}: ${b.href} (${b.reason})`).join("\n");
@@ -182,6 +186,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     const timings = { loadingMs, physicsMs, plotsMs, filesMs, pagesMs, sheetsMs, finishMs, totalMs: performance.now() - started };
     return { outDir, molecules: molecules.length, pages: links.pages, entries: entries.length, sheets: sheets.length, lineIndex: lineIndexReport, build, timings };
   } catch (error) {
+    await sheetRun?.cancel();
     rmSync(work, { recursive: true, force: true });
     throw error;
   }

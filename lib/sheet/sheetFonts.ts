@@ -17,6 +17,57 @@ const fontkit = createRequire(require.resolve("pdfkit"))("fontkit") as { create(
 
 const cache = new Map<SheetFontName, unknown>();
 
+interface GlyphPosition {
+  xAdvance: number;
+  yAdvance: number;
+  xOffset: number;
+  yOffset: number;
+}
+interface FontkitFont {
+  layout(text: string, ...rest: unknown[]): { glyphs: unknown[]; positions: GlyphPosition[] };
+}
+
+/** Shaped texts kept per font; a bound so a very large build cannot grow it without end. */
+const maxShapedTexts = 50_000;
+
+/**
+ * The font with its text shaping remembered across documents. PDFKit remembers shaped words only
+ * within one document, and OpenType shaping (fontkit's layout) was the largest part of a sheet's
+ * time, while the A4 and Letter sheets of an entry, and all sheets' headings, print the same
+ * texts. Shaping is a pure function of the text; PDFKit scales the positions it gets in place,
+ * so every call hands out fresh position objects.
+ */
+function withSharedShaping(font: FontkitFont): unknown {
+  const shaped = new Map<string, { glyphs: unknown[]; positions: GlyphPosition[] }>();
+  const layout = (text: string, ...rest: unknown[]) => {
+    if (rest.some((r) => r !== undefined)) return font.layout(text, ...rest);
+    let run = shaped.get(text);
+    if (!run) {
+      const fresh = font.layout(text);
+      run = { glyphs: fresh.glyphs, positions: fresh.positions.map((p) => ({ xAdvance: p.xAdvance, yAdvance: p.yAdvance, xOffset: p.xOffset, yOffset: p.yOffset })) };
+      if (shaped.size >= maxShapedTexts) shaped.clear();
+      shaped.set(text, run);
+    }
+    const positions = run.positions.map((p) => ({ ...p }));
+    return {
+      glyphs: run.glyphs,
+      positions,
+      get advanceWidth() {
+        let width = 0;
+        for (const p of positions) width += p.xAdvance;
+        return width;
+      },
+    };
+  };
+  return new Proxy(font, {
+    get(target, property) {
+      if (property === "layout") return layout;
+      const value = Reflect.get(target, property, target);
+      return typeof value === "function" ? value.bind(target) : value;
+    },
+  });
+}
+
 /**
  * The parsed font, once per process: parsing DejaVu's tables took most of a sheet's render time.
  * PDFKit takes a fontkit font as a font source and makes a fresh subset of it for each document.
@@ -24,7 +75,7 @@ const cache = new Map<SheetFontName, unknown>();
 export function sheetFont(name: SheetFontName): unknown {
   let font = cache.get(name);
   if (!font) {
-    font = fontkit.create(readFileSync(require.resolve(sheetFontFiles[name])));
+    font = withSharedShaping(fontkit.create(readFileSync(require.resolve(sheetFontFiles[name]))) as FontkitFont);
     cache.set(name, font);
   }
   return font;

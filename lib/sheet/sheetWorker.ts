@@ -1,12 +1,32 @@
 import { parentPort } from "node:worker_threads";
 import { runBenchSheetJob, type BenchSheetJob } from "./benchSheetJob.ts";
 
-// One job at a time from the pool in writeBenchSheets.ts; every outcome is posted back.
-parentPort!.on("message", async (message: { id: number; job: BenchSheetJob }) => {
+type Message = { id: number; job: BenchSheetJob } | { jobs: BenchSheetJob[]; claim: SharedArrayBuffer };
+
+const reply = (id: number, error?: unknown) =>
+  parentPort!.postMessage(
+    error === undefined ? { id, ok: true } : { id, ok: false, message: error instanceof Error ? error.message : String(error), name: error instanceof Error ? error.name : "Error" },
+  );
+
+// Either one job (its outcome posted back), or the whole queue: every thread claims the next
+// job number from one shared counter, so no thread waits for another to hand out work.
+parentPort!.on("message", async (message: Message) => {
+  if ("claim" in message) {
+    const next = new Int32Array(message.claim);
+    for (let id = Atomics.add(next, 0, 1); id < message.jobs.length; id = Atomics.add(next, 0, 1)) {
+      try {
+        await runBenchSheetJob(message.jobs[id]);
+      } catch (error) {
+        return reply(id, error);
+      }
+      reply(id);
+    }
+    return;
+  }
   try {
     await runBenchSheetJob(message.job);
-    parentPort!.postMessage({ id: message.id, ok: true });
+    reply(message.id);
   } catch (error) {
-    parentPort!.postMessage({ id: message.id, ok: false, message: error instanceof Error ? error.message : String(error), name: error instanceof Error ? error.name : "Error" });
+    reply(message.id, error);
   }
 });

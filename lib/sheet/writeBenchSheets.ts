@@ -32,66 +32,81 @@ export function sheetPath(moleculeId: string, species: string, temperatureK: num
  */
 const sheetsPerExtraThread = 40;
 
-/**
- * Runs the jobs on the main thread and `extraThreads` worker threads at once, each taking the
- * next job from one queue, so the main thread is busy while the workers start.
- */
-function runOnThreads(jobs: BenchSheetJob[], extraThreads: number): Promise<void> {
-  return new Promise((resolve, reject) => {
-    const workers: Worker[] = [];
-    let next = 0;
-    let done = 0;
-    let settled = false;
-    const finish = (error?: Error) => {
-      if (settled) return;
-      if (!error && done < jobs.length) return;
-      settled = true;
-      for (const w of workers) void w.terminate();
-      if (error) reject(error);
-      else resolve();
-    };
-    const fail = (m: { message?: string; name?: string }) => finish(m.name === "SheetInputError" ? new SheetInputError(m.message!) : new Error(m.message));
-    const feed = (worker: Worker) => {
-      if (settled || next >= jobs.length) return;
-      const id = next++;
-      worker.postMessage({ id, job: jobs[id] });
-    };
-    for (let i = 0; i < extraThreads; i++) {
-      const worker = new Worker(new URL("./sheetWorkerEntry.mjs", import.meta.url));
-      workers.push(worker);
-      worker.on("message", (m: { ok: boolean; message?: string; name?: string }) => {
-        if (!m.ok) return fail(m);
-        done++;
-        finish();
-        feed(worker);
-      });
-      worker.on("error", (error) => finish(error));
-      worker.on("exit", (code) => {
-        if (code !== 0 && !settled) finish(new Error(`a sheet worker stopped with exit code ${code}`));
-      });
-      feed(worker);
-    }
-    void (async () => {
-      while (!settled && next < jobs.length) {
-        const job = jobs[next++];
-        try {
-          await runBenchSheetJob(job);
-        } catch (error) {
-          return finish(error as Error);
-        }
-        done++;
-        finish();
-      }
-    })();
-  });
+export interface BenchSheetRun {
+  /** Renders on this thread too, from the shared queue, until every sheet is written; the paths in entry order. */
+  finish(): Promise<string[]>;
+  /** Stops the workers (when the build failed elsewhere); resolves once they have stopped. */
+  cancel(): Promise<void>;
 }
 
 /**
- * Writes one sheet per entry and paper size, on the main thread and a worker thread when there
- * are many (rendering is CPU-bound: layout, font subsetting, compression). Returns the paths
- * written, in entry order.
+ * Starts `extraThreads` worker threads on the jobs at once; every thread claims the next job
+ * number from one shared counter (Atomics), so a worker never waits for this thread to hand out
+ * work while this thread is busy elsewhere (the site's plots and pages). `finish` makes this
+ * thread claim jobs too. Each worker gets the jobs once, up front.
  */
-export async function writeBenchSheets(options: WriteBenchSheetsOptions): Promise<string[]> {
+function startOnThreads(jobs: BenchSheetJob[], extraThreads: number): BenchSheetRun {
+  const workers: Worker[] = [];
+  const next = new Int32Array(new SharedArrayBuffer(4));
+  const claim = () => Atomics.add(next, 0, 1);
+  let done = 0;
+  let settled = false;
+  let resolveAll!: () => void;
+  let rejectAll!: (error: Error) => void;
+  const all = new Promise<void>((resolve, reject) => {
+    resolveAll = resolve;
+    rejectAll = reject;
+  });
+  all.catch(() => {}); // reported by finish(); never an unhandled rejection while the caller is busy
+  const stopWorkers = () => Promise.all(workers.map((w) => w.terminate())).then(() => {});
+  const settle = (error?: Error) => {
+    if (settled) return;
+    if (!error && done < jobs.length) return;
+    settled = true;
+    Atomics.store(next, 0, jobs.length);
+    void stopWorkers();
+    if (error) rejectAll(error);
+    else resolveAll();
+  };
+  const fail = (m: { message?: string; name?: string }) => settle(m.name === "SheetInputError" ? new SheetInputError(m.message!) : new Error(m.message));
+  for (let i = 0; i < extraThreads; i++) {
+    const worker = new Worker(new URL("./sheetWorkerEntry.mjs", import.meta.url));
+    workers.push(worker);
+    worker.on("message", (m: { ok: boolean; message?: string; name?: string }) => {
+      if (!m.ok) return fail(m);
+      done++;
+      settle();
+    });
+    worker.on("error", (error) => settle(error));
+    worker.on("exit", (code) => {
+      if (code !== 0 && !settled) settle(new Error(`a sheet worker stopped with exit code ${code}`));
+    });
+    worker.postMessage({ jobs, claim: next.buffer });
+  }
+  if (jobs.length === 0) settle();
+  return {
+    async finish() {
+      for (let id = claim(); !settled && id < jobs.length; id = claim()) {
+        try {
+          await runBenchSheetJob(jobs[id]);
+        } catch (error) {
+          settle(error as Error);
+          break;
+        }
+        done++;
+        settle();
+      }
+      await all;
+      return jobs.map((j) => j.path);
+    },
+    async cancel() {
+      settle(new Error("cancelled"));
+      await stopWorkers();
+    },
+  };
+}
+
+function sheetJobs(options: WriteBenchSheetsOptions): BenchSheetJob[] {
   const byId = new Map(options.molecules.map((m) => [m.id, m]));
   const papers = options.papers ?? paperNames;
   const jobs: BenchSheetJob[] = [];
@@ -102,8 +117,24 @@ export async function writeBenchSheets(options: WriteBenchSheetsOptions): Promis
       jobs.push({ request: { molecule, entry, paper, build: options.build }, path: join(options.outDir, sheetPath(molecule.id, entry.species, entry.temperatureK, paper)) });
     }
   }
+  return jobs;
+}
+
+/**
+ * Starts writing the sheets on worker threads (when there are enough to pay for one) and returns
+ * at once; the caller's `finish()` joins in on its own thread. writeBenchSheets is start + finish.
+ */
+export function startBenchSheets(options: WriteBenchSheetsOptions): BenchSheetRun {
+  const jobs = sheetJobs(options);
   const threads = options.threads ?? Math.min(2, availableParallelism(), 1 + Math.floor(jobs.length / sheetsPerExtraThread));
-  if (threads >= 2 && jobs.length >= 2) await runOnThreads(jobs, Math.min(threads, jobs.length) - 1);
-  else for (const job of jobs) await runBenchSheetJob(job);
-  return jobs.map((j) => j.path);
+  return startOnThreads(jobs, threads >= 2 && jobs.length >= 2 ? Math.min(threads, jobs.length) - 1 : 0);
+}
+
+/**
+ * Writes one sheet per entry and paper size, on the main thread and a worker thread when there
+ * are many (rendering is CPU-bound: layout, font subsetting, compression). Returns the paths
+ * written, in entry order.
+ */
+export async function writeBenchSheets(options: WriteBenchSheetsOptions): Promise<string[]> {
+  return startBenchSheets(options).finish();
 }
