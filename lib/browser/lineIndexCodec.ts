@@ -1,12 +1,16 @@
 // The wavenumber-search index shipped with the site: every line of the atlas at one temperature
-// (the same lines `bandatlas find` searches), packed as
-//   Float64 wavenumber[n] | Float64 relativeIntensity[n] | Uint16 group[n] | Uint16 label[n]
+// (the same lines `bandatlas find` searches), packed as four columns
+//   wavenumber[n] | relativeIntensity[n] | Uint16 group[n] | Uint16 label[n]
 // = 20 bytes a line, base64 in a small JSON file. Wavenumbers and intensities stay exact doubles
 // so the browser's answer is the CLI's answer digit for digit; groups (molecule, species, band,
 // page) and labels ("R(12)") are small tables referenced by index.
+// Packed for gzip (web servers send it compressed): the lines are sorted, so the 64-bit patterns
+// of the positive wavenumbers rise too and are stored as differences from the previous line's; each
+// column is then split into byte planes (all first bytes, then all second bytes, ...), so the
+// near-constant high bytes of a double become long runs. Both steps are exact and undone on load.
 import type { LocatedLine } from "../core/nearbyLines.ts";
 
-export const lineIndexFormat = "bandatlas-line-index-1";
+export const lineIndexFormat = "bandatlas-line-index-2";
 export const lineIndexBytesPerLine = 20;
 
 export interface LineIndexFile {
@@ -35,6 +39,53 @@ function fromBase64(text: string): Uint8Array {
   const bytes = new Uint8Array(binary.length);
   for (let i = 0; i < binary.length; i++) bytes[i] = binary.charCodeAt(i);
   return bytes;
+}
+
+/** Byte planes of `width`-byte items: item i's byte b goes to b·count + i. */
+function toPlanes(bytes: Uint8Array, width: number): Uint8Array {
+  const count = bytes.length / width;
+  const out = new Uint8Array(bytes.length);
+  for (let i = 0; i < count; i++) for (let b = 0; b < width; b++) out[b * count + i] = bytes[i * width + b];
+  return out;
+}
+
+function fromPlanes(planes: Uint8Array, width: number, out: Uint8Array): void {
+  const count = planes.length / width;
+  for (let b = 0; b < width; b++) {
+    const plane = b * count;
+    for (let i = 0; i < count; i++) out[i * width + b] = planes[plane + i];
+  }
+}
+
+/** Sorted positive doubles as differences of their bit patterns (little-endian 32-bit halves, exact). */
+function deltaBits(values: Float64Array): Uint32Array {
+  const halves = new Uint32Array(values.buffer.slice(values.byteOffset, values.byteOffset + values.byteLength));
+  const out = new Uint32Array(halves.length);
+  let lo = 0;
+  let hi = 0;
+  for (let i = 0; i < values.length; i++) {
+    const l = halves[2 * i];
+    const h = halves[2 * i + 1];
+    const borrow = l < lo ? 1 : 0;
+    out[2 * i] = (l - lo) >>> 0;
+    out[2 * i + 1] = (h - hi - borrow) >>> 0;
+    lo = l;
+    hi = h;
+  }
+  return out;
+}
+
+function undoDeltaBits(deltas: Uint32Array): void {
+  let lo = 0;
+  let hi = 0;
+  for (let i = 0; i < deltas.length / 2; i++) {
+    const sum = lo + deltas[2 * i];
+    const carry = sum > 0xffffffff ? 1 : 0;
+    lo = sum >>> 0;
+    hi = (hi + deltas[2 * i + 1] + carry) >>> 0;
+    deltas[2 * i] = lo;
+    deltas[2 * i + 1] = hi;
+  }
 }
 
 const compareLines = (a: LocatedLine, b: LocatedLine) =>
@@ -72,9 +123,15 @@ export function encodeLineIndex(lines: LocatedLine[], pageOf: (line: LocatedLine
     groupOf[i] = g;
     labelOf[i] = l;
   });
+  if (n > 0 && !(wavenumbers[0] > 0)) throw new Error("line index: wavenumbers must be positive");
   // Typed arrays use the platform's byte order; every browser and Node platform we target is
   // little-endian, and decodeLineIndex refuses to run on any other.
-  return { format: lineIndexFormat, temperatureK, minRelative, count: n, groups, labels, data: toBase64(new Uint8Array(buffer)) };
+  const packed = new Uint8Array(n * lineIndexBytesPerLine);
+  packed.set(toPlanes(new Uint8Array(deltaBits(wavenumbers).buffer), 8), 0);
+  packed.set(toPlanes(new Uint8Array(buffer, 8 * n, 8 * n), 8), 8 * n);
+  packed.set(toPlanes(new Uint8Array(buffer, 16 * n, 2 * n), 2), 16 * n);
+  packed.set(toPlanes(new Uint8Array(buffer, 18 * n, 2 * n), 2), 18 * n);
+  return { format: lineIndexFormat, temperatureK, minRelative, count: n, groups, labels, data: toBase64(packed) };
 }
 
 export interface DecodedLineIndex {
@@ -87,10 +144,16 @@ export interface DecodedLineIndex {
 export function decodeLineIndex(file: LineIndexFile): DecodedLineIndex {
   if (file.format !== lineIndexFormat) throw new Error(`line index: unknown format ${String(file.format)}`);
   if (new Uint8Array(new Uint16Array([1]).buffer)[0] !== 1) throw new Error("line index: this machine is big-endian; the index is little-endian");
-  const bytes = fromBase64(file.data);
+  const packed = fromBase64(file.data);
   const n = file.count;
-  if (bytes.length !== n * lineIndexBytesPerLine) throw new Error("line index: truncated data");
-  const buffer = bytes.buffer;
+  if (packed.length !== n * lineIndexBytesPerLine) throw new Error("line index: truncated data");
+  const buffer = new ArrayBuffer(n * lineIndexBytesPerLine);
+  const bytes = new Uint8Array(buffer);
+  fromPlanes(packed.subarray(0, 8 * n), 8, bytes.subarray(0, 8 * n));
+  undoDeltaBits(new Uint32Array(buffer, 0, 2 * n));
+  fromPlanes(packed.subarray(8 * n, 16 * n), 8, bytes.subarray(8 * n, 16 * n));
+  fromPlanes(packed.subarray(16 * n, 18 * n), 2, bytes.subarray(16 * n, 18 * n));
+  fromPlanes(packed.subarray(18 * n, 20 * n), 2, bytes.subarray(18 * n, 20 * n));
   const wavenumbers = new Float64Array(buffer, 0, n);
   const intensities = new Float64Array(buffer, 8 * n, n);
   const groupOf = new Uint16Array(buffer, 16 * n, n);
