@@ -7,15 +7,9 @@ import { decodeLineIndex, type DecodedLineIndex, type LineIndexFile } from "./li
 import { nameIndexOptions, nameSearchOptions } from "./nameSearchOptions.ts";
 import { searchWavenumber } from "./wavenumberSearch.ts";
 import { lineRowId } from "../site/sitePaths.ts";
+import { el } from "./dom.ts";
 
 const root = document.documentElement.dataset.root ?? "";
-
-function el<K extends keyof HTMLElementTagNameMap>(tag: K, text?: string, attrs: Record<string, string> = {}): HTMLElementTagNameMap[K] {
-  const node = document.createElement(tag);
-  if (text !== undefined) node.textContent = text;
-  for (const [k, v] of Object.entries(attrs)) node.setAttribute(k, v);
-  return node;
-}
 
 async function fetchJson<T>(path: string): Promise<T> {
   const response = await fetch(root + path);

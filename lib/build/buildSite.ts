@@ -9,8 +9,9 @@ import { lineIndexBytesPerLine } from "../browser/lineIndexCodec.ts";
 import { contentDir, runEleventy } from "../site/runEleventy.ts";
 import { siteData, type EntryPlots } from "../site/pageData.ts";
 import { lineIndex, nameIndexJson } from "../site/searchIndexes.ts";
-import { downloadPath, temperatureToken } from "../site/sitePaths.ts";
-import { bundleBrowserScript } from "./bundleBrowser.ts";
+import { benchModelPath, downloadPath, temperatureToken } from "../site/sitePaths.ts";
+import { moleculeBenchData } from "./benchData.ts";
+import { bundleBenchScript, bundleBrowserScript } from "./bundleBrowser.ts";
 import { buildIdentity, type BuildIdentity } from "./buildIdentity.ts";
 import { checkInternalLinks } from "./checkLinks.ts";
 import { swapDirectory } from "./swapDirectory.ts";
@@ -107,6 +108,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       for (const temperatureK of standardTemperaturesK) entries.push(atlasEntry(molecule, species, temperatureK));
     }
   }
+  // Calibration marks and the bench page's cell model: once per molecule, shared by pages and sheets.
+  const bench = new Map(molecules.map((m) => [m.id, moleculeBenchData(m)]));
   const physicsMs = lap();
   const build = options.build ?? buildIdentity(repoDir);
   const startBenchSheets = options.sheets === false ? null : await findSheetWriter();
@@ -152,6 +155,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     }
 
     await bundleBrowserScript(join(work, "assets/search.js"));
+    for (const b of bench.values()) writeFile(work, benchModelPath(b.moleculeId), JSON.stringify(b.model));
+    await bundleBenchScript(join(work, "assets/bench.js"));
     for (const asset of ["site.css", "favicon.svg"]) cpSync(join(contentDir, "assets", asset), join(work, "assets", asset));
 
     const filesMs = lap();
@@ -164,6 +169,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       developersMarkdownPath: join(repoDir, "DEVELOPERS.md"),
       nameIndexPath,
       lineIndexPaths,
+      bench,
     });
     await runEleventy(work, data);
     const pagesMs = lap();

@@ -2,11 +2,21 @@ import { fileURLToPath } from "node:url";
 import { build } from "esbuild";
 
 const entry = fileURLToPath(new URL("../browser/siteSearch.ts", import.meta.url));
+const benchEntry = fileURLToPath(new URL("../browser/benchPage.ts", import.meta.url));
 
-/** The site's one script, bundled from lib/browser (which imports lib/core's nearbyLines). */
+/** The site's search script, bundled from lib/browser (which imports lib/core's nearbyLines). */
 export async function bundleBrowserScript(outFile: string): Promise<void> {
+  await bundle(entry, outFile);
+}
+
+/** The bench pages' script: lib/atlas's cellLinesOfModel and lib/core's cell spectrum, in the browser. */
+export async function bundleBenchScript(outFile: string): Promise<void> {
+  await bundle(benchEntry, outFile);
+}
+
+async function bundle(entryPoint: string, outFile: string): Promise<void> {
   await build({
-    entryPoints: [entry],
+    entryPoints: [entryPoint],
     outfile: outFile,
     bundle: true,
     format: "iife",

@@ -3,3 +3,4 @@ export * from "./csv.ts";
 export * from "./lineRecords.ts";
 export * from "./linesTable.ts";
 export * from "./spectrumCells.ts";
+export * from "./calibrationText.ts";

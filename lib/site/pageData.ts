@@ -1,13 +1,14 @@
-import type { AtlasBand, AtlasEntry } from "../atlas/index.ts";
-import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, standardTemperaturesK } from "../atlas/index.ts";
-import { fixed, significant } from "../format/index.ts";
-import { bandLabel } from "../core/index.ts";
+import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
+import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
+import { calibrationByLine, calibrationCellText, calibrationConditionsText, calibrationCriteriaText, calibrationLineKey, fixed, resolutionsText, significant, type LineCalibration } from "../format/index.ts";
+import { lineShapeNames, type BenchSettings } from "../browser/benchSettings.ts";
+import { bandLabel, standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { describeBuild, type BuildIdentity } from "../build/buildIdentity.ts";
 import { pageLineCells, signedSignificant, speciesDisplay } from "./formatCells.ts";
 import { ghsPictogramNames } from "./ghsPictograms.ts";
 import { nearInfraredLimitNm, nearInfraredRows } from "./nearInfraredIndex.ts";
-import { downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "./sitePaths.ts";
+import { benchModelPath, benchPagePath, downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "./sitePaths.ts";
 
 /** Plots of one entry, rendered beforehand (lib/plot) and inlined by the template. */
 export interface EntryPlots {
@@ -44,9 +45,10 @@ function safeUrl(url: string | null): string | null {
   return url !== null && /^https?:\/\//i.test(url) ? url : null;
 }
 
-export function moleculeView(molecule: Molecule) {
+export function moleculeView(molecule: Molecule, hasBench = false) {
   return {
     id: molecule.id,
+    benchPath: hasBench ? benchPagePath(molecule.id) : null,
     name: molecule.name,
     formula: molecule.formula,
     casNumber: molecule.casNumber,
@@ -100,13 +102,29 @@ function truncationNote(band: AtlasBand): string {
   return `Lines up to J'' = ${band.lines.jLowerMax}; the list stops there because ${why}.`;
 }
 
-export function bandView(entry: AtlasEntry, band: AtlasBand) {
+export function bandView(entry: AtlasEntry, band: AtlasBand, calibration?: Map<string, LineCalibration[]>) {
   const residualByLabel = new Map<string, number>();
   for (const r of entry.residuals) {
     if (r.predictedMinusMeasured === null) continue;
     if (bandLabel(r.reference.band) !== band.label) continue;
     residualByLabel.set(r.reference.label, r.predictedMinusMeasured);
   }
+  const calibrationOf = (label: string) => {
+    const list = calibration?.get(calibrationLineKey(entry.species, band.label, label));
+    return list ? calibrationCellText(list) : null;
+  };
+  const rows = band.lines.lines.map((line) => {
+    const residual = residualByLabel.get(line.label);
+    return {
+      id: lineRowId(band.label, line.label),
+      label: line.label,
+      branch: line.branch,
+      ...pageLineCells(line),
+      // The table shows measured − predicted (the atlas stores predicted − measured).
+      measuredMinusPredicted: residual === undefined ? null : signedSignificant(-residual, 2),
+      calibration: calibrationOf(line.label),
+    };
+  });
   return {
     label: band.label,
     kind: band.kind,
@@ -123,24 +141,81 @@ export function bandView(entry: AtlasEntry, band: AtlasBand) {
       csv: downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"),
       json: downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"),
     },
-    rows: band.lines.lines.map((line) => {
-      const residual = residualByLabel.get(line.label);
-      return {
-        id: lineRowId(band.label, line.label),
-        label: line.label,
-        branch: line.branch,
-        ...pageLineCells(line),
-        // The table shows measured − predicted (the atlas stores predicted − measured).
-        measuredMinusPredicted: residual === undefined ? null : signedSignificant(-residual, 2),
-      };
-    }),
+    hasCalibration: rows.some((r) => r.calibration !== null),
+    rows,
   };
 }
 
-export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: EntryPlots, sheetsAvailable: boolean, allEntries: AtlasEntry[]) {
+/** What the build computed once per molecule for the bench page and the calibration marks. */
+export interface BenchInput {
+  marks: CalibrationMarks;
+  defaultRangeCm: { fromCm: number; toCm: number };
+}
+
+/** The legend of the calibration column: on pages at the marks' temperature, a pointer elsewhere. */
+function calibrationView(molecule: Molecule, entry: AtlasEntry, bench: BenchInput | undefined) {
+  if (!bench) return null;
+  const marks = bench.marks;
+  const benchPath = benchPagePath(molecule.id);
+  if (entry.temperatureK !== marks.conditions.temperatureK) {
+    return { applies: false as const, benchPath, markedPagePath: speciesPagePath(molecule.id, entry.species, marks.conditions.temperatureK), temperatureK: marks.conditions.temperatureK };
+  }
+  const count = marks.byResolution.reduce((n, r) => n + r.lines.filter((l) => l.species === entry.species).length, 0);
+  return {
+    applies: true as const,
+    benchPath,
+    resolutions: resolutionsText(marks.byResolution.map((r) => r.resolutionCm)),
+    conditions: calibrationConditionsText(marks),
+    criteria: calibrationCriteriaText(marks),
+    broadeningTypical: marks.broadeningTypical,
+    relative: marks.intensityScale !== "absolute",
+    notes: marks.notes,
+    count,
+  };
+}
+
+/** The bench page of one molecule: form defaults, choices, and where its cell model is. */
+export function benchPageView(molecule: Molecule, bench: BenchInput) {
+  const c = defaultCellConditions;
+  const defaults: BenchSettings = {
+    temperatureK: c.temperatureK,
+    pressure: Number(((c.pressurePa * 760) / standardAtmospherePa).toPrecision(6)),
+    pressureUnit: "Torr",
+    path: c.pathCm,
+    pathUnit: "cm",
+    moleFraction: c.moleFraction,
+    resolutionCm: 0.5,
+    lineShape: "triangular",
+    fromCm: bench.defaultRangeCm.fromCm,
+    toCm: bench.defaultRangeCm.toCm,
+    at: null,
+  };
+  return {
+    moleculeId: molecule.id,
+    moleculeName: molecule.name,
+    formula: molecule.formula,
+    path: benchPagePath(molecule.id),
+    moleculePath: moleculePagePath(molecule.id),
+    modelPath: benchModelPath(molecule.id),
+    speciesPath: speciesPagePath(molecule.id, molecule.species[0].model.label, defaultTemperatureK),
+    hazard: hazardView(molecule),
+    absolute: bench.marks.intensityScale === "absolute",
+    defaults,
+    defaultsJson: JSON.stringify(defaults),
+    pressureUnits: Object.keys(pressureUnitsPa),
+    lengthUnits: Object.keys(lengthUnitsCm),
+    lineShapes: Object.entries(lineShapeNames).map(([value, name]) => ({ value, name })),
+    resolutions: [...calibrationResolutionsCm, 8],
+    criteria: calibrationCriteriaText(bench.marks),
+  };
+}
+
+export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: EntryPlots, sheetsAvailable: boolean, allEntries: AtlasEntry[], bench?: BenchInput) {
   const path = speciesPagePath(entry.moleculeId, entry.species, entry.temperatureK);
   const sameSpecies = allEntries.filter((e) => e.moleculeId === entry.moleculeId && e.species === entry.species);
-  const bands = entry.bands.map((b) => bandView(entry, b));
+  const calibration = calibrationView(molecule, entry, bench);
+  const byLine = calibration?.applies ? calibrationByLine(bench!.marks) : undefined;
+  const bands = entry.bands.map((b) => bandView(entry, b, byLine));
   return {
     path,
     moleculeId: molecule.id,
@@ -154,6 +229,7 @@ export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: En
     partitionFunction: significant(entry.partitionFunction, 6),
     hazard: hazardView(molecule),
     plots,
+    calibration,
     fundamental: bands.filter((b) => b.kind === "fundamental"),
     hot: bands.filter((b) => b.kind === "hot"),
     overtones: bands.filter((b) => b.kind === "overtone" || b.kind === "combination"),
@@ -210,6 +286,8 @@ export interface SiteDataInput {
   developersMarkdownPath: string;
   nameIndexPath: string;
   lineIndexPaths: Array<{ temperatureK: number; path: string }>;
+  /** Per molecule id: calibration marks and bench-page defaults, computed once by the build. */
+  bench?: Map<string, BenchInput>;
 }
 
 /** Everything the templates read, as one global data object. */
@@ -217,8 +295,9 @@ export function siteData(input: SiteDataInput) {
   const byId = new Map(input.molecules.map((m) => [m.id, m]));
   return {
     build: { ...input.build, text: describeBuild(input.build) },
-    molecules: input.molecules.map(moleculeView),
-    speciesPages: input.entries.map((e) => speciesPageView(byId.get(e.moleculeId)!, e, input.plots.get(e)!, input.sheetsAvailable, input.entries)),
+    molecules: input.molecules.map((m) => moleculeView(m, input.bench?.has(m.id) ?? false)),
+    speciesPages: input.entries.map((e) => speciesPageView(byId.get(e.moleculeId)!, e, input.plots.get(e)!, input.sheetsAvailable, input.entries, input.bench?.get(e.moleculeId))),
+    benchPages: input.molecules.filter((m) => input.bench?.has(m.id)).map((m) => benchPageView(m, input.bench!.get(m.id)!)),
     accuracy: accuracyRows(input.molecules, input.entries),
     nearInfrared: { rows: nearInfraredRows(input.molecules, input.entries), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },
     temperatures: standardTemperaturesK.map((t) => ({ value: t, token: temperatureToken(t), isDefault: t === defaultTemperatureK })),

@@ -19,6 +19,16 @@ export function speciesPagePath(moleculeId: string, species: string, temperature
   return `${speciesPageDir(moleculeId, species, temperatureK)}/index.html`;
 }
 
+/** The bench page of a molecule: the visitor's cell and instrument, computed in the browser. */
+export function benchPagePath(moleculeId: string): string {
+  return `molecules/${moleculeId}/bench/index.html`;
+}
+
+/** The cell model (species, bands, intensity data, broadening) the bench page computes from. */
+export function benchModelPath(moleculeId: string): string {
+  return `molecules/${moleculeId}/bench/cell-model.json`;
+}
+
 /** One band's table as a download: same bytes as `bandatlas lines --format csv|json`. */
 export function downloadPath(moleculeId: string, species: string, temperatureK: number, bandLabel: string, format: "csv" | "json"): string {
   return `${speciesPageDir(moleculeId, species, temperatureK)}/${moleculeId}-${species}-${temperatureToken(temperatureK)}K-${bandLabel}.${format}`;
