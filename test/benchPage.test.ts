@@ -156,3 +156,26 @@ describe("calibration marks on the species pages", () => {
     expect(readFileSync(join(site, "molecules/co/index.html"), "utf8")).toContain('href="bench/index.html"');
   });
 });
+
+describe("calibration marks on the bench sheets", () => {
+  it("names the 296 K sheet's calibration-grade lines per default resolution, with the cell and the flags", async () => {
+    const { renderBenchSheet } = await import("../lib/sheet/index.ts");
+    const { atlasEntry } = await import("../lib/atlas/index.ts");
+    const { execFileSync } = await import("node:child_process");
+    const { writeFileSync } = await import("node:fs");
+    const co = molecules.find((m) => m.id === "co")!;
+    const marks = calibrationMarks(co);
+    const build = { version: "0.0.0", commit: "test", dateIso: "2026-01-01T00:00:00Z" };
+    const file = join(work, "co-296.pdf");
+    writeFileSync(file, await renderBenchSheet({ molecule: co, entry: atlasEntry(co, co.species[0], 296), paper: "a4", build, calibration: marks }));
+    // pdftotext (poppler-utils) reads the sheet back as a reader would.
+    const text = execFileSync("pdftotext", ["-layout", file, "-"], { encoding: "utf8" }).replace(/\s+/g, " ");
+    expect(text).toContain("Recommended for calibration");
+    expect(text).toContain("a 10 cm cell of the pure gas at 296 K and 20 Torr");
+    const at4 = marks.byResolution.find((r) => r.resolutionCm === 4)!.lines.filter((l) => l.species === "12C16O" && l.band === "1-0").map((l) => l.label);
+    expect(at4.length).toBeGreaterThan(0);
+    expect(text).toContain(`at 4 cm⁻¹`);
+    for (const label of at4) expect(text).toContain(label);
+    expect(text).toContain("typical (not measured) pressure-broadening");
+  });
+});

@@ -1,7 +1,7 @@
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync, cpSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
-import { atlasEntry, standardTemperaturesK, type AtlasEntry } from "../atlas/index.ts";
+import { atlasEntry, standardTemperaturesK, type AtlasEntry, type CalibrationMarks } from "../atlas/index.ts";
 import { linesCsv, linesDocument } from "../format/index.ts";
 import { loadMoleculesOrThrow, type Molecule } from "../molecules/index.ts";
 import { bandOverviewDescription, bandOverviewSvg } from "../plot/index.ts";
@@ -67,7 +67,7 @@ export class BuildError extends Error {
   }
 }
 
-type StartBenchSheets = (options: { molecules: Molecule[]; entries: AtlasEntry[]; outDir: string; build: BuildIdentity }) => { finish(): Promise<string[]>; cancel(): Promise<void> };
+type StartBenchSheets = (options: { molecules: Molecule[]; entries: AtlasEntry[]; outDir: string; build: BuildIdentity; calibration?: CalibrationMarks[] }) => { finish(): Promise<string[]>; cancel(): Promise<void> };
 
 /** The sheet renderer, once lib/sheet exports it; until then the site is built without sheets. */
 async function findSheetWriter(): Promise<StartBenchSheets | null> {
@@ -121,7 +121,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   // thread joins in once the pages are written (the entries are shared, never recomputed).
   let sheetRun: ReturnType<StartBenchSheets> | null = null;
   try {
-    sheetRun = startBenchSheets ? startBenchSheets({ molecules, entries, outDir: work, build }) : null;
+    sheetRun = startBenchSheets ? startBenchSheets({ molecules, entries, outDir: work, build, calibration: [...bench.values()].map((b) => b.marks) }) : null;
     const plots = new Map<AtlasEntry, EntryPlots>();
     for (const entry of entries) {
       plots.set(entry, {

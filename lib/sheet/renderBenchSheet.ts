@@ -1,5 +1,5 @@
 import PDFDocument from "pdfkit";
-import type { AtlasEntry } from "../atlas/index.ts";
+import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { buildDate, type SheetBuildIdentity } from "./buildIdentity.ts";
 import { drawLegendLine } from "./drawLegend.ts";
@@ -19,6 +19,8 @@ export interface BenchSheetRequest {
   build: SheetBuildIdentity;
   /** Calibration-grade line labels of the fundamental, once the molecule files flag them; omit until then. */
   calibrationLineLabels?: readonly string[];
+  /** Calibration-grade lines of the molecule at the default resolutions (lib/atlas calibrationMarks). */
+  calibration?: CalibrationMarks;
 }
 
 const plotHeightPt = 178;

@@ -1,6 +1,6 @@
-import type { AtlasBand, AtlasEntry } from "../atlas/index.ts";
+import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { sameBand, type Band, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
-import { fixed, lineCells, significant } from "../format/index.ts";
+import { calibrationConditionsText, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
 import { describeBuild } from "../build/buildIdentity.ts";
@@ -70,6 +70,28 @@ export interface SheetContentInput {
    * the molecule files carry those flags; when given, the sheet names them under the table.
    */
   calibrationLineLabels?: readonly string[];
+  /** Calibration-grade lines at the default resolutions (lib/atlas calibrationMarks); named under the plot. */
+  calibration?: CalibrationMarks;
+}
+
+/** The marks of this species' band, per resolution, with the range of expected peak shifts. */
+function calibrationMarksNote(marks: CalibrationMarks, entry: AtlasEntry, band: AtlasBand): string {
+  if (entry.temperatureK !== marks.conditions.temperatureK) {
+    return `Calibration-grade lines are named on the ${marks.conditions.temperatureK} K sheet of this species (default cell); for another cell see the atlas's cell and instrument page or bandatlas calibration-lines.`;
+  }
+  const parts = marks.byResolution.map((r) => {
+    const lines = r.lines.filter((l) => l.species === entry.species && l.band === band.label);
+    if (!lines.length) return `at ${r.resolutionCm} cm⁻¹: none`;
+    const shifts = lines.map((l) => l.peakShiftCm).filter((v): v is number => v !== null);
+    const range = shifts.length ? ` (peak shifts ${peakShiftDigits(Math.min(...shifts))} to ${peakShiftDigits(Math.max(...shifts))} cm⁻¹)` : "";
+    return `at ${r.resolutionCm} cm⁻¹${range}: ${lines.map((l) => displayText(l.label)).join(", ")}`;
+  });
+  const k = marks.criteria;
+  const flags = [marks.broadeningTypical ? " Line widths use a typical (not measured) pressure-broadening coefficient." : "", marks.intensityScale !== "absolute" ? " No cited band intensity: an optically thin cell is assumed." : ""].join("");
+  return (
+    `Recommended for calibration (strong: ≥ ${k.strongFraction} of the gas's strongest line; isolated: no line ≥ ${k.neighbourFraction} of it within ±${k.isolationMultiple} × R) for ${calibrationConditionsText(marks)}; ` +
+    `${parts.join("; ")}.${flags} Each line's shift: bandatlas calibration-lines.`
+  );
 }
 
 export const cautionDeferral =
@@ -159,7 +181,9 @@ export function sheetContent(input: SheetContentInput): SheetContent {
     bandLines.intensityOrigin === null ? "relative intensities only (no cited band strength or dipole)" : `absolute intensities from ${bandLines.intensityOrigin.replace(/-/g, " ")} dipole data`;
   const title = displayText(molecule.name);
   const temperatureText = `T = ${entry.temperatureK} K (${fixed(entry.temperatureK - 273.15, 2).replace(/\.?0+$/, "")} °C)`;
-  const calibration = input.calibrationLineLabels?.length
+  const calibration = input.calibration
+    ? calibrationMarksNote(input.calibration, entry, fundamental)
+    : input.calibrationLineLabels?.length
     ? `Recommended for calibration (calibration-grade flags of the molecule file): ${input.calibrationLineLabels.map(displayText).join(", ")}.`
     : null;
   return {

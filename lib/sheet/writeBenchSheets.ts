@@ -1,7 +1,7 @@
 import { availableParallelism } from "node:os";
 import { join } from "node:path";
 import { Worker } from "node:worker_threads";
-import type { AtlasEntry } from "../atlas/index.ts";
+import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
 import { runBenchSheetJob, type BenchSheetJob } from "./benchSheetJob.ts";
@@ -15,6 +15,8 @@ export interface WriteBenchSheetsOptions {
   /** The site folder; sheets go to <outDir>/sheets/<moleculeId>/<species>-<T>K-<paper>.pdf. */
   outDir: string;
   build: SheetBuildIdentity;
+  /** Calibration-grade lines per molecule (plain data, computed once by the build); sheets name them under the plot. */
+  calibration?: CalibrationMarks[];
   /** Default: every paper size (A4 and Letter). */
   papers?: PaperName[];
   /** Threads to render on, the main thread included; default 2 (both cores) when there are enough sheets to pay for starting a worker. */
@@ -114,7 +116,8 @@ function sheetJobs(options: WriteBenchSheetsOptions): BenchSheetJob[] {
     const molecule = byId.get(entry.moleculeId);
     if (!molecule) throw new SheetInputError(`no molecule "${entry.moleculeId}" for the atlas entry of ${entry.species} at ${entry.temperatureK} K`);
     for (const paper of papers) {
-      jobs.push({ request: { molecule, entry, paper, build: options.build }, path: join(options.outDir, sheetPath(molecule.id, entry.species, entry.temperatureK, paper)) });
+      const calibration = options.calibration?.find((c) => c.moleculeId === molecule.id);
+      jobs.push({ request: { molecule, entry, paper, build: options.build, ...(calibration ? { calibration } : {}) }, path: join(options.outDir, sheetPath(molecule.id, entry.species, entry.temperatureK, paper)) });
     }
   }
   return jobs;
