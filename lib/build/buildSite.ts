@@ -12,6 +12,7 @@ import { lineIndex, nameIndexJson } from "../site/searchIndexes.ts";
 import { benchModelPath, downloadPath, temperatureToken } from "../site/sitePaths.ts";
 import { moleculeBenchData } from "./benchData.ts";
 import { bundleBenchScript, bundleBrowserScript } from "./bundleBrowser.ts";
+import type { BuildCache } from "./buildCache.ts";
 import { buildIdentity, type BuildIdentity } from "./buildIdentity.ts";
 import { checkInternalLinks } from "./checkLinks.ts";
 import { swapDirectory } from "./swapDirectory.ts";
@@ -25,6 +26,8 @@ export interface BuildOptions {
   build?: BuildIdentity;
   /** Write the PDF bench sheets (default true; tests of the pages turn them off for speed). */
   sheets?: boolean;
+  /** Results kept between rebuilds of one `bandatlas serve` session (entries and plots of unchanged molecules). */
+  cache?: BuildCache;
   /** Progress lines for the person running the build. */
   log?: (line: string) => void;
 }
@@ -102,14 +105,14 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   };
   const molecules = loadMoleculesOrThrow(options.moleculesDir).sort((a, b) => a.id.localeCompare(b.id));
   const loadingMs = lap();
-  const entries: AtlasEntry[] = [];
-  for (const molecule of molecules) {
-    for (const species of molecule.species) {
-      for (const temperatureK of standardTemperaturesK) entries.push(atlasEntry(molecule, species, temperatureK));
-    }
-  }
+  const cache = options.cache;
+  const perMolecule = <T>(kind: string, molecule: Molecule, compute: () => T): T => (cache ? cache.forMolecule(kind, molecule, compute) : compute());
+  const entriesOf = new Map(
+    molecules.map((molecule) => [molecule.id, perMolecule("entries", molecule, () => molecule.species.flatMap((species) => standardTemperaturesK.map((temperatureK) => atlasEntry(molecule, species, temperatureK))))]),
+  );
+  const entries: AtlasEntry[] = [...entriesOf.values()].flat();
   // Calibration marks and the bench page's cell model: once per molecule, shared by pages and sheets.
-  const bench = new Map(molecules.map((m) => [m.id, moleculeBenchData(m)]));
+  const bench = new Map(molecules.map((m) => [m.id, perMolecule("bench", m, () => moleculeBenchData(m))]));
   const physicsMs = lap();
   const build = options.build ?? buildIdentity(repoDir);
   const startBenchSheets = options.sheets === false ? null : await findSheetWriter();
@@ -123,12 +126,14 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   try {
     sheetRun = startBenchSheets ? startBenchSheets({ molecules, entries, outDir: work, build, calibration: [...bench.values()].map((b) => b.marks) }) : null;
     const plots = new Map<AtlasEntry, EntryPlots>();
-    for (const entry of entries) {
-      plots.set(entry, {
-        linearSvg: await bandOverviewSvg(entry, "linear"),
-        logSvg: await bandOverviewSvg(entry, "log"),
-        description: bandOverviewDescription(entry, "linear"),
+    for (const molecule of molecules) {
+      const moleculeEntries = entriesOf.get(molecule.id)!;
+      const moleculePlots = await perMolecule("plots", molecule, async () => {
+        const made: EntryPlots[] = [];
+        for (const entry of moleculeEntries) made.push({ linearSvg: await bandOverviewSvg(entry, "linear"), logSvg: await bandOverviewSvg(entry, "log"), description: bandOverviewDescription(entry, "linear") });
+        return made;
       });
+      moleculeEntries.forEach((entry, i) => plots.set(entry, moleculePlots[i]));
     }
     log(`plots: ${plots.size * 2} SVGs`);
     const plotsMs = lap();
@@ -139,7 +144,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     const lineIndexReport = [];
     for (const temperatureK of standardTemperaturesK) {
       const path = `assets/search/lines-${temperatureToken(temperatureK)}K.json`;
-      const file = lineIndex(molecules, temperatureK);
+      const file = lineIndex(molecules, temperatureK, entries);
       const text = JSON.stringify(file);
       writeFile(work, path, text);
       lineIndexPaths.push({ temperatureK, path });
@@ -147,11 +152,16 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     }
     log(`search index: ${lineIndexReport.map((r) => `${r.lines} lines at ${r.temperatureK} K`).join(", ")} (${lineIndexBytesPerLine} bytes a line before base64)`);
 
-    for (const entry of entries) {
-      for (const band of entry.bands) {
-        writeFile(work, downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"), linesCsv(band.lines));
-        writeFile(work, downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"), JSON.stringify(linesDocument(entry.moleculeId, band.lines), null, 2) + "\n");
-      }
+    for (const molecule of molecules) {
+      const downloads = perMolecule("downloads", molecule, () =>
+        entriesOf.get(molecule.id)!.flatMap((entry) =>
+          entry.bands.flatMap((band) => [
+            [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"), linesCsv(band.lines)],
+            [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"), JSON.stringify(linesDocument(entry.moleculeId, band.lines), null, 2) + "\n"],
+          ]),
+        ),
+      );
+      for (const [path, text] of downloads) writeFile(work, path, text);
     }
 
     await bundleBrowserScript(join(work, "assets/search.js"));
@@ -188,6 +198,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     }
 
     swapDirectory(work, outDir);
+    cache?.endBuild();
     const finishMs = lap();
     const timings = { loadingMs, physicsMs, plotsMs, filesMs, pagesMs, sheetsMs, finishMs, totalMs: performance.now() - started };
     return { outDir, molecules: molecules.length, pages: links.pages, entries: entries.length, sheets: sheets.length, lineIndex: lineIndexReport, build, timings };

@@ -1,5 +1,5 @@
 import MiniSearch from "minisearch";
-import { atlasLines, defaultFindMinRelative } from "../atlas/index.ts";
+import { atlasLines, defaultFindMinRelative, entryLines, type AtlasEntry } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { encodeLineIndex, type LineIndexFile } from "../browser/lineIndexCodec.ts";
 import { nameIndexOptions, type NameDocument } from "../browser/nameSearchOptions.ts";
@@ -24,8 +24,10 @@ export function nameIndexJson(molecules: Molecule[]): string {
 
 /**
  * The wavenumber index at one temperature: exactly the lines `bandatlas find` searches (the
- * atlas's atlasLines at find's default threshold), each pointing at its species page.
+ * atlas's atlasLines at find's default threshold), each pointing at its species page. Given the
+ * build's entries, the lines are taken from them rather than computed a second time.
  */
-export function lineIndex(molecules: Molecule[], temperatureK: number): LineIndexFile {
-  return encodeLineIndex(atlasLines(molecules, temperatureK, defaultFindMinRelative), (l) => speciesPagePath(l.molecule, l.species, temperatureK), temperatureK, defaultFindMinRelative);
+export function lineIndex(molecules: Molecule[], temperatureK: number, entries?: AtlasEntry[]): LineIndexFile {
+  const lines = entries ? entryLines(entries, temperatureK, defaultFindMinRelative) : atlasLines(molecules, temperatureK, defaultFindMinRelative);
+  return encodeLineIndex(lines, (l) => speciesPagePath(l.molecule, l.species, temperatureK), temperatureK, defaultFindMinRelative);
 }

@@ -1,7 +1,7 @@
 import { watch, type FSWatcher } from "node:fs";
 import { join } from "node:path";
 import EleventyDevServer from "@11ty/eleventy-dev-server";
-import { buildSite, repoDir } from "../../build/index.ts";
+import { BuildCache, buildSite, repoDir } from "../../build/index.ts";
 import { formatProblem, MoleculeFileError } from "../../molecules/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
 import { numberOption, parseCommandLine } from "../options.ts";
@@ -31,11 +31,13 @@ export async function runServe(args: string[]): Promise<string> {
   const siteDir = (values.out as string | undefined) ?? join(repoDir, "site");
   const say = (line: string) => process.stdout.write(`${line}\n`);
 
+  // Entries and plots of molecule files that did not change are reused from the previous build.
+  const cache = new BuildCache();
   const rebuild = async (): Promise<boolean> => {
     const started = performance.now();
     try {
       // Sheets are left out while serving so a save shows up in seconds; `bandatlas build` makes them.
-      await buildSite({ moleculesDir: molecules, outDir: siteDir, sheets: false });
+      await buildSite({ moleculesDir: molecules, outDir: siteDir, sheets: false, cache });
       say(`built site/ in ${((performance.now() - started) / 1000).toFixed(1)} s`);
       return true;
     } catch (error) {

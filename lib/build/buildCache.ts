@@ -1,0 +1,43 @@
+import { createHash } from "node:crypto";
+import type { Molecule } from "../molecules/index.ts";
+
+/**
+ * What a `bandatlas serve` session keeps between rebuilds: results that depend on one molecule
+ * file alone (its atlas entries, their plots, ...), keyed by the loaded molecule's content, so a
+ * save recomputes only the molecule that changed. The code cannot change under a running
+ * session (modules load once), so equal content means equal results. Entries not used by the
+ * latest build are dropped when it finishes (`endBuild`), so removed or edited molecules do not pile up.
+ */
+export class BuildCache {
+  private values = new Map<string, { value: unknown; build: number }>();
+  private build = 0;
+  private counts = { reused: 0, computed: 0 };
+
+  /** The value of `kind` for this molecule, computed once per distinct molecule content. */
+  forMolecule<T>(kind: string, molecule: Molecule, compute: () => T): T {
+    const key = `${kind}\u0000${createHash("sha1").update(JSON.stringify(molecule)).digest("hex")}`;
+    const hit = this.values.get(key);
+    if (hit) {
+      hit.build = this.build;
+      this.counts.reused++;
+      return hit.value as T;
+    }
+    const value = compute();
+    this.counts.computed++;
+    this.values.set(key, { value, build: this.build });
+    // A failed computation is not remembered: the next build tries again.
+    if (value instanceof Promise) value.catch(() => this.values.delete(key));
+    return value;
+  }
+
+  /** Forgets what the build just finished did not use, and starts counting the next one. */
+  endBuild(): void {
+    for (const [key, entry] of this.values) if (entry.build !== this.build) this.values.delete(key);
+    this.build++;
+    this.lastBuild = this.counts;
+    this.counts = { reused: 0, computed: 0 };
+  }
+
+  /** How many per-molecule results the last finished build reused and computed. */
+  lastBuild = { reused: 0, computed: 0 };
+}
