@@ -10,6 +10,15 @@ import { benchSheetRender } from "./sheetRender.ts";
 import { benchShippedBuild } from "./shippedBuild.ts";
 
 const args = process.argv.slice(2);
+const known = ["--quick", "--help", "-h"];
+if (args.includes("--help") || args.includes("-h") || args.some((a) => a.startsWith("-") && !known.includes(a))) {
+  console.log(`npm run bench [-- [--quick] [section-prefix]]
+
+Prints every speed figure with its target. Sections: core, sheets, build, scale, incremental,
+browser (a prefix picks them). The full run builds atlases of 50, 200 and 500 invented molecules
+and takes many minutes; --quick uses 10 and 20 (and 50 for the browser) instead.`);
+  process.exit(args.includes("--help") || args.includes("-h") ? 0 : 2);
+}
 const quick = args.includes("--quick");
 const only = args.find((a) => !a.startsWith("--"));
 
