@@ -13,9 +13,18 @@ export class BuildCache {
   private build = 0;
   private counts = { reused: 0, computed: 0 };
 
+  private key(kind: string, molecule: Molecule): string {
+    return `${kind}\u0000${createHash("sha1").update(JSON.stringify(molecule)).digest("hex")}`;
+  }
+
+  /** Whether `kind` for this molecule's content is kept (forMolecule would not compute it). */
+  has(kind: string, molecule: Molecule): boolean {
+    return this.values.has(this.key(kind, molecule));
+  }
+
   /** The value of `kind` for this molecule, computed once per distinct molecule content. */
   forMolecule<T>(kind: string, molecule: Molecule, compute: () => T): T {
-    const key = `${kind}\u0000${createHash("sha1").update(JSON.stringify(molecule)).digest("hex")}`;
+    const key = this.key(kind, molecule);
     const hit = this.values.get(key);
     if (hit) {
       hit.build = this.build;

@@ -10,7 +10,7 @@ import { contentDir, runEleventy } from "../site/runEleventy.ts";
 import { siteData, type EntryPlots } from "../site/pageData.ts";
 import { lineIndex, nameIndexJson } from "../site/searchIndexes.ts";
 import { benchModelPath, downloadPath, temperatureToken } from "../site/sitePaths.ts";
-import { moleculeBenchData } from "./benchData.ts";
+import { startBenchData, type BenchDataRun } from "./benchDataPool.ts";
 import { bundleBenchScript, bundleBrowserScript } from "./bundleBrowser.ts";
 import type { BuildCache } from "./buildCache.ts";
 import { buildIdentity, type BuildIdentity } from "./buildIdentity.ts";
@@ -47,7 +47,7 @@ export interface BuildReport {
 export interface BuildTimings {
   /** Reading and validating the molecule files. */
   loadingMs: number;
-  /** The AtlasEntry of every species at every temperature. */
+  /** The AtlasEntry of every species at every temperature, and each molecule's bench data (calibration marks; the part left after the plots it runs beside). */
   physicsMs: number;
   /** The band-overview SVGs (vega). */
   plotsMs: number;
@@ -111,20 +111,23 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     molecules.map((molecule) => [molecule.id, perMolecule("entries", molecule, () => molecule.species.flatMap((species) => standardTemperaturesK.map((temperatureK) => atlasEntry(molecule, species, temperatureK))))]),
   );
   const entries: AtlasEntry[] = [...entriesOf.values()].flat();
-  // Calibration marks and the bench page's cell model: once per molecule, shared by pages and sheets.
-  const bench = new Map(molecules.map((m) => [m.id, perMolecule("bench", m, () => moleculeBenchData(m))]));
-  const physicsMs = lap();
+  const entriesMs = lap();
   const build = options.build ?? buildIdentity(repoDir);
   const startBenchSheets = options.sheets === false ? null : await findSheetWriter();
 
   const outDir = resolve(options.outDir);
   mkdirSync(dirname(outDir), { recursive: true });
   const work = mkdtempSync(join(dirname(outDir), ".site-build-"));
-  // The sheets start first, on a worker thread, beside the plots and pages on this thread; this
-  // thread joins in once the pages are written (the entries are shared, never recomputed).
+  // The sheets start on a worker thread as soon as the calibration marks are known, beside the
+  // indexes and pages on this thread; this thread joins in once the pages are written (the
+  // entries are shared, never recomputed).
   let sheetRun: ReturnType<StartBenchSheets> | null = null;
+  let benchRun: BenchDataRun | null = null;
   try {
-    sheetRun = startBenchSheets ? startBenchSheets({ molecules, entries, outDir: work, build, calibration: [...bench.values()].map((b) => b.marks) }) : null;
+    // Calibration marks and the bench page's cell model: once per molecule, shared by pages and
+    // sheets; computed on a worker beside the plots, this thread joining in after them.
+    const benchMissing = molecules.filter((m) => !cache?.has("bench", m));
+    benchRun = startBenchData(benchMissing);
     const plots = new Map<AtlasEntry, EntryPlots>();
     for (const molecule of molecules) {
       const moleculeEntries = entriesOf.get(molecule.id)!;
@@ -137,6 +140,11 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     }
     log(`plots: ${plots.size * 2} SVGs`);
     const plotsMs = lap();
+    const computedBench = await benchRun.finish();
+    const benchById = new Map(benchMissing.map((m, i) => [m.id, computedBench[i]]));
+    const bench = new Map(molecules.map((m) => [m.id, perMolecule("bench", m, () => benchById.get(m.id)!)]));
+    const physicsMs = entriesMs + lap();
+    sheetRun = startBenchSheets ? startBenchSheets({ molecules, entries, outDir: work, build, calibration: [...bench.values()].map((b) => b.marks) }) : null;
 
     const nameIndexPath = "assets/search/names.json";
     writeFile(work, nameIndexPath, nameIndexJson(molecules));
@@ -203,7 +211,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     const timings = { loadingMs, physicsMs, plotsMs, filesMs, pagesMs, sheetsMs, finishMs, totalMs: performance.now() - started };
     return { outDir, molecules: molecules.length, pages: links.pages, entries: entries.length, sheets: sheets.length, lineIndex: lineIndexReport, build, timings };
   } catch (error) {
-    await sheetRun?.cancel();
+    await Promise.all([sheetRun?.cancel(), benchRun?.cancel()]);
     rmSync(work, { recursive: true, force: true });
     throw error;
   }
