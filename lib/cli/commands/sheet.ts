@@ -1,5 +1,5 @@
 import { fileURLToPath } from "node:url";
-import { atlasEntry, defaultTemperatureK, selectSpecies } from "../../atlas/index.ts";
+import { atlasEntry, calibrationMarks, defaultCellConditions, defaultTemperatureK, selectSpecies } from "../../atlas/index.ts";
 import { buildIdentity } from "../../build/buildIdentity.ts";
 import { parsePaper, renderBenchSheet, SheetInputError, sheetFileName, writeFileAtomic } from "../../sheet/index.ts";
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
@@ -40,7 +40,9 @@ export async function runSheet(args: string[]): Promise<string> {
     const species = selectSpecies(molecule, values.species as string | undefined);
     const entry = atlasEntry(molecule, species, temperatureK);
     const path = out ?? `${molecule.id}-${sheetFileName(species.model.label, temperatureK, paper)}`;
-    const bytes = await renderBenchSheet({ molecule, entry, paper, build: buildIdentity(repoDir) });
+    // Calibration-grade lines are computed for the default cell only, as the build's sheets do.
+    const calibration = temperatureK === defaultCellConditions.temperatureK ? calibrationMarks(molecule) : undefined;
+    const bytes = await renderBenchSheet({ molecule, entry, paper, build: buildIdentity(repoDir), ...(calibration ? { calibration } : {}) });
     writeFileAtomic(path, bytes);
     return `wrote ${path} (${molecule.name}, ${species.model.label}, ${temperatureK} K, ${paper}, ${Math.round(bytes.length / 1024)} kB)\n`;
   } catch (error) {
