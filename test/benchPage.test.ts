@@ -5,7 +5,7 @@
 import { mkdtempSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { chromium, type Browser, type Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { calibrationMarks, cellLineSet, cellLinesOfModel, cellModel, defaultCellConditions } from "../lib/atlas/index.ts";
 import { buildSite } from "../lib/build/index.ts";
@@ -13,6 +13,7 @@ import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { runCli } from "../lib/cli/main.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
 import { peakShiftDigits } from "../lib/format/index.ts";
+import { launchChromium } from "./helpers/chromium.ts";
 import { serveFolder } from "./helpers/staticServer.ts";
 
 async function cli(...args: string[]): Promise<string> {
@@ -50,10 +51,7 @@ beforeAll(async () => {
   site = join(work, "site");
   await buildSite({ moleculesDir: shippedMoleculesDir, outDir: site, sheets: false });
   server = await serveFolder(site);
-  browser = await chromium.launch({
-    executablePath: "/usr/bin/chromium",
-    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--no-first-run", "--disable-sync"],
-  });
+  browser = await launchChromium();
   page = await browser.newPage();
   // Script errors and Content-Security-Policy violations show up as console errors.
   page.on("console", (m) => m.type() === "error" && problems.push(m.text()));

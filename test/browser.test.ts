@@ -1,16 +1,16 @@
 // The built site in a real Chromium: search by formula, CAS number and wavenumber, the plot, the
 // CSV download. Chromium must be installed (scripts/ensure-test-tools.sh); without it this test
 // fails, it does not skip.
-import { createReadStream, existsSync, mkdtempSync, readFileSync, rmSync, statSync } from "node:fs";
-import { createServer, type Server } from "node:http";
-import type { AddressInfo } from "node:net";
+import { mkdtempSync, readFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
-import { extname, join, normalize, sep } from "node:path";
-import { chromium, type Browser, type Page } from "playwright-core";
+import { join } from "node:path";
+import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { buildSite } from "../lib/build/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { runCli } from "../lib/cli/main.ts";
+import { launchChromium } from "./helpers/chromium.ts";
+import { serveFolder } from "./helpers/staticServer.ts";
 
 // The command line's own entry (what bin/bandatlas.js runs), in-process to keep the test fast.
 async function cli(...args: string[]): Promise<string> {
@@ -18,11 +18,10 @@ async function cli(...args: string[]): Promise<string> {
   if (exitCode !== 0) throw new Error(`bandatlas ${args.join(" ")}: ${stderr}`);
   return stdout;
 }
-const types: Record<string, string> = { ".html": "text/html; charset=utf-8", ".css": "text/css", ".js": "text/javascript", ".json": "application/json", ".csv": "text/csv; charset=utf-8", ".pdf": "application/pdf" };
 
 let work: string;
 let site: string;
-let server: Server;
+let server: { base: string; close: () => Promise<void> };
 let base: string;
 let browser: Browser;
 let page: Page;
@@ -32,21 +31,9 @@ beforeAll(async () => {
   work = mkdtempSync(join(tmpdir(), "bandatlas-browser-"));
   site = join(work, "site");
   await buildSite({ moleculesDir: shippedMoleculesDir, outDir: site, sheets: false });
-  server = createServer((req, res) => {
-    const path = normalize(decodeURIComponent(new URL(req.url!, "http://x").pathname)).replace(/^[/\\]+/, "");
-    let file = join(site, path);
-    if (!file.startsWith(site + sep) && file !== site) return void res.writeHead(403).end();
-    if (existsSync(file) && statSync(file).isDirectory()) file = join(file, "index.html");
-    if (!existsSync(file)) return void res.writeHead(404).end("not found");
-    res.writeHead(200, { "content-type": types[extname(file)] ?? "application/octet-stream" });
-    createReadStream(file).pipe(res);
-  });
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  base = `http://127.0.0.1:${(server.address() as AddressInfo).port}/`;
-  browser = await chromium.launch({
-    executablePath: "/usr/bin/chromium",
-    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--no-first-run", "--disable-sync"],
-  });
+  server = await serveFolder(site);
+  base = server.base;
+  browser = await launchChromium();
   page = await (await browser.newContext({ acceptDownloads: true })).newPage();
   // Script errors and Content-Security-Policy violations show up as console errors.
   page.on("console", (m) => m.type() === "error" && problems.push(m.text()));
@@ -56,7 +43,7 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await browser?.close();
-  await new Promise((resolve) => server?.close(resolve));
+  await server?.close();
   if (work) rmSync(work, { recursive: true, force: true });
 });
 

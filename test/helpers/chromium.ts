@@ -1,0 +1,9 @@
+import { chromium, type Browser } from "playwright-core";
+
+/** Debian's Chromium, headless, with the flags this machine needs; fails (never skips) when it is missing. */
+export function launchChromium(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: "/usr/bin/chromium",
+    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--no-first-run", "--disable-sync"],
+  });
+}
