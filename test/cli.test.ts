@@ -1,4 +1,6 @@
 import { execFileSync, spawnSync } from "node:child_process";
+import { mkdtempSync } from "node:fs";
+import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { runCli } from "../lib/cli/main.ts";
@@ -65,6 +67,19 @@ describe("bandatlas lines", () => {
       expect(stderr).not.toMatch(/\n\s+at /);
     });
   }
+});
+
+describe("known limitations of a molecule file", () => {
+  it("are printed above the table and on the bench sheet", async () => {
+    const { stdout } = await cli("lines", "hf");
+    expect(stdout).toMatch(/KNOWN LIMITATION: .*Do not calibrate against these HF and DF lines/);
+    const dir = mkdtempSync(join(tmpdir(), "bandatlas-limit-"));
+    const out = join(dir, "hf.pdf");
+    expect((await cli("sheet", "hf", "--out", out)).exitCode).toBe(0);
+    const text = execFileSync("pdftotext", [out, "-"], { encoding: "utf8" }).replace(/\s+/g, " ");
+    expect(text).toContain("Known limitation of these constants");
+    expect(text).toContain("Do not calibrate against these HF and DF lines");
+  });
 });
 
 describe("bandatlas find", () => {

@@ -20,6 +20,8 @@ export interface LinesTableContext {
   moleculeName: string;
   formula: string;
   constantsNote: string;
+  /** Known limitations of the constants (from the molecule file), printed above the table. */
+  limitations?: string[];
 }
 
 /** The human-readable table of `bandatlas lines`: units in every heading. */
@@ -33,6 +35,7 @@ export function linesTable(result: BandLines, context: LinesTableContext): strin
     `band origin ${result.bandOrigin.toFixed(4)} cm⁻¹; partition function Q = ${significant(result.partitionFunction, 6)}; ${result.lines.length} lines, J'' up to ${result.jLowerMax}`,
     `constants: ${context.constantsNote}`,
     intensity,
+    ...(context.limitations ?? []).map((l) => `KNOWN LIMITATION: ${l}`),
     "",
   ];
   const rows = result.lines.map((l) => {

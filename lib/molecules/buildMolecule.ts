@@ -58,6 +58,8 @@ export interface Molecule {
   formula: string;
   casNumber: string;
   aliases: string[];
+  /** Known shortcomings of the cited constants, shown beside every prediction of this molecule. */
+  limitations: string[];
   electronicState: string;
   atoms: string[];
   hazard: { ghsPictograms: string[]; sentences: string[] };
@@ -70,11 +72,11 @@ export interface Molecule {
   broadening?: GasBroadening | null;
 }
 
-type IdentityFields = "id" | "file" | "name" | "formula" | "casNumber" | "aliases" | "electronicState" | "atoms" | "hazard" | "sources";
+type IdentityFields = "id" | "file" | "name" | "formula" | "casNumber" | "aliases" | "limitations" | "electronicState" | "atoms" | "hazard" | "sources";
 
 /** The fields every form of molecule file shares: identity, hazard note and sources. */
 export function moleculeIdentity(
-  file: Pick<MoleculeFile, "id" | "name" | "formula" | "casNumber" | "aliases" | "electronicState" | "atoms" | "hazard" | "sources">,
+  file: Pick<MoleculeFile, "id" | "name" | "formula" | "casNumber" | "aliases" | "limitations" | "electronicState" | "atoms" | "hazard" | "sources">,
   fileName: string,
 ): Pick<Molecule, IdentityFields> {
   return {
@@ -84,6 +86,7 @@ export function moleculeIdentity(
     formula: file.formula,
     casNumber: file.casNumber,
     aliases: file.aliases,
+    limitations: file.limitations,
     electronicState: file.electronicState,
     atoms: file.atoms,
     hazard: file.hazard,

@@ -71,6 +71,7 @@ export const linearMoleculeFileSchema = mapping(
     formula: common.formula,
     casNumber: common.casNumber,
     aliases: common.aliases,
+    limitations: common.limitations,
     electronicState: common.electronicState,
     atoms: common.atoms,
     hazard: common.hazard,

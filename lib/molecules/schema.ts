@@ -150,6 +150,7 @@ export const moleculeFileSchema = mapping(
     formula: text("the formula"),
     casNumber: text("the CAS registry number"),
     aliases: listOf(text("an alias"), "other names").default([]),
+    limitations: listOf(text("a known limitation of these constants"), "known limitations").default([]),
     electronicState: text("the electronic state, e.g. \"X 1Σ+\""),
     atoms: listOf(text("an element symbol"), "element symbols"),
     hazard: mapping(

@@ -63,7 +63,7 @@ function lay(doc: PDFKit.PDFDocument, content: SheetContent, paper: PaperName): 
   y = drawCautionBox(doc, content, x, y, width);
   drawStickPlot(doc, { x, y, width, height: plotHeightPt }, content);
   y += plotHeightPt + 4;
-  for (const note of [content.otherBandsNote, content.calibrationNote]) {
+  for (const note of [content.limitationsNote, content.otherBandsNote, content.calibrationNote]) {
     if (!note) continue;
     doc.font(sheetFonts.regular).fontSize(8).fillColor(ink);
     const h = doc.heightOfString(note, { width });

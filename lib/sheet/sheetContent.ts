@@ -55,6 +55,8 @@ export interface SheetContent {
   rows: SheetTableRow[];
   otherBandsNote: string | null;
   calibrationNote: string | null;
+  /** The molecule file's known limitations of its constants, or null. */
+  limitationsNote: string | null;
   sources: SheetSource[];
   modelText: string;
   accuracyText: string;
@@ -201,6 +203,7 @@ export function sheetContent(input: SheetContentInput): SheetContent {
     rows: tableRows(bandLines.lines),
     otherBandsNote: otherBandsNoteOf(entry),
     calibrationNote: calibration,
+    limitationsNote: molecule.limitations.length ? `Known limitation of these constants: ${molecule.limitations.map(displayText).join(" ")}` : null,
     sources: sourcesOf(molecule, entry, speciesIndex, bandLines.band),
     modelText: `${termModel(model)}; Boltzmann populations with (2J + 1) degeneracy and Q summed over the computed levels; Hönl–London factors; ${constants}; ${intensity}.`,
     accuracyText: accuracyOf(entry, bandLines.lines),

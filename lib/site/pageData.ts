@@ -20,12 +20,15 @@ export interface EntryPlots {
 export interface HazardView {
   pictograms: Array<{ code: string; name: string }>;
   sentences: string[];
+  /** Known limitations of the constants, shown with the caution on every page of the molecule. */
+  limitations: string[];
 }
 
 function hazardView(molecule: Molecule): HazardView {
   return {
     pictograms: molecule.hazard.ghsPictograms.map((code) => ({ code, name: ghsPictogramNames[code] ?? "pictogram" })),
     sentences: molecule.hazard.sentences,
+    limitations: molecule.limitations,
   };
 }
 

@@ -47,5 +47,5 @@ export function runLines(args: string[]): string {
   const result = bandOf(species, band, temperatureK, minRelative);
   if (format === "json") return JSON.stringify(linesDocument(molecule.id, result), null, 2) + "\n";
   if (format === "csv") return linesCsv(result);
-  return linesTable(result, { moleculeName: molecule.name, formula: molecule.formula, constantsNote: describeConstants(molecule, species) });
+  return linesTable(result, { moleculeName: molecule.name, formula: molecule.formula, constantsNote: describeConstants(molecule, species), limitations: molecule.limitations });
 }
