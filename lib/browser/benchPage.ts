@@ -214,6 +214,7 @@ async function start() {
     if (!response.ok) throw new Error(`could not load the line data (${response.status})`);
     const model = (await response.json()) as CellModel;
     (document.getElementById("bench-form") as HTMLFormElement).hidden = false;
+    document.getElementById("bench-waiting")?.remove();
     setup(page, model);
   } catch (error) {
     page.dataset.state = "error";
