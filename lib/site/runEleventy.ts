@@ -1,5 +1,5 @@
-import { mkdirSync, writeFileSync } from "node:fs";
-import { dirname, resolve, sep } from "node:path";
+import { mkdirSync, readdirSync, writeFileSync } from "node:fs";
+import { dirname, join, resolve, sep } from "node:path";
 import { fileURLToPath } from "node:url";
 import Eleventy from "@11ty/eleventy";
 import eleventyConfig from "../../eleventy.config.ts";
@@ -7,12 +7,34 @@ import type { SiteData } from "./pageData.ts";
 
 export const contentDir = fileURLToPath(new URL("../../content", import.meta.url));
 
+/** The template that makes one page per atlas entry (paginated over `atlas.speciesPages`). */
+const speciesTemplate = "species.njk";
+
+/**
+ * Species pages rendered per Eleventy run. Eleventy keeps every page it rendered in memory until
+ * its run ends (toJSON returns them all), and species pages are large (tables and two inline
+ * SVGs), so a large atlas is rendered in batches: the peak memory then stays near one batch's.
+ */
+export const speciesPagesPerRun = 250;
+
 /** Renders content/ with templates/ into outDir, the atlas's data as the global `atlas`. */
-export async function runEleventy(outDir: string, data: SiteData): Promise<number> {
+export async function runEleventy(outDir: string, data: SiteData, options: { speciesPagesPerRun?: number } = {}): Promise<number> {
+  const perRun = Math.max(1, options.speciesPagesPerRun ?? speciesPagesPerRun);
+  const all = data.speciesPages;
+  // The first run renders every page, with the first batch of species pages; later runs render
+  // the species template alone with the next batches.
+  const others = readdirSync(contentDir).filter((f) => /\.(njk|md)$/.test(f) && f !== speciesTemplate);
+  let pages = await runOnce(outDir, { ...data, speciesPages: all.slice(0, perRun) }, []);
+  for (let start = perRun; start < all.length; start += perRun) pages += await runOnce(outDir, { ...data, speciesPages: all.slice(start, start + perRun) }, others);
+  return pages;
+}
+
+async function runOnce(outDir: string, data: SiteData, ignored: string[]): Promise<number> {
   const eleventy = new Eleventy(contentDir, outDir, {
     quietMode: true,
     config(config: any) {
       eleventyConfig(config);
+      for (const file of ignored) config.ignores.add(join(contentDir, file));
       config.addGlobalData("atlas", data);
     },
   });
