@@ -299,7 +299,13 @@ export function siteData(input: SiteDataInput) {
   return {
     build: { ...input.build, text: describeBuild(input.build) },
     molecules: input.molecules.map((m) => moleculeView(m, input.bench?.has(m.id) ?? false)),
-    speciesPages: input.entries.map((e) => speciesPageView(byId.get(e.moleculeId)!, e, input.plots.get(e)!, input.sheetsAvailable, input.entries, input.bench?.get(e.moleculeId))),
+    // Species pages are the bulk of the site: their views are made per batch of pages as
+    // runEleventy renders them (it sets `speciesPages`), so a large atlas never holds all at once.
+    speciesPageViews: {
+      count: input.entries.length,
+      views: (from: number, to: number) =>
+        input.entries.slice(from, to).map((e) => speciesPageView(byId.get(e.moleculeId)!, e, input.plots.get(e)!, input.sheetsAvailable, input.entries, input.bench?.get(e.moleculeId))),
+    },
     benchPages: input.molecules.filter((m) => input.bench?.has(m.id)).map((m) => benchPageView(m, input.bench!.get(m.id)!)),
     accuracy: accuracyRows(input.molecules, input.entries),
     nearInfrared: { rows: nearInfraredRows(input.molecules, input.entries), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },

@@ -3,11 +3,13 @@ import { dirname, join, resolve, sep } from "node:path";
 import { fileURLToPath } from "node:url";
 import Eleventy from "@11ty/eleventy";
 import eleventyConfig from "../../eleventy.config.ts";
-import type { SiteData } from "./pageData.ts";
+import type { SiteData, SpeciesPageView } from "./pageData.ts";
 
 export const contentDir = fileURLToPath(new URL("../../content", import.meta.url));
 
 /** The template that makes one page per atlas entry (paginated over `atlas.speciesPages`). */
+type PageData = Omit<SiteData, "speciesPageViews"> & { speciesPages: SpeciesPageView[] };
+
 const speciesTemplate = "species.njk";
 
 /**
@@ -20,16 +22,16 @@ export const speciesPagesPerRun = 250;
 /** Renders content/ with templates/ into outDir, the atlas's data as the global `atlas`. */
 export async function runEleventy(outDir: string, data: SiteData, options: { speciesPagesPerRun?: number } = {}): Promise<number> {
   const perRun = Math.max(1, options.speciesPagesPerRun ?? speciesPagesPerRun);
-  const all = data.speciesPages;
+  const { speciesPageViews, ...rest } = data;
   // The first run renders every page, with the first batch of species pages; later runs render
   // the species template alone with the next batches.
   const others = readdirSync(contentDir).filter((f) => /\.(njk|md)$/.test(f) && f !== speciesTemplate);
-  let pages = await runOnce(outDir, { ...data, speciesPages: all.slice(0, perRun) }, []);
-  for (let start = perRun; start < all.length; start += perRun) pages += await runOnce(outDir, { ...data, speciesPages: all.slice(start, start + perRun) }, others);
+  let pages = await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(0, perRun) }, []);
+  for (let start = perRun; start < speciesPageViews.count; start += perRun) pages += await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(start, start + perRun) }, others);
   return pages;
 }
 
-async function runOnce(outDir: string, data: SiteData, ignored: string[]): Promise<number> {
+async function runOnce(outDir: string, data: PageData, ignored: string[]): Promise<number> {
   const eleventy = new Eleventy(contentDir, outDir, {
     quietMode: true,
     config(config: any) {
