@@ -1,4 +1,5 @@
 import { availableParallelism } from "node:os";
+import { serialize } from "node:v8";
 import { join } from "node:path";
 import { Worker } from "node:worker_threads";
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
@@ -41,11 +42,48 @@ export interface BenchSheetRun {
   cancel(): Promise<void>;
 }
 
+/** What the workers get of the jobs: see sharedJobs. */
+export interface SharedSheetJobs {
+  /** Each distinct request without its paper (molecule, entry, build, calibration), serialized (node:v8) one after another. */
+  requests: SharedArrayBuffer;
+  /** Byte offsets of request k: offsets[k] to offsets[k + 1]. */
+  offsets: number[];
+  jobs: Array<{ request: number; paper: PaperName; path: string }>;
+}
+
+/**
+ * The jobs as the workers read them: each entry's request serialized once into one shared buffer
+ * (an entry's A4 and Letter sheets share it), read back by a worker only when it claims a job.
+ * Posting the jobs themselves would give every worker a full copy of every atlas entry at once:
+ * on a 500-molecule atlas, hundreds of MB.
+ */
+function sharedJobs(jobs: BenchSheetJob[]): SharedSheetJobs {
+  const index = new Map<AtlasEntry, number>();
+  const parts: Buffer[] = [];
+  const out: SharedSheetJobs["jobs"] = [];
+  for (const job of jobs) {
+    const { paper, ...rest } = job.request;
+    let k = index.get(rest.entry);
+    if (k === undefined) {
+      k = parts.length;
+      parts.push(serialize(rest));
+      index.set(rest.entry, k);
+    }
+    out.push({ request: k, paper, path: job.path });
+  }
+  const offsets = [0];
+  for (const part of parts) offsets.push(offsets[offsets.length - 1] + part.length);
+  const requests = new SharedArrayBuffer(offsets[offsets.length - 1]);
+  const bytes = new Uint8Array(requests);
+  parts.forEach((part, k) => bytes.set(part, offsets[k]));
+  return { requests, offsets, jobs: out };
+}
+
 /**
  * Starts `extraThreads` worker threads on the jobs at once; every thread claims the next job
  * number from one shared counter (Atomics), so a worker never waits for this thread to hand out
  * work while this thread is busy elsewhere (the site's plots and pages). `finish` makes this
- * thread claim jobs too. Each worker gets the jobs once, up front.
+ * thread claim jobs too. The workers share the jobs in one serialized buffer (sharedJobs).
  */
 function startOnThreads(jobs: BenchSheetJob[], extraThreads: number): BenchSheetRun {
   const workers: Worker[] = [];
@@ -71,6 +109,7 @@ function startOnThreads(jobs: BenchSheetJob[], extraThreads: number): BenchSheet
     else resolveAll();
   };
   const fail = (m: { message?: string; name?: string }) => settle(m.name === "SheetInputError" ? new SheetInputError(m.message!) : new Error(m.message));
+  const shared = extraThreads > 0 ? sharedJobs(jobs) : null;
   for (let i = 0; i < extraThreads; i++) {
     const worker = new Worker(new URL("./sheetWorkerEntry.mjs", import.meta.url));
     workers.push(worker);
@@ -83,7 +122,7 @@ function startOnThreads(jobs: BenchSheetJob[], extraThreads: number): BenchSheet
     worker.on("exit", (code) => {
       if (code !== 0 && !settled) settle(new Error(`a sheet worker stopped with exit code ${code}`));
     });
-    worker.postMessage({ jobs, claim: next.buffer });
+    worker.postMessage({ ...shared!, claim: next.buffer });
   }
   if (jobs.length === 0) settle();
   return {
