@@ -1,4 +1,4 @@
-import { asymptoticRegionStart, voigtFunction } from "./faddeeva.ts";
+import { voigtFunction } from "./faddeeva.ts";
 import type { AbsorbingLine } from "./absorbingLines.ts";
 import type { SpectralGrid } from "./spectralGrid.ts";
 import { voigtHwhm } from "./voigtProfile.ts";
@@ -56,23 +56,9 @@ export function opticalDepth(lines: readonly AbsorbingLine[], grid: SpectralGrid
     const amplitude = (strength * sqrtLn2OverPi) / gD;
     const x0 = (startCm - nu0) * scale;
     const dx = stepCm * scale;
-    const yy = y * y;
     for (let i = i0; i <= i1; i++) {
       const x = x0 + i * dx;
-      if ((x < 0 ? -x : x) + y < asymptoticRegionStart) {
-        tau[i] += amplitude * voigtFunction(x, y);
-        continue;
-      }
-      // Humlíček's two-point rational form, inlined (see faddeeva.ts): this branch is the hot loop.
-      const ur = yy - x * x;
-      const ui = -2 * x * y;
-      const ar = 1.410474 + 0.5641896 * ur;
-      const ai = 0.5641896 * ui;
-      const numR = y * ar + x * ai;
-      const numI = y * ai - x * ar;
-      const denR = 0.75 + 3 * ur + ur * ur - ui * ui;
-      const denI = 3 * ui + 2 * ur * ui;
-      tau[i] += (amplitude * (numR * denR + numI * denI)) / (denR * denR + denI * denI);
+      tau[i] += amplitude * voigtFunction(x, y);
     }
   }
   return tau;
