@@ -13,7 +13,7 @@ import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { runCli } from "../lib/cli/main.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
 import { peakShiftDigits } from "../lib/format/index.ts";
-import { launchChromium } from "./helpers/chromium.ts";
+import { launchChromium, recordPageProblems } from "./helpers/chromium.ts";
 import { serveFolder } from "./helpers/staticServer.ts";
 
 async function cli(...args: string[]): Promise<string> {
@@ -53,10 +53,7 @@ beforeAll(async () => {
   server = await serveFolder(site);
   browser = await launchChromium();
   page = await browser.newPage();
-  // Script errors and Content-Security-Policy violations show up as console errors.
-  page.on("console", (m) => m.type() === "error" && problems.push(m.text()));
-  page.on("pageerror", (e) => problems.push(e.message));
-  page.on("response", (r) => r.status() >= 400 && problems.push(`${r.status()} ${r.url()}`));
+  recordPageProblems(page, problems);
 }, 120_000);
 
 afterAll(async () => {

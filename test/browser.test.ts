@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { buildSite } from "../lib/build/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { runCli } from "../lib/cli/main.ts";
-import { launchChromium } from "./helpers/chromium.ts";
+import { launchChromium, recordPageProblems } from "./helpers/chromium.ts";
 import { serveFolder } from "./helpers/staticServer.ts";
 
 // The command line's own entry (what bin/bandatlas.js runs), in-process to keep the test fast.
@@ -35,10 +35,7 @@ beforeAll(async () => {
   base = server.base;
   browser = await launchChromium();
   page = await (await browser.newContext({ acceptDownloads: true })).newPage();
-  // Script errors and Content-Security-Policy violations show up as console errors.
-  page.on("console", (m) => m.type() === "error" && problems.push(m.text()));
-  page.on("pageerror", (e) => problems.push(e.message));
-  page.on("response", (r) => r.status() >= 400 && problems.push(`${r.status()} ${r.url()}`));
+  recordPageProblems(page, problems);
 });
 
 afterAll(async () => {
