@@ -172,10 +172,10 @@ export function moleculeCalibrationLines(
   molecule: Molecule,
   settings: Omit<CellSpectrumSettings, "fromCm" | "toCm"> & { fromCm?: number; toCm?: number },
   criteria: CalibrationCriteria = defaultCalibrationCriteria,
+  set: CellLineSet = cellLineSet(molecule, settings.conditions),
 ): MoleculeCalibrationLines {
   if (settings.instrument.kind === "monochromatic") throw new Error("calibration lines need an instrument resolution");
   const resolutionCm = settings.instrument.resolutionCm;
-  const set = cellLineSet(molecule, settings.conditions);
   const range = calibrationRange(set, resolutionCm, criteria);
   const full = { ...settings, fromCm: settings.fromCm ?? range.fromCm, toCm: settings.toCm ?? range.toCm };
   const { spectrum } = moleculeCellSpectrum(molecule, full, set);
@@ -200,8 +200,11 @@ export interface CalibrationMarks {
 export function calibrationMarks(molecule: Molecule, conditions: CellConditions = defaultCellConditions): CalibrationMarks {
   const byResolution: CalibrationMarks["byResolution"] = [];
   let last: MoleculeCalibrationLines | null = null;
+  // The cell's lines depend on the conditions only: made once for all resolutions.
+  const set = cellLineSet(molecule, conditions);
   for (const resolutionCm of calibrationResolutionsCm) {
-    last = moleculeCalibrationLines(molecule, { conditions, instrument: { kind: "fourier-transform", resolutionCm, apodization: calibrationApodization } });
+    const settings = { conditions, instrument: { kind: "fourier-transform" as const, resolutionCm, apodization: calibrationApodization } };
+    last = moleculeCalibrationLines(molecule, settings, defaultCalibrationCriteria, set);
     byResolution.push({
       resolutionCm,
       lines: last.lines.map((l) => ({ species: l.species, band: l.band, label: l.label, wavenumber: l.wavenumber, relativeToStrongest: l.relativeToStrongest, peakShiftCm: l.peakShiftCm })),
