@@ -37,3 +37,5 @@ export * from "./instrumentLineShape.ts";
 export * from "./convolution.ts";
 export * from "./cellTransmittance.ts";
 export * from "./calibrationLines.ts";
+export * from "./weightedLeastSquares.ts";
+export * from "./dunhamFit.ts";
