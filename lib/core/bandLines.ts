@@ -1,11 +1,13 @@
 import { bandLabel } from "./band.ts";
-import { bandLinesFromModel, type BandModel, type PositionUncertaintyTerm } from "./bandModel.ts";
+import { bandAccuracy } from "./bandAccuracy.ts";
+import { bandLinesFromModel, type BandModel, type PositionUncertainty } from "./bandModel.ts";
+import { componentsFromUncertainties } from "./positionErrors.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { linearBandModel } from "./linearBandModel.ts";
 import { partitionFunction as computePartitionFunction } from "./partitionFunction.ts";
 import { highestRisingV, levelExpansion, termFromExpansion } from "./termValues.ts";
 import { bandIntensityDataFor } from "./transitionDipole.ts";
-import type { Band, BandLines, DunhamCoefficient, SpeciesModel, TemperatureK } from "./types.ts";
+import type { Band, BandLines, SpeciesModel, TemperatureK } from "./types.ts";
 
 export interface BandLineOptions {
   temperatureK: TemperatureK;
@@ -16,19 +18,18 @@ export interface BandLineOptions {
 }
 
 /**
- * Position uncertainty of ν = E(v',J') − E(v'',J'') from the constants' standard uncertainties,
- * σ²(ν) = Σ_kl [(v'+½)^k x'^l − (v''+½)^k x''^l]² σ²(Y_kl) (first-order propagation; the sources
- * give no correlations, so none are assumed).
+ * Position uncertainty of ν = E(v',J') − E(v'',J'') from the species' error components (a fit's
+ * covariance, cited uncertainties, omitted terms, isotope scaling): one term per Dunham
+ * coefficient named by any component, weighted (v+½)^k in each level; one row per component.
  */
-function dunhamUncertaintyTerms(dunham: DunhamCoefficient[], band: Band): PositionUncertaintyTerm[] {
-  return dunham
-    .filter((c) => c.uncertaintyCm > 0)
-    .map((c) => ({
-      l: c.l,
-      upperWeight: Math.pow(band.vUpper + 0.5, c.k),
-      lowerWeight: Math.pow(band.vLower + 0.5, c.k),
-      variance: c.uncertaintyCm * c.uncertaintyCm,
-    }));
+export function dunhamPositionUncertainty(species: SpeciesModel, band: Band): PositionUncertainty {
+  const components = species.positionErrors ?? componentsFromUncertainties(species.dunham);
+  const keys: Array<{ k: number; l: number }> = [];
+  for (const c of components) for (const d of c.deltas) if (!keys.some((key) => key.k === d.k && key.l === d.l)) keys.push({ k: d.k, l: d.l });
+  return {
+    terms: keys.map(({ k, l }) => ({ l, upperWeight: Math.pow(band.vUpper + 0.5, k), lowerWeight: Math.pow(band.vLower + 0.5, k) })),
+    rows: components.map((c) => keys.map(({ k, l }) => c.deltas.filter((d) => d.k === k && d.l === l).reduce((s, d) => s + d.valueCm, 0))),
+  };
 }
 
 /** The band model of a ¹Σ⁺ diatomic's band v'←v'': both levels expanded from the Dunham table. */
@@ -45,7 +46,8 @@ export function diatomicBandModel(species: SpeciesModel, band: Band, options: Ba
     lower: levelExpansion(species.dunham, band.vLower),
     upper: levelExpansion(species.dunham, band.vUpper),
     zeroEnergy: termFromExpansion(levelExpansion(species.dunham, 0), 0),
-    uncertaintyTerms: dunhamUncertaintyTerms(species.dunham, band),
+    uncertainty: dunhamPositionUncertainty(species, band),
+    accuracy: bandAccuracy(species, band),
     partitionFunction: options.partitionFunction ?? computePartitionFunction(species.dunham, options.temperatureK),
     // Nuclear-spin degeneracy of a heteronuclear diatomic is the same for every level and cancels.
     lowerWeight: () => 1,

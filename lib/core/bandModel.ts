@@ -7,19 +7,20 @@ import { absoluteLineIntensity, intensityShapeFromBoltzmann } from "./lineIntens
 import { jLimit } from "./partitionFunction.ts";
 import { secondRadiationConstantCmK, speedOfLightMs } from "./physicalConstants.ts";
 import { termFromExpansion } from "./termValues.ts";
-import type { Band, BandIntensityData, BandLines, Branch, Line, TemperatureK } from "./types.ts";
+import type { Band, BandAccuracy, BandIntensityData, BandLines, Branch, Line, TemperatureK } from "./types.ts";
 
 export const defaultMinRelativeIntensity = 1e-4;
 
 /**
- * One term of the position variance σ²(ν) = Σ [u·x'^l − w·x''^l]² σ²: a constant of standard
- * uncertainty σ that enters the upper level's c_l with weight u and the lower level's with w.
+ * Position uncertainty of every line of a band. Each term is a coefficient of the level
+ * expansions, entering the upper level's c_l with weight u and the lower level's with w, so that a
+ * line moves by g = u·x'^l − w·x''^l per unit of it. Each row is one independent error component
+ * (a vector over the terms); σ²(ν) = Σ_rows (Σ_i row_i·g_i)². Uncorrelated constants give one row
+ * per constant, correlated ones (a fit's covariance) the rows of its eigen-decomposition.
  */
-export interface PositionUncertaintyTerm {
-  l: number;
-  upperWeight: number;
-  lowerWeight: number;
-  variance: number;
+export interface PositionUncertainty {
+  terms: Array<{ l: number; upperWeight: number; lowerWeight: number }>;
+  rows: number[][];
 }
 
 /**
@@ -36,7 +37,8 @@ export interface BandModel {
   upper: Float64Array;
   /** Energy of the lowest level of the molecule, the zero of `lowerStateEnergy`, cm⁻¹. */
   zeroEnergy: number;
-  uncertaintyTerms: PositionUncertaintyTerm[];
+  uncertainty: PositionUncertainty;
+  accuracy: BandAccuracy;
   partitionFunction: number;
   /** Statistical weight of lower level J'' (0: the level does not exist and has no lines). */
   lowerWeight: (jLower: number) => number;
@@ -50,25 +52,28 @@ export interface ModelLineOptions {
   minRelative?: number;
 }
 
-function uncertaintyFunction(terms: readonly PositionUncertaintyTerm[]) {
-  const used = terms.filter((t) => t.variance > 0);
-  const count = used.length;
-  const ls = used.map((t) => t.l);
-  const upperWeights = used.map((t) => t.upperWeight);
-  const lowerWeights = used.map((t) => t.lowerWeight);
-  const variances = used.map((t) => t.variance);
+function uncertaintyFunction({ terms, rows }: PositionUncertainty) {
+  const count = terms.length;
+  const ls = terms.map((t) => t.l);
+  const upperWeights = terms.map((t) => t.upperWeight);
+  const lowerWeights = terms.map((t) => t.lowerWeight);
+  const g = new Float64Array(count);
   return (xUpper: number, xLower: number): number => {
-    let variance = 0;
     for (let i = 0; i < count; i++) {
-      // x^l by repeated multiplication: l is a small whole number (0–4) and this is the hot path.
+      // x^l by repeated multiplication: l is a small whole number (0–6) and this is the hot path.
       let powUpper = 1;
       let powLower = 1;
       for (let k = ls[i]; k > 0; k--) {
         powUpper *= xUpper;
         powLower *= xLower;
       }
-      const d = upperWeights[i] * powUpper - lowerWeights[i] * powLower;
-      variance += d * d * variances[i];
+      g[i] = upperWeights[i] * powUpper - lowerWeights[i] * powLower;
+    }
+    let variance = 0;
+    for (const row of rows) {
+      let shift = 0;
+      for (let i = 0; i < count; i++) shift += row[i] * g[i];
+      variance += shift * shift;
     }
     return Math.sqrt(variance);
   };
@@ -104,7 +109,16 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
   const c2OverT = secondRadiationConstantCmK / temperatureK;
   const { lower, upper } = model;
   const hw = model.intensity?.hermanWallis ?? null;
-  const uncertaintyOf = uncertaintyFunction(model.uncertaintyTerms);
+  const propagated = uncertaintyFunction(model.uncertainty);
+  const { accuracy } = model;
+  const floorCm = accuracy.floorCm;
+  const uncertaintyOf = (xUpper: number, xLower: number) => Math.max(propagated(xUpper, xLower), floorCm);
+  const check = accuracy.check;
+  const statusOf = (branch: Branch, jLower: number): Line["positionStatus"] => {
+    if (accuracy.status !== "validated") return accuracy.status;
+    const absM = Math.abs(runningIndex(branch, jLower));
+    return absM >= check!.absMMin && absM <= check!.absMMax ? "validated" : "extrapolated";
+  };
 
   // The scan stores plain numbers in scratch arrays; Line objects are made once, only for the
   // lines kept. The arrays are reused between calls (nothing here is re-entrant or asynchronous).
@@ -198,6 +212,7 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
       relativeIntensity: shape / strongestShape,
       lineIntensity: dipole === null ? null : toAbsolute * shape,
       populationFraction: populations[i],
+      positionStatus: statusOf(branch, jLower),
     });
   }
 
@@ -213,5 +228,6 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
     strongestLineIntensity: dipole === null ? null : absoluteLineIntensity(strongestShape, dipole, model.abundance),
     strongestLinePerDebyeSquared: absoluteLineIntensity(strongestShape, 1, model.abundance),
     intensityOrigin: model.intensity?.origin ?? null,
+    accuracy,
   };
 }

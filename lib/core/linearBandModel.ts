@@ -1,5 +1,6 @@
 import { bandLabel, sameBand } from "./band.ts";
-import type { BandModel, PositionUncertaintyTerm } from "./bandModel.ts";
+import { bandAccuracy } from "./bandAccuracy.ts";
+import type { BandModel, PositionUncertainty } from "./bandModel.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { linearPartitionFunction } from "./linearPartitionFunction.ts";
 import { linearStateExpansion } from "./linearStateTerms.ts";
@@ -18,15 +19,19 @@ function stateUncertainties(state: LinearState): Array<{ l: number; sigma: numbe
 }
 
 /**
- * Position variance of ν = E'(J') − E''(J'') with every state constant independent (the sources
- * give no correlations). When upper and lower are the same state (never for a real band) the
- * terms still combine correctly because each constant appears once with both weights.
+ * Position uncertainty of ν = E'(J') − E''(J'') with every state constant independent (the sources
+ * give no correlations): one term and one row per constant. When upper and lower are the same
+ * state (never for a real band) each constant still appears once, with both weights.
  */
-function linearUncertaintyTerms(upper: LinearState, lower: LinearState): PositionUncertaintyTerm[] {
-  const terms: PositionUncertaintyTerm[] = [];
-  for (const { l, sigma } of stateUncertainties(upper)) terms.push({ l, upperWeight: 1, lowerWeight: upper === lower ? 1 : 0, variance: sigma * sigma });
-  if (lower !== upper) for (const { l, sigma } of stateUncertainties(lower)) terms.push({ l, upperWeight: 0, lowerWeight: 1, variance: sigma * sigma });
-  return terms;
+function linearPositionUncertainty(upper: LinearState, lower: LinearState): PositionUncertainty {
+  const entries: Array<{ l: number; upperWeight: number; lowerWeight: number; sigma: number }> = [];
+  for (const { l, sigma } of stateUncertainties(upper)) entries.push({ l, upperWeight: 1, lowerWeight: upper === lower ? 1 : 0, sigma });
+  if (lower !== upper) for (const { l, sigma } of stateUncertainties(lower)) entries.push({ l, upperWeight: 0, lowerWeight: 1, sigma });
+  const used = entries.filter((e) => e.sigma > 0);
+  return {
+    terms: used.map(({ l, upperWeight, lowerWeight }) => ({ l, upperWeight, lowerWeight })),
+    rows: used.map((e, r) => used.map((_, i) => (i === r ? e.sigma : 0))),
+  };
 }
 
 /** The band model of one Σ–Σ band of a linear molecule, from the two states' own constants. */
@@ -51,7 +56,8 @@ export function linearBandModel(
     lower: linearStateExpansion(lower),
     upper: linearStateExpansion(upper),
     zeroEnergy: ground.termEnergy.valueCm,
-    uncertaintyTerms: linearUncertaintyTerms(upper, lower),
+    uncertainty: linearPositionUncertainty(upper, lower),
+    accuracy: bandAccuracy(species, entry.band),
     partitionFunction: options.partitionFunction ?? linearPartitionFunction(linear, options.temperatureK),
     lowerWeight: (j) => nuclearSpinWeight(linear.nuclearSpinWeights, lower.symmetry, j),
     intensity: species.intensities.find((d) => sameBand(d.band, entry.band)) ?? null,

@@ -24,3 +24,5 @@ export const secondRadiationConstantCmK = (planckJs * speedOfLightMs) / boltzman
 export const debyeEsuCm = 1e-18;
 /** Standard atmosphere, Pa (exact by definition). */
 export const standardAtmospherePa = 101325;
+/** Electron mass in u (CODATA 2018: 5.48579909065(16)e-4 u). */
+export const electronMassU = 5.48579909065e-4;

@@ -64,11 +64,55 @@ export interface BandIntensityData {
 }
 
 export interface ReferenceLine {
+  /** v' = v'' for a pure-rotation line (label R(J'') for J''+1 ← J''). */
   band: Band;
   label: string;
   wavenumber: WavenumberCm;
   uncertainty: WavenumberCm | null;
   sourceKey: string;
+  /** Kept out of the fit of this molecule's constants and used only to test it. */
+  heldOut: boolean;
+}
+
+/**
+ * One independent source of line-position error, written as a change δY_kl of the Dunham
+ * coefficients: it moves a line by Σ δY_kl [(v'+½)^k x'^l − (v''+½)^k x''^l], and independent
+ * components add in quadrature. Correlated fit parameters become components through the
+ * eigenvectors of their covariance; an omitted term is one component.
+ */
+export interface DunhamErrorComponent {
+  kind: "constants" | "omitted-term" | "isotope-scaling";
+  deltas: Array<{ k: number; l: number; valueCm: number }>;
+}
+
+/** How well one band of one species is known, from its cited measured lines. */
+export interface BandCheck {
+  band: Band;
+  lineCount: number;
+  heldOutCount: number;
+  /** Smallest and largest |m| measured (m = J''+1 in R, −J'' in P; J''+1 for pure rotation). */
+  absMMin: number;
+  absMMax: number;
+  rmsResidualCm: number;
+  maxAbsResidualCm: number;
+  sourceKeys: string[];
+}
+
+/** What a species' predictions were tested against: the basis of every band's accuracy status. */
+export interface SpeciesValidation {
+  checks: BandCheck[];
+  /** True when the constants were fitted to, or compared with, measured lines of this molecule. */
+  constantsTested: boolean;
+  /** Largest |residual| over every measured line of the molecule (any band, any species), cm⁻¹. */
+  moleculeMaxAbsResidualCm: number;
+}
+
+/** A band's accuracy status, carried by every computed band. */
+export interface BandAccuracy {
+  status: "validated" | "extrapolated" | "not-validated";
+  check: BandCheck | null;
+  /** No line of the band is given a smaller ± than this (the residuals measured lines show). */
+  floorCm: number;
 }
 
 /** One isotopologue, ready for the physics: masses resolved, constants as one Y_kl table. */
@@ -81,10 +125,14 @@ export interface SpeciesModel {
   abundance: number;
   reducedMassU: MassU;
   dunham: DunhamCoefficient[];
-  constantsOrigin: "cited" | "isotope-scaled";
+  constantsOrigin: "cited" | "isotope-scaled" | "fitted";
   constantsSourceKey: string;
   intensities: BandIntensityData[];
   referenceLines: ReferenceLine[];
+  /** Position error components; absent: each Dunham coefficient's own uncertainty, uncorrelated. */
+  positionErrors?: DunhamErrorComponent[];
+  /** Residual checks against measured lines; absent: not validated. */
+  validation?: SpeciesValidation;
   /** Present for a linear polyatomic molecule: its states and bands replace the Dunham table. */
   linear?: LinearSpeciesData;
 }
@@ -106,6 +154,8 @@ export interface Line {
   relativeIntensity: number;
   lineIntensity: LineIntensityCmPerMolecule | null;
   populationFraction: number;
+  /** validated: inside the measured |m| range of a validated band; extrapolated: outside it, or a band without measured lines of its own. */
+  positionStatus: "validated" | "extrapolated" | "not-validated";
 }
 
 export interface BandLines {
@@ -125,4 +175,5 @@ export interface BandLines {
   /** Strongest line intensity for a transition dipole of 1 D, cm/molecule/D², always known. */
   strongestLinePerDebyeSquared: number;
   intensityOrigin: BandIntensityData["origin"] | null;
+  accuracy: BandAccuracy;
 }

@@ -1,20 +1,18 @@
 import {
-  equilibriumToDunham,
-  reducedMassU,
-  scaleDunhamToIsotopologue,
+  moleculeValidation,
   scaleTransitionDipoleToIsotopologue,
   transitionDipoleFromBandStrength,
   parseBand,
   sameBand,
   type BandIntensityData,
-  type DunhamCoefficient,
-  type EquilibriumConstants,
-  type EquilibriumUncertainties,
   type GasBroadening,
   type SpeciesModel,
 } from "../core/index.ts";
+import { runFileFit, speciesMasses, type FileFit } from "./fileFit.ts";
+import { split, type GivenConstant } from "./givenConstants.ts";
 import { isotope } from "./isotopes.ts";
-import type { Measured, MoleculeFile } from "./schema.ts";
+import type { MoleculeFile } from "./schema.ts";
+import { speciesConstants } from "./speciesConstants.ts";
 import { speciesLabel, speciesSpellings } from "./speciesNames.ts";
 
 export interface Source {
@@ -24,31 +22,11 @@ export interface Source {
   doi: string | null;
 }
 
-/** A constant as the file gave it, for the pages that show "the constants used". */
-export interface GivenConstant {
-  name: string;
-  valueCm: number;
-  /** The cited uncertainty, or half a unit of the last quoted digit where the source gives none. */
-  uncertaintyCm: number;
-  uncertaintyImplied: boolean;
-}
-
-/**
- * Half a unit in the last digit of a number as written (2169.81358 → 5e-6): the uncertainty a
- * quoted value carries at least when its source states none. Trailing zeros lost by the YAML
- * parser only make this larger, never smaller.
- */
-export function impliedUncertainty(value: number): number {
-  const [mantissa, exponent] = Math.abs(value).toExponential().split("e");
-  const decimals = (mantissa.split(".")[1] ?? "").length - Number(exponent);
-  return 0.5 * Math.pow(10, -decimals);
-}
-
 export interface SpeciesInfo {
   model: SpeciesModel;
   spellings: string[];
   isReference: boolean;
-  given: { sourceKey: string; form: "equilibrium" | "dunham" | "states"; values: GivenConstant[] } | null;
+  given: { sourceKey: string; form: "equilibrium" | "dunham" | "mass-independent" | "fit" | "states"; values: GivenConstant[] } | null;
 }
 
 export interface Molecule {
@@ -94,69 +72,30 @@ export function moleculeIdentity(
   };
 }
 
-function split(m: Measured): { value: number; uncertainty: number | null } {
-  return typeof m === "number" ? { value: m, uncertainty: null } : { value: m.value, uncertainty: m.uncertainty };
-}
-
-function constantOf(name: string, raw: Measured): GivenConstant {
-  const { value, uncertainty } = split(raw);
-  return { name, valueCm: value, uncertaintyCm: uncertainty ?? impliedUncertainty(value), uncertaintyImplied: uncertainty === null };
-}
-
-type ConstantsBlock = NonNullable<MoleculeFile["species"][number]["constants"]>;
-
-export function dunhamFromBlock(block: ConstantsBlock): { table: DunhamCoefficient[]; given: GivenConstant[]; form: "equilibrium" | "dunham" } {
-  if (block.equilibrium) {
-    const values: Record<string, number> = {};
-    const uncertainties: EquilibriumUncertainties = {};
-    const given: GivenConstant[] = [];
-    for (const [name, raw] of Object.entries(block.equilibrium)) {
-      if (raw === undefined) continue;
-      const constant = constantOf(name, raw);
-      values[name] = constant.valueCm;
-      uncertainties[name as keyof EquilibriumConstants] = constant.uncertaintyCm;
-      given.push(constant);
-    }
-    return { table: equilibriumToDunham(values as unknown as EquilibriumConstants, uncertainties), given, form: "equilibrium" };
-  }
-  const given: GivenConstant[] = [];
-  const table: DunhamCoefficient[] = [];
-  for (const [name, raw] of Object.entries(block.dunham ?? {})) {
-    const constant = constantOf(name, raw);
-    given.push(constant);
-    table.push({ k: Number(name[1]), l: Number(name[2]), valueCm: constant.valueCm, uncertaintyCm: constant.uncertaintyCm });
-  }
-  return { table, given, form: "dunham" };
-}
-
 /**
  * Turns a file that has passed every check into the typed molecule: masses and abundances from
  * the isotope library, one Dunham table per species (cited, or scaled from the reference),
  * intensity data per species and band (cited, from a band strength, or isotope-scaled).
  */
-export function buildMolecule(file: MoleculeFile, fileName: string): Molecule {
+export function buildMolecule(file: MoleculeFile, fileName: string, fileFit: FileFit | null = runFileFit(file)): Molecule {
   const referenceIndex = file.species.findIndex((s) => s.reference === true);
   const ordered = [file.species[referenceIndex], ...file.species.filter((_, i) => i !== referenceIndex)];
-  const referenceBlock = dunhamFromBlock(ordered[0].constants!);
-  const masses = (numbers: number[]) => numbers.map((a, i) => isotope(file.atoms[i], a)!);
-  const referenceMasses = masses(ordered[0].massNumbers);
-  const referenceMu = reducedMassU(referenceMasses[0].massU, referenceMasses[1].massU);
+  const referenceBlock = ordered[0].constants!;
   const sameSpecies = (a: number[], b: number[]) => a.length === b.length && a.every((x, i) => x === b[i]);
 
   const models: SpeciesInfo[] = ordered.map((entry, index) => {
-    const atomData = masses(entry.massNumbers);
-    const mu = reducedMassU(atomData[0].massU, atomData[1].massU);
-    const own = entry.constants ? dunhamFromBlock(entry.constants) : null;
-    const dunham = own ? own.table : scaleDunhamToIsotopologue(referenceBlock.table, referenceMu, mu);
+    const masses = speciesMasses(file.atoms, entry.massNumbers, ordered[0].massNumbers);
+    const constants = speciesConstants(file, entry, masses, referenceBlock, fileFit);
     const model: SpeciesModel = {
       label: speciesLabel(file.atoms, entry.massNumbers),
       massNumbers: entry.massNumbers,
-      atomMassesU: atomData.map((a) => a.massU),
-      abundance: atomData.reduce((p, a) => p * (a.abundance ?? 0), 1),
-      reducedMassU: mu,
-      dunham,
-      constantsOrigin: own ? "cited" : "isotope-scaled",
-      constantsSourceKey: (entry.constants ?? ordered[0].constants!).source,
+      atomMassesU: masses.atomMassesU,
+      abundance: entry.massNumbers.reduce((p, a, i) => p * (isotope(file.atoms[i], a)!.abundance ?? 0), 1),
+      reducedMassU: masses.reducedMassU,
+      dunham: constants.dunham,
+      positionErrors: constants.positionErrors,
+      constantsOrigin: constants.origin,
+      constantsSourceKey: (entry.constants ?? referenceBlock).source,
       intensities: [],
       referenceLines: [],
     };
@@ -164,7 +103,7 @@ export function buildMolecule(file: MoleculeFile, fileName: string): Molecule {
       model,
       spellings: speciesSpellings(file.atoms, entry.massNumbers),
       isReference: index === 0,
-      given: own ? { sourceKey: entry.constants!.source, form: own.form, values: own.given } : null,
+      given: constants.given ? { sourceKey: entry.constants!.source, form: constants.given.form, values: constants.given.values } : null,
     };
   });
 
@@ -197,11 +136,17 @@ export function buildMolecule(file: MoleculeFile, fileName: string): Molecule {
   }
   for (const group of file.referenceLines ?? []) {
     const info = models.find((m) => sameSpecies(m.model.massNumbers, group.massNumbers))!;
-    const band = parseBand(group.band);
+    const [vUpper, vLower] = group.band.split("-").map(Number);
+    const band = { vUpper, vLower };
     for (const line of group.lines) {
-      info.model.referenceLines.push({ band, label: line.label, wavenumber: line.wavenumber, uncertainty: line.uncertainty ?? null, sourceKey: group.source });
+      info.model.referenceLines.push({ band, label: line.label, wavenumber: line.wavenumber, uncertainty: line.uncertainty ?? null, sourceKey: group.source, heldOut: line.heldOut === true });
     }
   }
+  const validations = moleculeValidation(
+    models.map((m) => m.model),
+    fileFit !== null,
+  );
+  models.forEach((m, i) => (m.model.validation = validations[i]));
 
   return {
     ...moleculeIdentity(file, fileName),

@@ -5,3 +5,5 @@ export * from "./speciesNames.ts";
 export * from "./buildMolecule.ts";
 export * from "./parseMoleculeText.ts";
 export * from "./loadMolecules.ts";
+export * from "./fileFit.ts";
+export * from "./givenConstants.ts";

@@ -1,5 +1,6 @@
-import { transitionDipoleFromBandStrength, type LinearSpeciesData, type LinearState, type LinearStateSymmetry, type SpeciesModel } from "../core/index.ts";
-import { impliedUncertainty, moleculeIdentity, type GivenConstant, type Molecule, type SpeciesInfo } from "./buildMolecule.ts";
+import { moleculeValidation, transitionDipoleFromBandStrength, type LinearSpeciesData, type LinearState, type LinearStateSymmetry, type SpeciesModel } from "../core/index.ts";
+import { moleculeIdentity, type Molecule, type SpeciesInfo } from "./buildMolecule.ts";
+import { impliedUncertainty, type GivenConstant } from "./givenConstants.ts";
 import { isotope, stableMassNumbers } from "./isotopes.ts";
 import type { LinearMoleculeFile, LinearSpeciesEntry } from "./linearSchema.ts";
 import type { Measured } from "./schema.ts";
@@ -209,11 +210,16 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string):
     }
     for (const group of entry.referenceLines ?? []) {
       const band = linear.bands.find((x) => x.band.label === group.band)!.band;
-      for (const line of group.lines) model.referenceLines.push({ band, label: line.label, wavenumber: line.wavenumber, uncertainty: line.uncertainty ?? null, sourceKey: group.source });
+      for (const line of group.lines) model.referenceLines.push({ band, label: line.label, wavenumber: line.wavenumber, uncertainty: line.uncertainty ?? null, sourceKey: group.source, heldOut: line.heldOut === true });
     }
     const spellings = new Set([...speciesSpellings(file.atoms, entry.massNumbers), label.toLowerCase()]);
     return { model, spellings: [...spellings], isReference: index === 0, given: { sourceKey: entry.states[0].source, form: "states", values: built.flatMap((b) => b.given) } };
   });
+  const validations = moleculeValidation(
+    species.map((s) => s.model),
+    false,
+  );
+  species.forEach((s, i) => (s.model.validation = validations[i]));
   return {
     ...moleculeIdentity(file, fileName),
     species,

@@ -1,6 +1,7 @@
 import { isMap, isPair, isScalar, LineCounter, parseDocument, type Document } from "yaml";
 import { parseBand, CoreInputError } from "../core/index.ts";
 import { buildMolecule, type Molecule } from "./buildMolecule.ts";
+import { fitResultProblems, referenceSpeciesIndex, runFileFit, type FileFit } from "./fileFit.ts";
 import { isKnownElement, isotope, stableMassNumbers } from "./isotopes.ts";
 import { formatPath, type Problem } from "./problems.ts";
 import { moleculeFileSchema, type MoleculeFile } from "./schema.ts";
@@ -128,8 +129,43 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
     if (!s.constants) return;
     const c = s.constants;
     checkSource([...path, "constants", "source"], c.source);
-    if (!!c.equilibrium === !!c.dunham) {
-      add([...path, "constants"], "give either `equilibrium` (ωe, ωexe, Be, …) or `dunham` (Y10, Y01, …), exactly one of them");
+    const forms = [c.equilibrium, c.dunham, c.massIndependent, c.fit].filter((f) => f !== undefined).length;
+    if (forms !== 1) {
+      add([...path, "constants"], "give exactly one of `equilibrium` (ωe, ωexe, Be, …), `dunham` (Y10, Y01, …), `massIndependent` (U10, U01, …) or `fit` (constants fitted to the file's measured lines)");
+      return;
+    }
+    if (c.crossCheck) {
+      checkSource([...path, "constants", "crossCheck", "source"], c.crossCheck.source);
+      const crossForms = [c.crossCheck.dunham, c.crossCheck.massIndependent].filter((f) => f !== undefined).length;
+      if (crossForms !== 1) add([...path, "constants", "crossCheck"], "a cross-check set gives exactly one of `dunham` or `massIndependent`");
+    }
+    if (c.massIndependent) {
+      for (const atom of Object.keys(c.massIndependent.breakdown ?? {})) {
+        if (!file.atoms.includes(atom)) add([...path, "constants", "massIndependent", "breakdown", atom], `atom ${atom} is not among this molecule's atoms (${file.atoms.join(", ")})`);
+      }
+    }
+    if (c.fit) {
+      if (s.reference !== true) add([...path, "constants", "fit"], "only the reference species carries a fit; the fit takes the measured lines of every species and the others follow from it by the isotope relations");
+      const groups = new Set((file.referenceLines ?? []).map((g) => g.source));
+      (file.referenceLines ?? []).forEach((group, g) => {
+        if (!c.fit!.lines.includes(group.source)) return;
+        group.lines.forEach((line, j) => {
+          if (line.uncertainty === undefined || line.uncertainty === 0) add(["referenceLines", g, "lines", j, "uncertainty"], "a line that enters the fit needs its measured uncertainty (above 0 cm⁻¹) to be weighted");
+        });
+      });
+      c.fit.lines.forEach((key, j) => {
+        if (!groups.has(key)) add([...path, "constants", "fit", "lines", j], `no \`referenceLines\` group has source "${key}" (groups: ${[...groups].join(", ") || "none"})`);
+      });
+      c.fit.terms.forEach((name, j) => {
+        if (c.fit!.terms.indexOf(name) !== j) add([...path, "constants", "fit", "terms", j], `${name} is listed twice`);
+        if (name === "Y00") add([...path, "constants", "fit", "terms", j], "Y00 shifts every level alike and cannot be fitted to line positions");
+      });
+      for (const [atom, names] of Object.entries(c.fit.massCorrections ?? {})) {
+        if (!file.atoms.includes(atom)) add([...path, "constants", "fit", "massCorrections", atom], `atom ${atom} is not among this molecule's atoms (${file.atoms.join(", ")})`);
+        names.forEach((name, j) => {
+          if (!c.fit!.terms.includes(name)) add([...path, "constants", "fit", "massCorrections", atom, j], `${name} has a mass correction but is not among the fitted terms`);
+        });
+      }
       return;
     }
     if (c.equilibrium) {
@@ -189,27 +225,35 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
     const path = ["referenceLines", i];
     checkSource([...path, "source"], group.source);
     checkSpeciesRef([...path, "massNumbers"], group.massNumbers);
-    checkBand([...path, "band"], group.band);
+    const [vUpper, vLower] = group.band.split("-").map(Number);
+    // Measured lines may be pure rotation (v' = v'', e.g. "0-0"), which fix the rotational constants.
+    if (vUpper < vLower) add([...path, "band"], `band "${group.band}": the upper level v' must not be below the lower level v''`);
     group.lines.forEach((line, j) => {
       if (!(line.wavenumber > 0)) add([...path, "lines", j, "wavenumber"], "a line position must be above 0 cm⁻¹");
+      if (vUpper === vLower && line.label.startsWith("P")) add([...path, "lines", j, "label"], "a pure-rotation line is written R(J'') for J''+1 ← J''");
     });
   });
   return out;
 }
 
-export type ParseResult = { ok: true; molecule: Molecule; data: MoleculeFile | LinearMoleculeFile } | { ok: false; problems: Problem[] };
+export type ParseResult = { ok: true; molecule: Molecule; data: MoleculeFile | LinearMoleculeFile; fileFit?: FileFit | null } | { ok: false; problems: Problem[] };
 
 /**
  * Validates one molecule file's bytes. `file` is the path shown in messages; `expectedId` is the
  * file's base name (null to skip the name check, e.g. for text piped in).
  */
-export function parseMoleculeBytes(bytes: Uint8Array, file: string, expectedId: string | null): ParseResult {
+export function parseMoleculeBytes(bytes: Uint8Array, file: string, expectedId: string | null, options: ParseOptions = {}): ParseResult {
   const decoded = decode(bytes, file);
   if ("problem" in decoded) return { ok: false, problems: [decoded.problem] };
-  return parseMoleculeText(decoded.text, file, expectedId);
+  return parseMoleculeText(decoded.text, file, expectedId, options);
 }
 
-export function parseMoleculeText(text: string, file: string, expectedId: string | null): ParseResult {
+export interface ParseOptions {
+  /** false: run the file's fit but do not compare it with the written result (for `bandatlas fit`). */
+  checkFitResult?: boolean;
+}
+
+export function parseMoleculeText(text: string, file: string, expectedId: string | null, options: ParseOptions = {}): ParseResult {
   const counter = new LineCounter();
   const doc = parseDocument(text, { lineCounter: counter, uniqueKeys: true, prettyErrors: true, version: "1.2", strict: true });
   const problems: Problem[] = [];
@@ -255,7 +299,20 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
   }
   for (const { path, message } of [...placeholderProblems(raw, []), ...semanticProblems(parsed.data, expectedId)]) problems.push(located(path, message));
   if (problems.length) return { ok: false, problems: sortProblems(problems) };
-  return { ok: true, molecule: buildMolecule(parsed.data, file), data: parsed.data };
+  // The build and the check re-run every fit, so a file's constants cannot drift from their lines.
+  let fileFit: FileFit | null = null;
+  try {
+    fileFit = runFileFit(parsed.data);
+  } catch (error) {
+    if (!(error instanceof CoreInputError)) throw error;
+    const index = referenceSpeciesIndex(parsed.data);
+    return { ok: false, problems: [located(["species", index, "constants", "fit"], `the fit cannot be made: ${error.message}`)] };
+  }
+  if (fileFit && options.checkFitResult !== false) {
+    for (const { path, message } of fitResultProblems(parsed.data, fileFit)) problems.push(located(path, message));
+    if (problems.length) return { ok: false, problems: sortProblems(problems) };
+  }
+  return { ok: true, molecule: buildMolecule(parsed.data, file, fileFit), data: parsed.data, fileFit };
 }
 
 type Issue = { code: string; path: PropertyKey[]; message: string; keys?: string[]; errors?: Issue[][] };
