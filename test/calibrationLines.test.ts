@@ -7,7 +7,7 @@ import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
 const molecules = loadMoleculesOrThrow(new URL("../molecules", import.meta.url).pathname);
 const co = molecules.find((m) => m.id === "co")!;
 // Invented lines (demo values, not a gas): a strong line and a weaker neighbour.
-const line = (wavenumber: number, intensity: number, label: string): AbsorbingLine => ({ species: "invented", band: "1-0", label, wavenumber, intensity, dopplerHwhmCm: 0.0025, lorentzHwhmCm: 0.002 });
+const line = (wavenumber: number, intensity: number, label: string): AbsorbingLine => ({ species: "invented", band: "1-0", label, wavenumber, wavenumberUncertainty: 1e-5, positionStatus: "validated", intensity, dopplerHwhmCm: 0.0025, lorentzHwhmCm: 0.002 });
 const thin = (lines: AbsorbingLine[], resolutionCm: number) =>
   cellSpectrum({ lines, conditions: defaultCellConditions, intensityScale: "relative-thin", fromCm: 2090, toCm: 2130, instrument: { kind: "fourier-transform", resolutionCm, apodization: "triangular" } });
 

@@ -66,7 +66,7 @@ describe("CO cell spectrum", () => {
 
   it("keeps the equivalent width of a line through the instrument (the ILS has unit area)", () => {
     // One invented line, saturated at its centre, in the middle of a 40 cm⁻¹ window.
-    const line = { species: "invented", band: "1-0", label: "R(0)", wavenumber: 2110, intensity: 2e-19, dopplerHwhmCm: 0.0025, lorentzHwhmCm: 0.002 };
+    const line = { species: "invented", band: "1-0", label: "R(0)", wavenumber: 2110, wavenumberUncertainty: 1e-5, positionStatus: "validated" as const, intensity: 2e-19, dopplerHwhmCm: 0.0025, lorentzHwhmCm: 0.002 };
     for (const apodization of ["boxcar", "triangular", "happ-genzel", "norton-beer-medium"] as const) {
       const s = cellSpectrum({ lines: [line], conditions: defaultCellConditions, intensityScale: "absolute", fromCm: 2090, toCm: 2130, instrument: { kind: "fourier-transform", resolutionCm: 0.5, apodization } });
       let mono = 0;

@@ -2,7 +2,7 @@ import { bandLabel } from "./band.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { dopplerHwhmCm, molecularMassU } from "./dopplerWidth.ts";
 import { lorentzHwhmCm, runningM, type GasBroadening } from "./pressureBroadening.ts";
-import type { BandLines, SpeciesModel, TemperatureK, WavenumberCm } from "./types.ts";
+import type { BandLines, Line, SpeciesModel, TemperatureK, WavenumberCm } from "./types.ts";
 
 /** The state of the gas in the cell. */
 export interface CellConditions {
@@ -20,6 +20,9 @@ export interface AbsorbingLine {
   band: string;
   label: string;
   wavenumber: WavenumberCm;
+  /** The predicted position's standard uncertainty and how it was validated (see Line). */
+  wavenumberUncertainty: WavenumberCm;
+  positionStatus: Line["positionStatus"];
   /** cm/molecule of the molecule at its isotopic mix (or relative units, see the spectrum's scale). */
   intensity: number;
   dopplerHwhmCm: WavenumberCm;
@@ -59,6 +62,8 @@ export function absorbingLines(
       band,
       label: line.label,
       wavenumber: line.wavenumber,
+      wavenumberUncertainty: line.wavenumberUncertainty,
+      positionStatus: line.positionStatus,
       intensity,
       dopplerHwhmCm: dopplerHwhmCm(line.wavenumber, conditions.temperatureK, mass),
       lorentzHwhmCm: lorentzHwhmCm(broadening, Math.abs(runningM(line.branch, line.jLower)), conditions.pressurePa, conditions.moleFraction, conditions.temperatureK),

@@ -11,16 +11,24 @@ export interface CalibrationCriteria {
   isolationMultiple: number;
   /** … counting only lines at least this fraction of the candidate's own intensity. */
   neighbourFraction: number;
+  /**
+   * Accurate: the predicted position's standard uncertainty at most this fraction of R, and the
+   * line inside the measured J range of a band validated against cited lines. R/50 keeps the
+   * position error well below the few-hundredths-of-R reading precision of a good FTIR peak fit
+   * (our own bound; a line that fails it would move the scale more than the fit can resolve).
+   */
+  maxUncertaintyFraction: number;
 }
 
 /** Defaults of our own choosing (common practice, no source), stated on every output. */
-export const defaultCalibrationCriteria: CalibrationCriteria = { strongFraction: 0.1, isolationMultiple: 1, neighbourFraction: 0.01 };
+export const defaultCalibrationCriteria: CalibrationCriteria = { strongFraction: 0.1, isolationMultiple: 1, neighbourFraction: 0.01, maxUncertaintyFraction: 0.02 };
 
 export interface CalibrationLine {
   species: string;
   band: string;
   label: string;
   wavenumber: WavenumberCm;
+  wavenumberUncertainty: WavenumberCm;
   intensity: number;
   relativeToStrongest: number;
   /** Distance to the nearest line that counts as a neighbour (any distance), cm⁻¹; null if none. */
@@ -35,6 +43,7 @@ export function checkCalibrationCriteria(c: CalibrationCriteria): void {
   if (!(c.strongFraction > 0 && c.strongFraction <= 1)) throw new CoreInputError(`strong fraction ${c.strongFraction} must be above 0 and at most 1`);
   if (!(c.isolationMultiple >= 0 && Number.isFinite(c.isolationMultiple))) throw new CoreInputError(`isolation multiple ${c.isolationMultiple} must be a number ≥ 0`);
   if (!(c.neighbourFraction >= 0 && c.neighbourFraction <= 1)) throw new CoreInputError(`neighbour fraction ${c.neighbourFraction} must be between 0 and 1`);
+  if (!(c.maxUncertaintyFraction > 0 && Number.isFinite(c.maxUncertaintyFraction))) throw new CoreInputError(`uncertainty fraction ${c.maxUncertaintyFraction} must be a number above 0`);
 }
 
 /**
@@ -59,7 +68,7 @@ export function apparentPeak(signal: Float64Array, spectrum: CellSpectrum, centr
 }
 
 /**
- * Lines usable for a wavenumber calibration at resolution R: strong and isolated by the criteria,
+ * Lines usable for a wavenumber calibration at resolution R: strong, isolated and accurate by the criteria,
  * inside the spectrum's window, each with the shift of its apparent peak in the convolved
  * spectrum (blends, ILS sidelobes of neighbours and saturation all show up in it).
  */
@@ -83,6 +92,7 @@ export function calibrationLines(
     const line = sorted[i];
     if (line.wavenumber < from || line.wavenumber > to) continue;
     if (line.intensity < criteria.strongFraction * strongest) continue;
+    if (line.positionStatus !== "validated" || line.wavenumberUncertainty > criteria.maxUncertaintyFraction * resolutionCm) continue;
     const floor = criteria.neighbourFraction * line.intensity;
     let nearest: number | null = null;
     for (let j = i - 1; j >= 0; j--) {
@@ -102,6 +112,7 @@ export function calibrationLines(
       band: line.band,
       label: line.label,
       wavenumber: line.wavenumber,
+      wavenumberUncertainty: line.wavenumberUncertainty,
       intensity: line.intensity,
       relativeToStrongest: line.intensity / strongest,
       nearestNeighbourCm: nearest,

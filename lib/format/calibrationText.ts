@@ -1,4 +1,5 @@
 import type { CalibrationMarks } from "../atlas/index.ts";
+import type { CalibrationCriteria } from "../core/index.ts";
 import { standardAtmospherePa } from "../core/physicalConstants.ts";
 import { peakShiftDigits } from "./spectrumCells.ts";
 
@@ -19,12 +20,21 @@ export function calibrationConditionsText(marks: CalibrationMarks): string {
   return `a ${Number(c.pathCm.toPrecision(4))} cm cell of ${gas} at ${c.temperatureK} K and ${torr} Torr (${Number((c.pressurePa / 100).toPrecision(4))} mbar), seen by a Fourier-transform instrument with ${marks.apodization} apodization`;
 }
 
+/** The three criteria in a short phrase, for headers and sheets; `r` names the resolution. */
+export function criteriaPhrase(k: CalibrationCriteria, r = "R"): string {
+  return (
+    `strong: ≥ ${k.strongFraction} of the gas's strongest line; isolated: no line ≥ ${k.neighbourFraction} of it within ±${k.isolationMultiple} × ${r}; ` +
+    `accurate: position ± ≤ ${k.maxUncertaintyFraction} × ${r}, inside the measured J range of a band validated against cited lines`
+  );
+}
+
 /** What "calibration grade at resolution R" means, in words. */
 export function calibrationCriteriaText(marks: CalibrationMarks): string {
   const k = marks.criteria;
   return (
-    `A line is calibration grade at a resolution R when it is at least ${k.strongFraction} of the strongest line of the gas and no other line of any species or band (hot bands included) ` +
-    `at least ${k.neighbourFraction} as strong as it lies within ±${k.isolationMultiple} × R. The expected peak shift is where the instrument shows the peak minus the line position, from the convolved spectrum.`
+    `A line is calibration grade at a resolution R when it is at least ${k.strongFraction} of the strongest line of the gas, no other line of any species or band (hot bands included) ` +
+    `at least ${k.neighbourFraction} as strong as it lies within ±${k.isolationMultiple} × R, and its predicted position is known to ${k.maxUncertaintyFraction} × R or better (one standard uncertainty) ` +
+    `inside the J range of a band checked against cited measured lines. The expected peak shift is where the instrument shows the peak minus the line position, from the convolved spectrum.`
   );
 }
 

@@ -111,6 +111,8 @@ export const massIndependentSchema = mapping(
     breakdown: breakdownSchema.optional(),
     /** Electron mass the source used in (1 + m_e Δ/M), in u. */
     electronMassU: numberIn("u").positive().optional(),
+    /** The unit the source prints U_kl in (times u^(k/2+l)); MHz is converted with the exact c. */
+    unit: z.enum(["cm-1", "MHz"], { error: () => `expected the unit cm-1 or MHz` }).optional(),
   },
   "a mass-independent Dunham set",
 );

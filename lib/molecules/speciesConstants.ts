@@ -8,6 +8,7 @@ import {
   omittedTerms,
   scaleDunhamToIsotopologue,
   speciesDunhamFromFit,
+  speedOfLightMs,
   type DunhamCoefficient,
   type DunhamErrorComponent,
   type OmittedTerm,
@@ -32,6 +33,8 @@ export interface SpeciesConstants {
  */
 export function dunhamFromMassIndependent(set: MassIndependent, atoms: readonly string[], masses: SpeciesMasses): DunhamCoefficient[] {
   const me = set.electronMassU ?? electronMassU;
+  // 1 cm⁻¹ = c × 100 Hz = 29 979.2458 MHz exactly (c is exact in the SI).
+  const toCm = set.unit === "MHz" ? 1 / (speedOfLightMs * 1e-4) : 1;
   return Object.entries(set.coefficients).map(([name, raw]) => {
     const k = Number(name[1]);
     const l = Number(name[2]);
@@ -41,7 +44,7 @@ export function dunhamFromMassIndependent(set: MassIndependent, atoms: readonly 
       const delta = set.breakdown?.[atom]?.[`D${k}${l}`];
       if (delta !== undefined) breakdown += (me * delta) / masses.atomMassesU[i];
     });
-    const factor = Math.pow(masses.reducedMassU, -(k / 2 + l)) * breakdown;
+    const factor = Math.pow(masses.reducedMassU, -(k / 2 + l)) * breakdown * toCm;
     return { k, l, valueCm: u.value * factor, uncertaintyCm: u.uncertainty * factor };
   });
 }

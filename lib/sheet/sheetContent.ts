@@ -1,6 +1,6 @@
 import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { sameBand, type Band, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
-import { calibrationConditionsText, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
+import { calibrationConditionsText, criteriaPhrase, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
 import { describeBuild } from "../build/buildIdentity.ts";
@@ -91,7 +91,7 @@ function calibrationMarksNote(marks: CalibrationMarks, entry: AtlasEntry, band: 
   const k = marks.criteria;
   const flags = [marks.broadeningTypical ? " Line widths use a typical (not measured) pressure-broadening coefficient." : "", marks.intensityScale !== "absolute" ? " No cited band intensity: an optically thin cell is assumed." : ""].join("");
   return (
-    `Recommended for calibration (strong: ≥ ${k.strongFraction} of the gas's strongest line; isolated: no line ≥ ${k.neighbourFraction} of it within ±${k.isolationMultiple} × R) for ${calibrationConditionsText(marks)}; ` +
+    `Recommended for calibration (${criteriaPhrase(k)}) for ${calibrationConditionsText(marks)}; ` +
     `${parts.join("; ")}.${flags} Each line's shift: bandatlas calibration-lines.`
   );
 }

@@ -1,6 +1,6 @@
 import { defaultCalibrationCriteria, type CalibrationCriteria } from "../../core/index.ts";
 import { moleculeCalibrationLines } from "../../atlas/index.ts";
-import { calibrationWavenumberDigits, csvRow, numeric, peakShiftDigits, significant, textTable } from "../../format/index.ts";
+import { calibrationWavenumberDigits, criteriaPhrase, csvRow, numeric, peakShiftDigits, significant, textTable } from "../../format/index.ts";
 import { cellConditionsFromOptions, cellOptionSpec, cellOptionsHelp, describeConditions, instrumentFromOptions, joinUnitWords, rangeFromOptions } from "../cellOptions.ts";
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine } from "../options.ts";
@@ -17,6 +17,8 @@ ${cellOptionsHelp}
   --strong <f>            strong: at least f times the strongest line of the gas (default ${defaultCalibrationCriteria.strongFraction})
   --isolation <k>         isolated: no line within ±k × resolution (default ${defaultCalibrationCriteria.isolationMultiple}) …
   --neighbour <f>         … counting lines of at least f times the candidate's intensity (default ${defaultCalibrationCriteria.neighbourFraction})
+  --accuracy <f>          accurate: position uncertainty at most f × resolution, in a validated
+                          band's measured J range (default ${defaultCalibrationCriteria.maxUncertaintyFraction})
   --format table|csv|json table (default), CSV, or JSON with the settings
 
 Predictions, not certified values: check critical calibrations against certified reference data.`;
@@ -25,7 +27,7 @@ export function runCalibrationLines(args: string[]): string {
   const { values, positionals } = parseCommandLine(
     "calibration-lines",
     joinUnitWords(args),
-    { ...cellOptionSpec, strong: { type: "string" }, isolation: { type: "string" }, neighbour: { type: "string" } },
+    { ...cellOptionSpec, strong: { type: "string" }, isolation: { type: "string" }, neighbour: { type: "string" }, accuracy: { type: "string" } },
     1,
   );
   if (values.help) return calibrationLinesHelp + "\n";
@@ -38,11 +40,12 @@ export function runCalibrationLines(args: string[]): string {
     strongFraction: numberOption("strong", values.strong as string | undefined, defaultCalibrationCriteria.strongFraction),
     isolationMultiple: numberOption("isolation", values.isolation as string | undefined, defaultCalibrationCriteria.isolationMultiple),
     neighbourFraction: numberOption("neighbour", values.neighbour as string | undefined, defaultCalibrationCriteria.neighbourFraction),
+    maxUncertaintyFraction: numberOption("accuracy", values.accuracy as string | undefined, defaultCalibrationCriteria.maxUncertaintyFraction),
   };
   const molecule = loadOneMolecule(moleculesDir(values.molecules as string | undefined), positionals[0]);
   const result = moleculeCalibrationLines(molecule, { conditions, instrument, ...range }, criteria);
   const resolution = result.resolutionCm;
-  const criteriaText = `strong: ≥ ${criteria.strongFraction} × strongest line; isolated: no line ≥ ${criteria.neighbourFraction} × its own intensity within ±${criteria.isolationMultiple} × ${resolution} cm⁻¹`;
+  const criteriaText = criteriaPhrase(criteria, `${resolution} cm⁻¹`);
   const basis = result.set.intensityScale === "absolute" ? "peak shifts from the predicted transmittance at these cell conditions" : "peak shifts from the relative optically thin spectrum (no cited band intensity)";
   if (format === "json") {
     return (
@@ -62,6 +65,7 @@ export function runCalibrationLines(args: string[]): string {
             band: l.band,
             label: l.label,
             wavenumber: Number(calibrationWavenumberDigits(l.wavenumber)),
+            wavenumberUncertainty: Number(significant(l.wavenumberUncertainty, 2)),
             relativeToStrongest: Number(significant(l.relativeToStrongest, 3)),
             nearestNeighbourCm: l.nearestNeighbourCm === null ? null : Number(calibrationWavenumberDigits(l.nearestNeighbourCm)),
             peakShiftCm: l.peakShiftCm === null ? null : Number(peakShiftDigits(l.peakShiftCm)),
@@ -73,9 +77,9 @@ export function runCalibrationLines(args: string[]): string {
     );
   }
   if (format === "csv") {
-    const rows = [csvRow(["species", "band", "line", "wavenumber_cm-1", "relative_to_strongest", "nearest_neighbour_cm-1", "peak_shift_cm-1"])];
+    const rows = [csvRow(["species", "band", "line", "wavenumber_cm-1", "wavenumber_uncertainty_cm-1", "relative_to_strongest", "nearest_neighbour_cm-1", "peak_shift_cm-1"])];
     for (const l of result.lines) {
-      rows.push(csvRow([l.species, l.band, l.label, numeric(calibrationWavenumberDigits(l.wavenumber)), numeric(significant(l.relativeToStrongest, 3)), l.nearestNeighbourCm === null ? null : numeric(calibrationWavenumberDigits(l.nearestNeighbourCm)), numeric(peakShiftDigits(l.peakShiftCm))]));
+      rows.push(csvRow([l.species, l.band, l.label, numeric(calibrationWavenumberDigits(l.wavenumber)), numeric(significant(l.wavenumberUncertainty, 2)), numeric(significant(l.relativeToStrongest, 3)), l.nearestNeighbourCm === null ? null : numeric(calibrationWavenumberDigits(l.nearestNeighbourCm)), numeric(peakShiftDigits(l.peakShiftCm))]));
     }
     return rows.join("\n") + "\n";
   }
@@ -88,11 +92,11 @@ export function runCalibrationLines(args: string[]): string {
     `CAUTION — ${cautionFor(molecule)}`,
     "",
   ];
-  if (result.lines.length === 0) return header.join("\n") + "no line meets both criteria at this resolution.\n";
+  if (result.lines.length === 0) return header.join("\n") + "no line meets all three criteria at this resolution.\n";
   const table = textTable(
-    ["species", "band", "line", "ν̃ / cm⁻¹", "rel. to strongest", "nearest / cm⁻¹", "peak shift / cm⁻¹"],
-    result.lines.map((l) => [l.species, l.band, l.label, calibrationWavenumberDigits(l.wavenumber), significant(l.relativeToStrongest, 3), l.nearestNeighbourCm === null ? "none" : calibrationWavenumberDigits(l.nearestNeighbourCm), peakShiftDigits(l.peakShiftCm) || "no peak"]),
-    [false, false, false, true, true, true, true],
+    ["species", "band", "line", "ν̃ / cm⁻¹", "± / cm⁻¹", "rel. to strongest", "nearest / cm⁻¹", "peak shift / cm⁻¹"],
+    result.lines.map((l) => [l.species, l.band, l.label, calibrationWavenumberDigits(l.wavenumber), significant(l.wavenumberUncertainty, 2), significant(l.relativeToStrongest, 3), l.nearestNeighbourCm === null ? "none" : calibrationWavenumberDigits(l.nearestNeighbourCm), peakShiftDigits(l.peakShiftCm) || "no peak"]),
+    [false, false, false, true, true, true, true, true],
   );
   return header.join("\n") + table + "\n";
 }
