@@ -60,13 +60,13 @@ describe("the site in Chromium", () => {
     await page.keyboard.press("Enter");
     const first = page.locator("#name-results li a").first();
     await expect(first.textContent()).resolves.toBe("Hydrogen chloride (HCl)");
-    // CAS number of hydrogen bromide, 10035-10-6 (CAS Registry, as in molecules/hbr.yaml).
-    await page.fill("#q", "10035-10-6");
+    // CAS number of hydrogen iodide, 10034-85-2 (CAS Registry, as in molecules/hi.yaml).
+    await page.fill("#q", "10034-85-2");
     await page.click("form[data-search=name] button");
-    await expect(page.locator("#name-results li a").allTextContents()).resolves.toEqual(["Hydrogen bromide (HBr)"]);
+    await expect(page.locator("#name-results li a").allTextContents()).resolves.toEqual(["Hydrogen iodide (HI)"]);
     await page.locator("#name-results li a").first().click();
-    await page.waitForURL(/molecules\/hbr\//);
-    await expect(page.locator("h1").textContent()).resolves.toContain("Hydrogen bromide");
+    await page.waitForURL(/molecules\/hi\//);
+    await expect(page.locator("h1").textContent()).resolves.toContain("Hydrogen iodide");
     await expect(page.locator(".caution").count()).resolves.toBe(1);
   });
 

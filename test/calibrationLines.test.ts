@@ -41,17 +41,28 @@ describe("calibration-grade lines", () => {
       return result.lines.length;
     });
     for (let i = 1; i < counts.length; i++) expect(counts[i]).toBeLessThanOrEqual(counts[i - 1]);
-    // CO 1-0 lines are 3.5–4.5 cm⁻¹ apart (fact of the trade), so at 4 cm⁻¹ only the wide P-branch gaps survive.
-    expect(counts[0]).toBeGreaterThan(20);
-    expect(counts[4]).toBeLessThan(counts[0] / 3);
+    // Only the cited CRC lines R(0)–R(4), P(1)–P(4) of 12C16O 1-0 validate the constants, so at
+    // most those nine qualify; at 0.125 cm⁻¹ the strong ones among them all do.
+    expect(counts[0]).toBeGreaterThanOrEqual(6);
+    expect(counts[0]).toBeLessThanOrEqual(9);
+    for (const r of calibrationResolutionsCm) {
+      const result = moleculeCalibrationLines(co, { conditions: defaultCellConditions, instrument: { kind: "fourier-transform", resolutionCm: r, apodization: "triangular" } });
+      for (const l of result.lines) {
+        expect(l.species).toBe("12C16O");
+        expect(l.wavenumberUncertainty).toBeLessThanOrEqual(defaultCalibrationCriteria.maxUncertaintyFraction * r);
+      }
+    }
   });
 
-  it("HBr at 0.5 cm⁻¹: no line isolated, the H79Br/H81Br pairs sit a few tenths of a cm⁻¹ apart (fact of the trade)", () => {
-    const hbr = molecules.find((m) => m.id === "hbr")!;
-    const marks = calibrationMarks(hbr);
-    expect(marks.intensityScale).toBe("relative-thin");
-    expect(marks.byResolution.find((b) => b.resolutionCm === 0.5)!.lines).toEqual([]);
-    expect(marks.byResolution.find((b) => b.resolutionCm === 0.125)!.lines.length).toBeGreaterThan(10);
+  it("a line outside the validated J range, or with a ± above R/50, is not calibration grade", () => {
+    const lines = [line(2100, 1, "R(0)"), { ...line(2110, 1, "R(1)"), positionStatus: "extrapolated" as const }, { ...line(2120, 1, "R(2)"), wavenumberUncertainty: 0.03 }];
+    expect(calibrationLines(lines, thin(lines, 1), 1).map((l) => l.label)).toEqual(["R(0)"]);
+    expect(calibrationLines(lines, thin(lines, 2), 2).map((l) => l.label)).toEqual(["R(0)", "R(2)"]);
+  });
+
+  it("HCl: no line is calibration grade while no cited measured line validates its constants", () => {
+    const hcl = molecules.find((m) => m.id === "hcl")!;
+    for (const r of calibrationMarks(hcl).byResolution) expect(r.lines).toEqual([]);
   });
 
   it("the CLI lists the same lines and shifts as the atlas, to the printed digits", async () => {

@@ -164,8 +164,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       const downloads = perMolecule("downloads", molecule, () =>
         entriesOf.get(molecule.id)!.flatMap((entry) =>
           entry.bands.flatMap((band) => [
-            [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"), linesCsv(band.lines)],
-            [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"), JSON.stringify(linesDocument(entry.moleculeId, band.lines), null, 2) + "\n"],
+            [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"), linesCsv(band.lines, molecule.limitations)],
+            [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"), JSON.stringify(linesDocument(entry.moleculeId, band.lines, molecule.limitations), null, 2) + "\n"],
           ]),
         ),
       );

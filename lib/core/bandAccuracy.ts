@@ -3,7 +3,7 @@ import { CoreInputError } from "./coreInputError.ts";
 import { runningIndex } from "./hoenlLondon.ts";
 import { linearStateExpansion } from "./linearStateTerms.ts";
 import { termFromExpansion, termValue } from "./termValues.ts";
-import type { Band, BandAccuracy, BandCheck, Branch, ReferenceLine, SpeciesModel, SpeciesValidation } from "./types.ts";
+import type { Band, BandAccuracy, BandCheck, Branch, ReferenceLine, ResidualEnvelope, SpeciesModel, SpeciesValidation } from "./types.ts";
 
 /** Branch and J'' of a label "R(3)" / "P(1)" (R: J' = J''+1, P: J' = J''−1). */
 export function parseLineLabel(label: string): { branch: Branch; jLower: number; jUpper: number } {
@@ -49,6 +49,30 @@ function absM(line: ReferenceLine): number {
   return Math.abs(runningIndex(branch, jLower));
 }
 
+/** Running maximum of |residual| over increasing |m|. */
+export function residualEnvelope(points: ReadonlyArray<{ absM: number; residualCm: number }>): ResidualEnvelope {
+  const sorted = [...points].sort((a, b) => a.absM - b.absM);
+  const out: ResidualEnvelope = [];
+  let running = 0;
+  for (const p of sorted) {
+    running = Math.max(running, Math.abs(p.residualCm));
+    if (out.length && out[out.length - 1].absM === p.absM) out[out.length - 1].residualCm = running;
+    else out.push({ absM: p.absM, residualCm: running });
+  }
+  return out;
+}
+
+/** The envelope's value at |m|: the last point at or below it (the first point below the range). */
+export function envelopeAt(envelope: ResidualEnvelope, absMValue: number): number {
+  if (envelope.length === 0) return 0;
+  let value = envelope[0].residualCm;
+  for (const p of envelope) {
+    if (p.absM > absMValue) break;
+    value = p.residualCm;
+  }
+  return value;
+}
+
 /** One check per band (pure-rotation lines, v' = v'', form a band of their own) of a species' measured lines. */
 export function bandChecks(species: SpeciesModel): BandCheck[] {
   const groups: Array<{ band: Band; residuals: LineResidual[] }> = [];
@@ -69,6 +93,7 @@ export function bandChecks(species: SpeciesModel): BandCheck[] {
       rmsResidualCm: Math.sqrt(deltas.reduce((s, d) => s + d * d, 0) / deltas.length),
       maxAbsResidualCm: Math.max(...deltas.map(Math.abs)),
       sourceKeys: [...new Set(residuals.map((r) => r.reference.sourceKey))],
+      envelope: residualEnvelope(residuals.map((r, i) => ({ absM: ms[i], residualCm: r.predictedMinusMeasured }))),
     };
   });
 }
@@ -80,22 +105,23 @@ export function bandChecks(species: SpeciesModel): BandCheck[] {
 export function moleculeValidation(species: readonly SpeciesModel[], constantsFitted: boolean): SpeciesValidation[] {
   const checks = species.map(bandChecks);
   const all = checks.flat();
-  const moleculeMaxAbsResidualCm = all.reduce((m, c) => Math.max(m, c.maxAbsResidualCm), 0);
+  const moleculeEnvelope = residualEnvelope(all.flatMap((c) => c.envelope));
   const constantsTested = constantsFitted || all.length > 0;
-  return checks.map((c) => ({ checks: c, constantsTested, moleculeMaxAbsResidualCm }));
+  return checks.map((c) => ({ checks: c, constantsTested, moleculeEnvelope }));
 }
 
 /**
  * A band's status: validated when measured lines of this species and band were compared with it;
  * extrapolated when the constants were tested on other bands or species only; not validated when
- * no measured line stands behind them. The floor on every line's ± is the largest residual of the
- * band's measured lines, or for a band without its own the largest of the molecule: a printed ±
- * never claims more than the measurements show.
+ * no measured line stands behind them. The floor on a line's ± is the largest residual of measured
+ * lines at its |m| or below (the band's own lines, or for a band without its own the molecule's),
+ * and beyond the measured range the largest of all: a printed ± never claims more than the
+ * measurements show.
  */
 export function bandAccuracy(species: SpeciesModel, band: Band): BandAccuracy {
   const validation = species.validation;
-  if (!validation) return { status: "not-validated", check: null, floorCm: 0 };
+  if (!validation) return { status: "not-validated", check: null, floor: [] };
   const check = validation.checks.find((c) => sameBand(c.band, band)) ?? null;
-  if (check) return { status: "validated", check, floorCm: check.maxAbsResidualCm };
-  return { status: validation.constantsTested ? "extrapolated" : "not-validated", check: null, floorCm: validation.moleculeMaxAbsResidualCm };
+  if (check) return { status: "validated", check, floor: check.envelope };
+  return { status: validation.constantsTested ? "extrapolated" : "not-validated", check: null, floor: validation.moleculeEnvelope };
 }

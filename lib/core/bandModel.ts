@@ -1,4 +1,5 @@
 import { airRefractiveIndexEdlen } from "./airWavelength.ts";
+import { envelopeAt } from "./bandAccuracy.ts";
 import { checkTemperature } from "./band.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { hermanWallisFactor } from "./hermanWallis.ts";
@@ -111,8 +112,8 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
   const hw = model.intensity?.hermanWallis ?? null;
   const propagated = uncertaintyFunction(model.uncertainty);
   const { accuracy } = model;
-  const floorCm = accuracy.floorCm;
-  const uncertaintyOf = (xUpper: number, xLower: number) => Math.max(propagated(xUpper, xLower), floorCm);
+  const floorByAbsM = Float64Array.from({ length: jLimit + 3 }, (_, m) => envelopeAt(accuracy.floor, m));
+  const uncertaintyOf = (xUpper: number, xLower: number, absM: number) => Math.max(propagated(xUpper, xLower), floorByAbsM[absM]);
   const check = accuracy.check;
   const statusOf = (branch: Branch, jLower: number): Line["positionStatus"] => {
     if (accuracy.status !== "validated") return accuracy.status;
@@ -204,7 +205,7 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
       jLower,
       jUpper: isR[i] ? jLower + 1 : jLower - 1,
       wavenumber,
-      wavenumberUncertainty: isR[i] ? uncertaintyOf((jLower + 1) * (jLower + 2), jLower * (jLower + 1)) : uncertaintyOf((jLower - 1) * jLower, jLower * (jLower + 1)),
+      wavenumberUncertainty: isR[i] ? uncertaintyOf((jLower + 1) * (jLower + 2), jLower * (jLower + 1), jLower + 1) : uncertaintyOf((jLower - 1) * jLower, jLower * (jLower + 1), jLower),
       wavelengthVacuumUm: 1e4 / wavenumber,
       wavelengthAirNm: 1e7 / wavenumber / airRefractiveIndexEdlen(wavenumber),
       frequencyThz: wavenumber * speedOfLightMs * 1e-10,

@@ -96,23 +96,31 @@ export interface BandCheck {
   rmsResidualCm: number;
   maxAbsResidualCm: number;
   sourceKeys: string[];
+  /** Running maximum of |residual| with |m|: at each measured |m|, the largest residual at or below it. */
+  envelope: ResidualEnvelope;
 }
+
+/** Points (|m|, largest |residual| at that |m| or below), in increasing |m|. */
+export type ResidualEnvelope = Array<{ absM: number; residualCm: number }>;
 
 /** What a species' predictions were tested against: the basis of every band's accuracy status. */
 export interface SpeciesValidation {
   checks: BandCheck[];
   /** True when the constants were fitted to, or compared with, measured lines of this molecule. */
   constantsTested: boolean;
-  /** Largest |residual| over every measured line of the molecule (any band, any species), cm⁻¹. */
-  moleculeMaxAbsResidualCm: number;
+  /** The residual envelope over every measured line of the molecule (any band, any species). */
+  moleculeEnvelope: ResidualEnvelope;
 }
 
 /** A band's accuracy status, carried by every computed band. */
 export interface BandAccuracy {
   status: "validated" | "extrapolated" | "not-validated";
   check: BandCheck | null;
-  /** No line of the band is given a smaller ± than this (the residuals measured lines show). */
-  floorCm: number;
+  /**
+   * No line is given a smaller ± than the residuals measured lines show at its |m| or below (the
+   * band's own lines when validated, else the molecule's): empty when nothing was measured.
+   */
+  floor: ResidualEnvelope;
 }
 
 /** One isotopologue, ready for the physics: masses resolved, constants as one Y_kl table. */
@@ -127,6 +135,8 @@ export interface SpeciesModel {
   dunham: DunhamCoefficient[];
   constantsOrigin: "cited" | "isotope-scaled" | "fitted";
   constantsSourceKey: string;
+  /** A second published set compared with the constants (its difference is part of every ±). */
+  crossCheckSourceKey?: string;
   intensities: BandIntensityData[];
   referenceLines: ReferenceLine[];
   /** Position error components; absent: each Dunham coefficient's own uncertainty, uncorrelated. */

@@ -4,3 +4,4 @@ export * from "./lineRecords.ts";
 export * from "./linesTable.ts";
 export * from "./spectrumCells.ts";
 export * from "./calibrationText.ts";
+export * from "./accuracyText.ts";

@@ -1,4 +1,5 @@
 import { bandLabel, type BandLines, type Line } from "../core/index.ts";
+import { accuracyRecord, accuracyText } from "./accuracyText.ts";
 import { csvRow, numeric } from "./csv.ts";
 import { fixed, significant } from "./numbers.ts";
 
@@ -10,10 +11,16 @@ export interface LinesDocument {
   temperatureK: number;
   bandOrigin: number;
   partitionFunction: number;
-  lines: Array<Pick<Line, "label" | "branch" | "jLower" | "jUpper" | "wavenumber" | "wavenumberUncertainty" | "wavelengthVacuumUm" | "wavelengthAirNm" | "lowerStateEnergy" | "relativeIntensity" | "lineIntensity" | "populationFraction">>;
+  /** How the band's positions were validated against cited measured lines. */
+  accuracy: ReturnType<typeof accuracyRecord>;
+  /** Known limitations of the molecule's constants, from its file. */
+  limitations: string[];
+  lines: Array<
+    Pick<Line, "label" | "branch" | "jLower" | "jUpper" | "wavenumber" | "wavenumberUncertainty" | "wavelengthVacuumUm" | "wavelengthAirNm" | "lowerStateEnergy" | "relativeIntensity" | "lineIntensity" | "populationFraction" | "positionStatus">
+  >;
 }
 
-export function linesDocument(moleculeId: string, result: BandLines): LinesDocument {
+export function linesDocument(moleculeId: string, result: BandLines, limitations: readonly string[] = []): LinesDocument {
   return {
     molecule: moleculeId,
     species: result.species,
@@ -21,6 +28,8 @@ export function linesDocument(moleculeId: string, result: BandLines): LinesDocum
     temperatureK: result.temperatureK,
     bandOrigin: result.bandOrigin,
     partitionFunction: result.partitionFunction,
+    accuracy: accuracyRecord(result.accuracy),
+    limitations: [...limitations],
     lines: result.lines.map((l) => ({
       label: l.label,
       branch: l.branch,
@@ -34,6 +43,7 @@ export function linesDocument(moleculeId: string, result: BandLines): LinesDocum
       relativeIntensity: l.relativeIntensity,
       lineIntensity: l.lineIntensity,
       populationFraction: l.populationFraction,
+      positionStatus: l.positionStatus,
     })),
   };
 }
@@ -52,6 +62,7 @@ export const linesCsvHeader = [
   "relativeIntensity",
   "lineIntensity (cm/molecule)",
   "populationFraction",
+  "positionStatus",
 ];
 
 /** The printed digits of each line, the same in CSV, table, page and sheet. */
@@ -68,15 +79,20 @@ export function lineCells(l: Line) {
   };
 }
 
-export function linesCsv(result: BandLines): string {
-  const rows = [csvRow(linesCsvHeader)];
+/**
+ * CSV of one band: comment lines (starting "#") with the band's accuracy status and the molecule's
+ * known limitations, then the header and one row per line.
+ */
+export function linesCsv(result: BandLines, limitations: readonly string[] = []): string {
+  const comments = [`# accuracy: ${accuracyText(result.accuracy)}`, ...limitations.map((l) => `# known limitation: ${l}`)];
+  const rows = [...comments.map((c) => c.replace(/[\r\n]+/g, " ")), csvRow(linesCsvHeader)];
   for (const l of result.lines) {
     const c = lineCells(l);
     rows.push(
       csvRow([
         l.label, l.branch, l.jLower, l.jUpper,
         numeric(c.wavenumber), numeric(c.wavenumberUncertainty), numeric(c.wavelengthVacuumUm), numeric(c.wavelengthAirNm),
-        numeric(c.lowerStateEnergy), numeric(c.relativeIntensity), numeric(c.lineIntensity), numeric(c.populationFraction),
+        numeric(c.lowerStateEnergy), numeric(c.relativeIntensity), numeric(c.lineIntensity), numeric(c.populationFraction), l.positionStatus,
       ]),
     );
   }

@@ -1,4 +1,5 @@
 import { bandLabel, type BandLines } from "../core/index.ts";
+import { accuracyText, positionStatusWords } from "./accuracyText.ts";
 import { lineCells } from "./lineRecords.ts";
 import { significant } from "./numbers.ts";
 
@@ -35,13 +36,14 @@ export function linesTable(result: BandLines, context: LinesTableContext): strin
     `band origin ${result.bandOrigin.toFixed(4)} cm⁻¹; partition function Q = ${significant(result.partitionFunction, 6)}; ${result.lines.length} lines, J'' up to ${result.jLowerMax}`,
     `constants: ${context.constantsNote}`,
     intensity,
+    `accuracy: ${accuracyText(result.accuracy)}`,
     ...(context.limitations ?? []).map((l) => `KNOWN LIMITATION: ${l}`),
     "",
   ];
   const rows = result.lines.map((l) => {
     const c = lineCells(l);
-    return [l.label, c.wavenumber, c.wavenumberUncertainty, c.wavelengthVacuumUm, c.wavelengthAirNm, c.lowerStateEnergy, c.relativeIntensity, c.lineIntensity || "—", c.populationFraction];
+    return [l.label, c.wavenumber, c.wavenumberUncertainty, positionStatusWords[l.positionStatus], c.wavelengthVacuumUm, c.wavelengthAirNm, c.lowerStateEnergy, c.relativeIntensity, c.lineIntensity || "—", c.populationFraction];
   });
-  const headings = ["line", "ν̃ / cm⁻¹", "± / cm⁻¹", "λ vac / µm", "λ air / nm", "E'' / cm⁻¹", "rel. int.", "S / cm·molecule⁻¹", "pop. fraction"];
-  return header.join("\n") + textTable(headings, rows, [false, true, true, true, true, true, true, true, true]) + "\n";
+  const headings = ["line", "ν̃ / cm⁻¹", "± / cm⁻¹", "position", "λ vac / µm", "λ air / nm", "E'' / cm⁻¹", "rel. int.", "S / cm·molecule⁻¹", "pop. fraction"];
+  return header.join("\n") + textTable(headings, rows, [false, true, true, false, true, true, true, true, true, true]) + "\n";
 }

@@ -96,6 +96,7 @@ export function buildMolecule(file: MoleculeFile, fileName: string, fileFit: Fil
       positionErrors: constants.positionErrors,
       constantsOrigin: constants.origin,
       constantsSourceKey: (entry.constants ?? referenceBlock).source,
+      ...((entry.constants ?? referenceBlock).crossCheck ? { crossCheckSourceKey: (entry.constants ?? referenceBlock).crossCheck!.source } : {}),
       intensities: [],
       referenceLines: [],
     };

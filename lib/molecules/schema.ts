@@ -111,6 +111,8 @@ export const massIndependentSchema = mapping(
     breakdown: breakdownSchema.optional(),
     /** Electron mass the source used in (1 + m_e Δ/M), in u. */
     electronMassU: numberIn("u").positive().optional(),
+    /** Atomic masses the source fitted with, by isotope ("12C": 12); others from the isotope library. */
+    atomMassesU: z.record(z.string().regex(/^\d{1,3}[A-Z][a-z]?$/, { error: "an isotope is written mass number then symbol, e.g. 12C, 16O" }), numberIn("u").positive()).optional(),
     /** The unit the source prints U_kl in (times u^(k/2+l)); MHz is converted with the exact c. */
     unit: z.enum(["cm-1", "MHz"], { error: () => `expected the unit cm-1 or MHz` }).optional(),
   },

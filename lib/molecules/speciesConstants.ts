@@ -32,6 +32,9 @@ export interface SpeciesConstants {
  * (J. K. G. Watson, J. Mol. Spectrosc. 80, 411 (1980); the form of the mass-independent fits of CO).
  */
 export function dunhamFromMassIndependent(set: MassIndependent, atoms: readonly string[], masses: SpeciesMasses): DunhamCoefficient[] {
+  // The U_kl were fitted with the source's own atomic masses; where it states them, use them.
+  const atomMassesU = atoms.map((symbol, i) => set.atomMassesU?.[`${masses.massNumbers[i]}${symbol}`] ?? masses.atomMassesU[i]);
+  const mu = (atomMassesU[0] * atomMassesU[1]) / (atomMassesU[0] + atomMassesU[1]);
   const me = set.electronMassU ?? electronMassU;
   // 1 cm⁻¹ = c × 100 Hz = 29 979.2458 MHz exactly (c is exact in the SI).
   const toCm = set.unit === "MHz" ? 1 / (speedOfLightMs * 1e-4) : 1;
@@ -42,9 +45,9 @@ export function dunhamFromMassIndependent(set: MassIndependent, atoms: readonly 
     let breakdown = 1;
     atoms.forEach((atom, i) => {
       const delta = set.breakdown?.[atom]?.[`D${k}${l}`];
-      if (delta !== undefined) breakdown += (me * delta) / masses.atomMassesU[i];
+      if (delta !== undefined) breakdown += (me * delta) / atomMassesU[i];
     });
-    const factor = Math.pow(masses.reducedMassU, -(k / 2 + l)) * breakdown * toCm;
+    const factor = Math.pow(mu, -(k / 2 + l)) * breakdown * toCm;
     return { k, l, valueCm: u.value * factor, uncertaintyCm: u.uncertainty * factor };
   });
 }

@@ -124,6 +124,7 @@ function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number, 
     roles.set(key, list);
   };
   add(model.constantsSourceKey, model.constantsOrigin === "cited" ? "constants" : `constants of ${molecule.species[0].model.label}`);
+  if (model.crossCheckSourceKey) add(model.crossCheckSourceKey, "cross-check of the constants");
   for (const i of model.intensities) if (sameBand(i.band, band)) add(i.sourceKey, "intensities");
   for (const r of entry.residuals) add(r.reference.sourceKey, "measured lines");
   return [...roles.entries()].map(([key, list]) => {

@@ -25,6 +25,7 @@ Wavenumbers are vacuum cm⁻¹; air wavelengths are for standard air (Edlén 196
 export function describeConstants(molecule: Molecule, species: SpeciesInfo): string {
   const source = molecule.sources.find((s) => s.key === species.model.constantsSourceKey);
   const cite = source ? source.citation : species.model.constantsSourceKey;
+  if (species.model.constantsOrigin === "fitted") return `fitted by bandatlas fit to cited measured lines (${cite})`;
   return species.model.constantsOrigin === "cited" ? `cited for ${species.model.label}: ${cite}` : `scaled from ${molecule.species[0].model.label} by Dunham's isotope relations; reference constants: ${cite}`;
 }
 
@@ -45,7 +46,7 @@ export function runLines(args: string[]): string {
   const species = selectSpecies(molecule, values.species as string | undefined);
   const band = resolveBand(molecule, species, values.band as string | undefined);
   const result = bandOf(species, band, temperatureK, minRelative);
-  if (format === "json") return JSON.stringify(linesDocument(molecule.id, result), null, 2) + "\n";
-  if (format === "csv") return linesCsv(result);
+  if (format === "json") return JSON.stringify(linesDocument(molecule.id, result, molecule.limitations), null, 2) + "\n";
+  if (format === "csv") return linesCsv(result, molecule.limitations);
   return linesTable(result, { moleculeName: molecule.name, formula: molecule.formula, constantsNote: describeConstants(molecule, species), limitations: molecule.limitations });
 }
