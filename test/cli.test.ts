@@ -14,8 +14,10 @@ describe("bandatlas lines", () => {
     expect(exitCode).toBe(0);
     const doc = JSON.parse(stdout);
     expect(doc).toMatchObject({ molecule: "co", species: "12C16O", band: "1-0", temperatureK: 296 });
-    const keys = ["label", "branch", "jLower", "jUpper", "wavenumber", "wavenumberUncertainty", "wavelengthVacuumUm", "wavelengthAirNm", "lowerStateEnergy", "relativeIntensity", "lineIntensity", "populationFraction"];
+    const keys = ["label", "branch", "jLower", "jUpper", "wavenumber", "wavenumberUncertainty", "wavelengthVacuumUm", "wavelengthAirNm", "lowerStateEnergy", "relativeIntensity", "lineIntensity", "populationFraction", "positionStatus"];
     for (const line of doc.lines) expect(Object.keys(line)).toEqual(keys);
+    expect(doc.accuracy).toMatchObject({ status: "validated", measuredLines: 9, absMMin: 1, absMMax: 5, sources: ["makiCrc"] });
+    expect(doc.limitations).toEqual([]);
     const r0 = doc.lines.find((l: { label: string }) => l.label === "R(0)");
     // CRC Handbook, Maki table of CO 1-0 wavenumbers: R(0) = 2147.081132 cm⁻¹ (read directly).
     expect(r0).toMatchObject({ branch: "R", jLower: 0, jUpper: 1 });
@@ -25,7 +27,8 @@ describe("bandatlas lines", () => {
   it("prints CSV with units in the header for another species, band and temperature", async () => {
     const { stdout, exitCode } = await cli("lines", "hcl", "--species", "H37Cl", "--band", "2-0", "--temperature", "500", "--format", "csv");
     expect(exitCode).toBe(0);
-    const [header, ...rows] = stdout.trim().split("\n");
+    const [comment, header, ...rows] = stdout.trim().split("\n");
+    expect(comment).toMatch(/^# accuracy: not validated/);
     expect(header).toContain("wavenumber (cm-1)");
     expect(header).toContain("wavelengthAir (nm)");
     // The HCl first overtone lies near 5668 cm⁻¹ for H35Cl (Huber & Herzberg 1979, from memory); H37Cl ~4 cm⁻¹ lower.

@@ -43,18 +43,23 @@ describe("page data", () => {
       expect(Math.abs(toNumber(row.measuredMinusPredicted!))).toBeLessThan(0.01);
     }
     expect(fundamental.hasResiduals).toBe(true);
-    expect(fundamental.rows.filter((r) => r.measuredMinusPredicted !== null)).toHaveLength(8);
+    expect(fundamental.rows.filter((r) => r.measuredMinusPredicted !== null)).toHaveLength(9);
     expect(bandView(entry, entry.bands[3]).hasResiduals).toBe(false); // no cited 2-0 lines
   });
 
-  it("finds the largest residual per molecule with reference lines", () => {
+  it("gives every shipped band an accuracy row, with the largest residual of the validated ones", () => {
     const entries = molecules.flatMap((m) => m.species.map((s) => atlasEntry(m, s, 296)));
     const rows = accuracyRows(molecules, entries);
-    const coRow = rows.find((r) => r.moleculeId === "co")!;
-    expect(coRow.referenceLineCount).toBe(8);
+    for (const e of entries) for (const b of e.bands) expect(rows.some((r) => r.species === e.species && r.band === b.label)).toBe(true);
+    const coRow = rows.find((r) => r.species === "12C16O" && r.band === "1-0")!;
+    expect(coRow.status).toBe("validated");
+    expect(coRow.lines).toBe("9");
     const all = fundamental.rows.filter((r) => r.measuredMinusPredicted !== null).map((r) => Math.abs(toNumber(r.measuredMinusPredicted!)));
-    expect(Math.abs(toNumber(coRow.worst!.measuredMinusPredicted))).toBeCloseTo(Math.max(...all), 6);
-    for (const r of rows) expect(r.referenceLineCount).toBeGreaterThan(0);
+    // The row is printed to 2 significant figures, the page cells too.
+    expect(Number(coRow.largest)).toBeCloseTo(Math.max(...all), 6);
+    expect(rows.find((r) => r.species === "12C16O" && r.band === "2-0")!.status).toBe("extrapolated");
+    expect(rows.find((r) => r.species === "1H35Cl" && r.band === "1-0")!.status).toBe("not validated");
+    expect(rows.find((r) => r.species === "1H19F" && r.band === "0-0 (pure rotation)")!.lines).toBe("27");
   });
 
   it("writes species as chemists do and links relatively", () => {

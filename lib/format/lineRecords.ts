@@ -80,12 +80,14 @@ export function lineCells(l: Line) {
 }
 
 /**
- * CSV of one band: comment lines (starting "#") with the band's accuracy status and the molecule's
- * known limitations, then the header and one row per line.
+ * CSV of one band: comment lines (starting "#", which common readers skip) with the band's accuracy
+ * status and the molecule's known limitations, then the header and one row per line. A comment is
+ * kept to one cell: commas become semicolons and quotes and line breaks are dropped, so no text of
+ * a molecule file can start a second cell that a spreadsheet would read as a formula.
  */
 export function linesCsv(result: BandLines, limitations: readonly string[] = []): string {
   const comments = [`# accuracy: ${accuracyText(result.accuracy)}`, ...limitations.map((l) => `# known limitation: ${l}`)];
-  const rows = [...comments.map((c) => c.replace(/[\r\n]+/g, " ")), csvRow(linesCsvHeader)];
+  const rows = [...comments.map((c) => c.replace(/,/g, ";").replace(/["\r\n]+/g, " ")), csvRow(linesCsvHeader)];
   for (const l of result.lines) {
     const c = lineCells(l);
     rows.push(

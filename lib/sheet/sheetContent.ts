@@ -1,6 +1,6 @@
 import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
-import { sameBand, type Band, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
-import { calibrationConditionsText, criteriaPhrase, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
+import { sameBand, type Band, type BandLines, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
+import { accuracyText, calibrationConditionsText, criteriaPhrase, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
 import { describeBuild } from "../build/buildIdentity.ts";
@@ -141,19 +141,10 @@ function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number, 
   });
 }
 
-function accuracyOf(entry: AtlasEntry, lines: Line[]): string {
-  const checked = entry.residuals.filter((r) => r.predictedMinusMeasured !== null);
-  const largestUncertainty = Math.max(0, ...lines.map((l) => l.wavenumberUncertainty));
-  const propagated =
-    largestUncertainty > 0 ? ` Position uncertainty propagated from the constants' uncertainties: at most ±${significant(largestUncertainty, 2)} cm⁻¹ in this table.` : "";
-  if (!checked.length) return `Not checked against measured lines (the molecule file cites none for this species).${propagated}`;
-  let worst = checked[0];
-  for (const r of checked) if (Math.abs(r.predictedMinusMeasured!) > Math.abs(worst.predictedMinusMeasured!)) worst = r;
-  const bands = [...new Set(checked.map((r) => `${r.reference.band.vUpper}-${r.reference.band.vLower}`))].join(", ");
-  return (
-    `Checked against ${checked.length} measured line${checked.length === 1 ? "" : "s"} (band ${bands}); largest |predicted − measured| = ` +
-    `${significant(Math.abs(worst.predictedMinusMeasured!), 2)} cm⁻¹ at ${displayText(worst.reference.label)}.${propagated}`
-  );
+function accuracyOf(result: BandLines): string {
+  const sigmas = result.lines.map((l) => l.wavenumberUncertainty);
+  const range = sigmas.length ? ` Position ± in this table: ${significant(Math.min(...sigmas), 2)} to ${significant(Math.max(...sigmas), 2)} cm⁻¹ (constants' uncertainties, the terms they leave out, never below the measured residuals).` : "";
+  return `Accuracy: ${displayText(accuracyText(result.accuracy))}.${range}`;
 }
 
 function otherBandsNoteOf(entry: AtlasEntry): string | null {
@@ -207,7 +198,7 @@ export function sheetContent(input: SheetContentInput): SheetContent {
     limitationsNote: molecule.limitations.length ? `Known limitation of these constants: ${molecule.limitations.map(displayText).join(" ")}` : null,
     sources: sourcesOf(molecule, entry, speciesIndex, bandLines.band),
     modelText: `${termModel(model)}; Boltzmann populations with (2J + 1) degeneracy and Q summed over the computed levels; Hönl–London factors; ${constants}; ${intensity}.`,
-    accuracyText: accuracyOf(entry, bandLines.lines),
+    accuracyText: accuracyOf(bandLines),
     documentTitle: `${title} ${entry.species} ${fundamental.label} band at ${entry.temperatureK} K — bench sheet`,
   };
 }

@@ -1,6 +1,6 @@
 import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
-import { calibrationByLine, calibrationCellText, calibrationConditionsText, calibrationCriteriaText, calibrationLineKey, fixed, resolutionsText, significant, type LineCalibration } from "../format/index.ts";
+import { accuracyText, calibrationByLine, calibrationCellText, positionStatusWords, calibrationConditionsText, calibrationCriteriaText, calibrationLineKey, fixed, resolutionsText, significant, type LineCalibration } from "../format/index.ts";
 import { lineShapeNames, type BenchSettings } from "../browser/benchSettings.ts";
 import { bandLabel, standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
@@ -123,6 +123,7 @@ export function bandView(entry: AtlasEntry, band: AtlasBand, calibration?: Map<s
       label: line.label,
       branch: line.branch,
       ...pageLineCells(line),
+      position: positionStatusWords[line.positionStatus],
       // The table shows measured − predicted (the atlas stores predicted − measured).
       measuredMinusPredicted: residual === undefined ? null : signedSignificant(-residual, 2),
       calibration: calibrationOf(line.label),
@@ -138,6 +139,8 @@ export function bandView(entry: AtlasEntry, band: AtlasBand, calibration?: Map<s
     strength: band.kind === "fundamental" || band.strengthRelativeToFundamental === null ? null : significant(band.strengthRelativeToFundamental, 2),
     shownWithFundamental: band.shownWithFundamental,
     intensityNote: intensityNote(band),
+    accuracy: accuracyText(band.lines.accuracy),
+    accuracyStatus: band.lines.accuracy.status,
     truncationNote: truncationNote(band),
     hasResiduals: residualByLabel.size > 0,
     downloads: {
@@ -246,36 +249,40 @@ export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: En
 
 export type SpeciesPageView = ReturnType<typeof speciesPageView>;
 
-/** The method page's accuracy table: the largest |measured − predicted| of every molecule with reference lines. */
+/**
+ * The method page's accuracy table: every band the atlas builds, of every species, with its status
+ * and the residuals against cited measured lines; pure-rotation checks get rows of their own.
+ */
 export function accuracyRows(molecules: Molecule[], entries: AtlasEntry[]) {
   const rows = [];
   for (const molecule of molecules) {
-    // Residuals do not depend on temperature: one entry per species is enough.
-    const perSpecies = entries.filter((e) => e.moleculeId === molecule.id && e.temperatureK === defaultTemperatureK);
-    const residuals = perSpecies.flatMap((e) => e.residuals.map((r) => ({ species: e.species, r })));
-    const compared = residuals.filter((x) => x.r.predictedMinusMeasured !== null);
-    if (!residuals.length) continue;
-    const worst = compared.reduce<(typeof compared)[number] | null>((w, x) => (w === null || Math.abs(x.r.predictedMinusMeasured!) > Math.abs(w.r.predictedMinusMeasured!) ? x : w), null);
-    rows.push({
-      moleculeId: molecule.id,
-      moleculeName: molecule.name,
-      formula: molecule.formula,
-      path: moleculePagePath(molecule.id),
-      referenceLineCount: residuals.length,
-      unmatched: residuals.length - compared.length,
-      worst: worst
-        ? {
-            species: worst.species,
-            band: bandLabel(worst.r.reference.band),
-            label: worst.r.reference.label,
-            measured: String(worst.r.reference.wavenumber),
-            measuredMinusPredicted: signedSignificant(-worst.r.predictedMinusMeasured!, 2),
-            path: speciesPagePath(molecule.id, worst.species, defaultTemperatureK),
-            rowId: lineRowId(bandLabel(worst.r.reference.band), worst.r.reference.label),
-            source: citationOf(molecule, worst.r.reference.sourceKey),
-          }
-        : null,
-    });
+    // Positions and their checks do not depend on temperature: the default-temperature entry is enough.
+    for (const entry of entries.filter((e) => e.moleculeId === molecule.id && e.temperatureK === defaultTemperatureK)) {
+      const species = molecule.species.find((s) => s.model.label === entry.species)!;
+      const path = speciesPagePath(molecule.id, entry.species, defaultTemperatureK);
+      const row = (band: string, accuracy: AtlasBand["lines"]["accuracy"], anchor: string | null) => {
+        const c = accuracy.check;
+        return {
+          moleculeName: molecule.name,
+          formula: molecule.formula,
+          species: entry.species,
+          band,
+          path,
+          anchor,
+          status: positionStatusWords[accuracy.status === "validated" ? "validated" : accuracy.status],
+          lines: c ? `${c.lineCount}${c.heldOutCount ? ` (${c.heldOutCount} held out)` : ""}` : "—",
+          range: c ? (c.absMMin === c.absMMax ? String(c.absMMin) : `${c.absMMin}–${c.absMMax}`) : "—",
+          largest: c ? significant(c.maxAbsResidualCm, 2) : "—",
+          rms: c ? significant(c.rmsResidualCm, 2) : "—",
+          sources: c ? c.sourceKeys.map((key) => citationOf(molecule, key)) : [],
+        };
+      };
+      for (const band of entry.bands) rows.push(row(band.label, band.lines.accuracy, `band-${band.label}`));
+      for (const check of species.model.validation?.checks ?? []) {
+        if (check.band.vUpper !== check.band.vLower) continue;
+        rows.push(row(`${bandLabel(check.band)} (pure rotation)`, { status: "validated", check, floor: check.envelope }, null));
+      }
+    }
   }
   return rows;
 }
