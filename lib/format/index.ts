@@ -5,3 +5,4 @@ export * from "./linesTable.ts";
 export * from "./spectrumCells.ts";
 export * from "./calibrationText.ts";
 export * from "./accuracyText.ts";
+export * from "./fitReport.ts";

@@ -11,3 +11,9 @@ export function significant(value: number | null, digits: number): string {
   if (magnitude >= 1e-3 && magnitude < 1e5) return Number(value.toPrecision(digits)).toString();
   return value.toExponential(digits - 1);
 }
+
+/** A signed number for residual columns: "+0.0012", "−0.00034" (true minus sign). */
+export function signedSignificant(value: number, digits: number): string {
+  const text = significant(Math.abs(value), digits);
+  return (value < 0 ? "−" : "+") + text;
+}

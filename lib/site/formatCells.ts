@@ -1,11 +1,7 @@
 import type { Line } from "../core/index.ts";
-import { lineCells, significant } from "../format/index.ts";
+import { lineCells } from "../format/index.ts";
 
-/** A signed number for residual columns: "+0.0012", "−0.00034" (true minus sign). */
-export function signedSignificant(value: number, digits: number): string {
-  const text = significant(Math.abs(value), digits);
-  return (value < 0 ? "−" : "+") + text;
-}
+export { signedSignificant } from "../format/index.ts";
 
 /** The cells of one table row on a page: the same digits as the CSV, text dashes for "none". */
 export function pageLineCells(line: Line) {

@@ -1,0 +1,102 @@
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
+import { isMap, parseDocument } from "yaml";
+import { dunhamTermName, termSupport } from "../../core/index.ts";
+import { fitReportText, termSupportRule, type FitReport } from "../../format/index.ts";
+import { fitDecimals, MoleculeFileError, parseMoleculeBytes, type FileFit, type MoleculeFile } from "../../molecules/index.ts";
+import { SheetInputError, writeFileAtomic } from "../../sheet/index.ts";
+import { moleculesDir } from "../moleculeSource.ts";
+import { formatOption, parseCommandLine } from "../options.ts";
+import { UsageError } from "../usageError.ts";
+
+export const fitHelp = `bandatlas fit <molecule | file.yaml> [options]
+
+Fits the constants a molecule file's \`fit\` block names to the cited measured lines it names
+(weighted least squares by singular value decomposition, each line weighted by 1/σ²) and reports
+the constants with their standard uncertainties, the correlation matrix, every line's residual
+(held-out lines included), the RMS and χ²/ν, and which terms the data support.
+
+  --write                 write the fitted values into the file's \`result\` (comments are kept)
+  --format table|json     table (default) or JSON
+  --molecules <dir>       read <molecule>.yaml from <dir> instead of the shipped folder
+
+The build and \`bandatlas check\` fit every such file again and refuse one whose written result
+differs from the fit.`;
+
+function filePath(dir: string, name: string): string {
+  return name.endsWith(".yaml") ? name : join(dir, `${name.toLowerCase()}.yaml`);
+}
+
+export function dunhamFitReport(file: MoleculeFile, fileName: string, fileFit: FileFit): FitReport {
+  const { fit, observations, names } = fileFit;
+  const support = termSupport(observations, fit);
+  const heldOut = fit.residuals.filter((r) => r.observation.heldOut);
+  return {
+    molecule: file.id,
+    file: fileName,
+    parameters: names.map((name, i) => ({ name, value: fit.solution.parameters[i], uncertainty: fit.solution.uncertainties[i], significance: support.fitted[i].significance, supported: support.fitted[i].supported })),
+    correlation: fit.solution.correlation,
+    lines: fit.residuals.map((r) => ({
+      species: r.observation.species,
+      band: r.observation.band,
+      label: r.observation.label,
+      measured: r.observation.wavenumberCm,
+      uncertainty: r.observation.uncertaintyCm,
+      calculated: r.calculatedCm,
+      residual: r.residualCm,
+      normalized: r.normalized,
+      heldOut: r.observation.heldOut,
+      source: r.observation.sourceKey,
+    })),
+    fittedCount: fit.fittedCount,
+    heldOutCount: fit.heldOutCount,
+    degreesOfFreedom: fit.solution.degreesOfFreedom,
+    rmsCm: fit.rmsCm,
+    reducedChiSquared: fit.solution.reducedChiSquared,
+    heldOutRmsCm: heldOut.length ? Math.sqrt(heldOut.reduce((s, r) => s + r.residualCm ** 2, 0) / heldOut.length) : null,
+    nextTerms: support.next.map((t) => ({ name: dunhamTermName(t.term), significance: t.significance, supported: t.supported })),
+    rule: termSupportRule,
+  };
+}
+
+/** The file's text with the fit's result written in, everything else (comments included) kept. */
+export function withFitResult(text: string, path: Array<string | number>, report: FitReport): string {
+  const doc = parseDocument(text, { version: "1.2" });
+  const result = doc.createNode(
+    Object.fromEntries(report.parameters.map((p) => [p.name, { value: Number(p.value.toFixed(fitDecimals(p.uncertainty))), uncertainty: Number(p.uncertainty.toPrecision(3)) }])),
+  );
+  if (isMap(result)) for (const item of result.items) if (isMap(item.value)) item.value.flow = true;
+  doc.setIn([...path, "result"], result);
+  return doc.toString({ lineWidth: 0, flowCollectionPadding: false });
+}
+
+export function runFit(args: string[]): { output: string; exitCode: number } {
+  const { values, positionals } = parseCommandLine("fit", args, { write: { type: "boolean" }, format: { type: "string" }, molecules: { type: "string" } }, 1);
+  if (values.help) return { output: fitHelp + "\n", exitCode: 0 };
+  if (positionals.length === 0) throw new UsageError("which molecule? e.g. `bandatlas fit c2h2` (see bandatlas fit --help)");
+  const format = formatOption(values.format as string | undefined, ["table", "json"]);
+  const path = filePath(moleculesDir(values.molecules as string | undefined), positionals[0]);
+  let bytes: Uint8Array;
+  try {
+    bytes = readFileSync(path);
+  } catch {
+    throw new UsageError(`no molecule file ${path}`);
+  }
+  const expectedId = path.replace(/^.*[\\/]/, "").replace(/\.yaml$/, "");
+  const parsed = parseMoleculeBytes(bytes, path, expectedId, { checkFitResult: false });
+  if (!parsed.ok) throw new MoleculeFileError(parsed.problems);
+  if (!parsed.fileFit) throw new UsageError(`${path} has no \`fit\` block: its constants are cited, not fitted (see DEVELOPERS.md, "Fitting constants to measured lines")`);
+  const report = dunhamFitReport(parsed.data as MoleculeFile, path, parsed.fileFit);
+  let note = "";
+  if (values.write) {
+    try {
+      writeFileAtomic(path, new TextEncoder().encode(withFitResult(new TextDecoder().decode(bytes), ["species", parsed.fileFit.referenceIndex, "constants", "fit"], report)));
+    } catch (error) {
+      if (error instanceof SheetInputError) throw new UsageError(error.message);
+      throw error;
+    }
+    note = `\nwrote the result into ${path}\n`;
+  }
+  if (format === "json") return { output: JSON.stringify(report, null, 2) + "\n", exitCode: 0 };
+  return { output: fitReportText(report) + note, exitCode: 0 };
+}
