@@ -46,7 +46,7 @@ describe("bandatlas lines", () => {
     expect(stdout).toMatch(/R\(0\)\s+2147\.081/);
   });
   const bad: Array<[string[], RegExp]> = [
-    [["lines", "xenon"], /unknown molecule "xenon"; the atlas has: co/],
+    [["lines", "xenon"], /unknown molecule "xenon"; the atlas has: c2h2, co/],
     [["lines", "co", "--species", "14C16O"], /no species "14C16O"; it has: 12C16O/],
     [["lines", "co", "--band", "1-1"], /upper level v' must be above the lower level/],
     [["lines", "co", "--band", "0-1"], /upper level v' must be above the lower level/],

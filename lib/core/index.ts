@@ -40,3 +40,4 @@ export * from "./cellTransmittance.ts";
 export * from "./calibrationLines.ts";
 export * from "./weightedLeastSquares.ts";
 export * from "./dunhamFit.ts";
+export * from "./linearStateFit.ts";

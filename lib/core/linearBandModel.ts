@@ -4,7 +4,7 @@ import type { BandModel, PositionUncertainty } from "./bandModel.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { linearPartitionFunction } from "./linearPartitionFunction.ts";
 import { linearStateExpansion } from "./linearStateTerms.ts";
-import type { LinearState } from "./linearTypes.ts";
+import type { LinearSpeciesData, LinearState } from "./linearTypes.ts";
 import { nuclearSpinWeight } from "./nuclearSpinWeights.ts";
 import type { Band, SpeciesModel, TemperatureK } from "./types.ts";
 
@@ -34,6 +34,16 @@ function linearPositionUncertainty(upper: LinearState, lower: LinearState): Posi
   };
 }
 
+/** Position uncertainty from correlated error components over the states' coefficients (a fit's). */
+function componentPositionUncertainty(components: NonNullable<LinearSpeciesData["positionErrors"]>, upperIndex: number, lowerIndex: number): PositionUncertainty {
+  const keys: Array<{ stateIndex: number; l: number }> = [];
+  for (const c of components) for (const d of c.deltas) if (!keys.some((k) => k.stateIndex === d.stateIndex && k.l === d.l)) keys.push({ stateIndex: d.stateIndex, l: d.l });
+  return {
+    terms: keys.map((k) => ({ l: k.l, upperWeight: k.stateIndex === upperIndex ? 1 : 0, lowerWeight: k.stateIndex === lowerIndex ? 1 : 0 })),
+    rows: components.map((c) => keys.map((k) => c.deltas.filter((d) => d.stateIndex === k.stateIndex && d.l === k.l).reduce((sum, d) => sum + d.valueCm, 0))),
+  };
+}
+
 /** The band model of one Σ–Σ band of a linear molecule, from the two states' own constants. */
 export function linearBandModel(
   species: SpeciesModel,
@@ -56,7 +66,9 @@ export function linearBandModel(
     lower: linearStateExpansion(lower),
     upper: linearStateExpansion(upper),
     zeroEnergy: ground.termEnergy.valueCm,
-    uncertainty: linearPositionUncertainty(upper, lower),
+    uncertainty: linear.positionErrors
+      ? componentPositionUncertainty(linear.positionErrors, entry.upperStateIndex, entry.lowerStateIndex)
+      : linearPositionUncertainty(upper, lower),
     accuracy: bandAccuracy(species, entry.band),
     partitionFunction: options.partitionFunction ?? linearPartitionFunction(linear, options.temperatureK),
     lowerWeight: (j) => nuclearSpinWeight(linear.nuclearSpinWeights, lower.symmetry, j),

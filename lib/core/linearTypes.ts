@@ -58,6 +58,11 @@ export interface LinearSpeciesData {
   modes: VibrationalMode[];
   /** null: no alternation (no centre of symmetry). */
   nuclearSpinWeights: NuclearSpinWeights | null;
+  /**
+   * Independent position-error components over the states' coefficients c_l (a fit's covariance,
+   * omitted terms); absent: each constant's own uncertainty, uncorrelated.
+   */
+  positionErrors?: Array<{ deltas: Array<{ stateIndex: number; l: number; valueCm: number }> }>;
 }
 
 /** Lower-state energy zero: the J = 0 level of the ground state. */

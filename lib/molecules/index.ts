@@ -7,3 +7,5 @@ export * from "./parseMoleculeText.ts";
 export * from "./loadMolecules.ts";
 export * from "./fileFit.ts";
 export * from "./givenConstants.ts";
+export * from "./linearFit.ts";
+export type { LinearMoleculeFile, LinearSpeciesEntry } from "./linearSchema.ts";

@@ -24,12 +24,16 @@ export function parseSymmetry(text: string): LinearStateSymmetry | null {
 
 const linearElectronicState = /^(?:X\s*)?(?:1|¹)\s*(?:Σ|Sigma)\s*_?[gu]?\s*(?:\+|⁺)$/i;
 
-function valueOf(m: Measured | undefined): number {
-  return m === undefined ? 0 : typeof m === "number" ? m : m.value;
+// A state constant written `fit` is replaced by its fitted value before these run (linearFit.ts).
+type StateConstant = Measured | "fit" | undefined;
+
+function valueOf(m: StateConstant): number {
+  return m === undefined ? 0 : m === "fit" ? Number.NaN : typeof m === "number" ? m : m.value;
 }
 
-function withUncertainty(m: Measured | undefined) {
+function withUncertainty(m: StateConstant) {
   if (m === undefined) return { valueCm: 0, uncertaintyCm: 0, implied: false };
+  if (m === "fit") return { valueCm: Number.NaN, uncertaintyCm: Number.NaN, implied: false };
   // 0 is exact (the ground state's term energy is the zero of energy by definition).
   if (typeof m === "number") return { valueCm: m, uncertaintyCm: m === 0 ? 0 : impliedUncertainty(m), implied: m !== 0 };
   return { valueCm: m.value, uncertaintyCm: m.uncertainty, implied: false };
@@ -63,11 +67,13 @@ export function linearSemanticProblems(file: LinearMoleculeFile): Found[] {
     if (seenSpecies.has(key)) add([...path, "massNumbers"], `species ${s.massNumbers.join("/")} is listed twice`);
     seenSpecies.add(key);
 
-    // Normal modes: a linear molecule of N atoms has 3N − 5 vibrational degrees of freedom.
-    checkSource([...path, "vibrationalModes", "source"], s.vibrationalModes.source);
-    const dof = s.vibrationalModes.modes.reduce((sum, m) => sum + m.degeneracy, 0);
-    if (dof !== 3 * file.atoms.length - 5) add([...path, "vibrationalModes", "modes"], `the modes' degeneracies add up to ${dof}, but a linear molecule of ${file.atoms.length} atoms has 3N−5 = ${3 * file.atoms.length - 5} vibrational degrees of freedom (bending modes count twice)`);
-    s.vibrationalModes.modes.forEach((m, k) => {
+    // Normal modes: a linear molecule of N atoms has 3N − 5 vibrational degrees of freedom. Without
+    // them Q_vib is taken as 1 (populations per molecule in the ground vibrational state).
+    const modes = s.vibrationalModes?.modes ?? [];
+    if (s.vibrationalModes) checkSource([...path, "vibrationalModes", "source"], s.vibrationalModes.source);
+    const dof = modes.reduce((sum, m) => sum + m.degeneracy, 0);
+    if (s.vibrationalModes && dof !== 3 * file.atoms.length - 5) add([...path, "vibrationalModes", "modes"], `the modes' degeneracies add up to ${dof}, but a linear molecule of ${file.atoms.length} atoms has 3N−5 = ${3 * file.atoms.length - 5} vibrational degrees of freedom (bending modes count twice)`);
+    modes.forEach((m, k) => {
       if (!(m.wavenumber > 0)) add([...path, "vibrationalModes", "modes", k, "wavenumber"], "a mode's wavenumber must be above 0 cm⁻¹");
       if (m.degeneracy !== 1 && m.degeneracy !== 2) add([...path, "vibrationalModes", "modes", k, "degeneracy"], "a linear molecule's modes are single (stretches, 1) or doubly degenerate (bends, 2)");
     });
@@ -148,7 +154,7 @@ export function linearSemanticProblems(file: LinearMoleculeFile): Found[] {
 
 function stateOf(entry: LinearSpeciesEntry["states"][number]): { state: LinearState; given: GivenConstant[] } {
   const given: GivenConstant[] = [];
-  const constant = (name: string, m: Measured | undefined) => {
+  const constant = (name: string, m: StateConstant) => {
     const c = withUncertainty(m);
     if (m !== undefined) given.push({ name: `${name}(${entry.id})`, valueCm: c.valueCm, uncertaintyCm: c.uncertaintyCm, uncertaintyImplied: c.implied });
     return { valueCm: c.valueCm, uncertaintyCm: c.uncertaintyCm };
@@ -176,7 +182,7 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string):
     const linear: LinearSpeciesData = {
       states,
       groundStateIndex: states.findIndex((s) => s.termEnergy.valueCm === 0),
-      modes: entry.vibrationalModes.modes.map((m) => ({ wavenumberCm: m.wavenumber, degeneracy: m.degeneracy })),
+      modes: (entry.vibrationalModes?.modes ?? []).map((m) => ({ wavenumberCm: m.wavenumber, degeneracy: m.degeneracy })),
       nuclearSpinWeights: entry.nuclearSpinWeights ? { evenJ: entry.nuclearSpinWeights.evenJ, oddJ: entry.nuclearSpinWeights.oddJ } : null,
       bands: entry.bands.map((b) => {
         const upperStateIndex = indexOf.get(b.upper)!;

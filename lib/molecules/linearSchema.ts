@@ -8,15 +8,22 @@ import { listOf, mapping, massNumbers, measuredIn, moleculeFileSchema, numberIn,
 
 const cm = "cm⁻¹";
 
+/** A state constant as read in a source, or `fit`: fitted by `bandatlas fit` to the species' measured lines. */
+function measuredOrFit(unit: string) {
+  return z.union([measuredIn(unit), z.literal("fit")], {
+    error: (issue) => `expected a number in ${unit}, { value, uncertainty }, or fit (fitted to the species' measured lines), got ${describeInput(issue.input)}`,
+  });
+}
+
 const stateSchema = mapping(
   {
     id: text("the state's vibrational label (e.g. 00011)"),
     symmetry: text("the state's symmetry (Σ+, or Σg+ / Σu+ for a molecule with a centre of symmetry)"),
     source: sourceKey,
-    termEnergy: measuredIn(cm),
-    b: measuredIn(cm),
-    d: measuredIn(cm).optional(),
-    h: measuredIn(cm).optional(),
+    termEnergy: measuredOrFit(cm),
+    b: measuredOrFit(cm),
+    d: measuredOrFit(cm).optional(),
+    h: measuredOrFit(cm).optional(),
   },
   "a vibrational state",
 );
@@ -51,7 +58,18 @@ const linearSpeciesSchema = mapping(
     label: text("the species label (e.g. 12C16O2)").optional(),
     reference: z.boolean({ error: (i) => `expected true or false, got ${describeInput(i.input)}` }).optional(),
     nuclearSpinWeights: mapping({ evenJ: numberIn("(a statistical weight)"), oddJ: numberIn("(a statistical weight)"), source: sourceKey }, "nuclear-spin weights of the ground state's even and odd J").optional(),
-    vibrationalModes: mapping({ source: sourceKey, modes: listOf(modeSchema, "vibrational modes").min(1, { error: "give every normal mode" }) }, "the vibrational modes"),
+    vibrationalModes: mapping({ source: sourceKey, modes: listOf(modeSchema, "vibrational modes").min(1, { error: "give every normal mode" }) }, "the vibrational modes").optional(),
+    fit: mapping(
+      {
+        lines: listOf(sourceKey, "source keys of this species' `referenceLines` groups to fit").min(1, { error: "name at least one group of measured lines to fit" }),
+        result: z
+          .record(z.string().regex(/^[^.\s]+\.[GBDH]$/, { error: "a fitted constant is named state.G, state.B, state.D or state.H (e.g. 10100.B)" }), measuredIn(cm), {
+            error: (issue) => `expected the fitted values as { "10100.B": { value, uncertainty }, … }, got ${describeInput(issue.input)}`,
+          })
+          .optional(),
+      },
+      "a fit block",
+    ).optional(),
     states: listOf(stateSchema, "vibrational states").min(2, { error: "give at least the ground state and one upper state" }),
     bands: listOf(bandSchema, "bands").min(1, { error: "give at least one band" }),
     referenceLines: listOf(

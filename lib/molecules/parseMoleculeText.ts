@@ -6,6 +6,7 @@ import { isKnownElement, isotope, stableMassNumbers } from "./isotopes.ts";
 import { formatPath, type Problem } from "./problems.ts";
 import { moleculeFileSchema, type MoleculeFile } from "./schema.ts";
 import { parseLinearMolecule } from "./parseLinearMolecule.ts";
+import type { LinearFileFit } from "./linearFit.ts";
 import type { LinearMoleculeFile } from "./linearSchema.ts";
 
 /** Files larger than this are refused before parsing: a molecule file is a few kilobytes. */
@@ -236,7 +237,9 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
   return out;
 }
 
-export type ParseResult = { ok: true; molecule: Molecule; data: MoleculeFile | LinearMoleculeFile; fileFit?: FileFit | null } | { ok: false; problems: Problem[] };
+export type ParseResult =
+  | { ok: true; molecule: Molecule; data: MoleculeFile | LinearMoleculeFile; fileFit?: FileFit | null; linearFits?: LinearFileFit[] }
+  | { ok: false; problems: Problem[] };
 
 /**
  * Validates one molecule file's bytes. `file` is the path shown in messages; `expectedId` is the
@@ -283,7 +286,7 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
     return { file, line: pos?.line ?? null, column: pos?.column ?? null, path: formatPath(path), message };
   };
   const structure = (raw as { structure?: unknown }).structure;
-  if (structure === "linear") return parseLinearMolecule(raw, file, expectedId, located);
+  if (structure === "linear") return parseLinearMolecule(raw, file, expectedId, located, options);
   if (structure === "diatomic") delete (raw as { structure?: unknown }).structure;
   else if (structure !== undefined) return { ok: false, problems: [located(["structure"], `structure ${JSON.stringify(structure)} is not known: leave it out (or write diatomic) for a diatomic, write linear for a linear polyatomic molecule`)] };
   const parsed = moleculeFileSchema.safeParse(raw);

@@ -28,7 +28,7 @@ export function overviewPoints(entry: AtlasEntry): OverviewPoint[] {
         wavenumber: line.wavenumber,
         intensity: line.relativeIntensity * band.strengthRelativeToFundamental,
         branch: branchStyle[line.branch].name,
-        band: band.kind === "fundamental" ? `${band.label} fundamental` : `${band.label} hot band`,
+        band: band === entry.bands[0] ? `${band.label} ${band.kind}` : `${band.label} hot band`,
         label: line.label,
       });
     }
@@ -38,7 +38,9 @@ export function overviewPoints(entry: AtlasEntry): OverviewPoint[] {
 
 /** Vega-Lite spec of the band overview: a pure function of the entry's data. */
 export function bandOverviewSpec(entry: AtlasEntry, scale: IntensityScale, size = { width: 720, height: 260 }): Record<string, unknown> {
-  const fundamental = entry.bands.find((b) => b.kind === "fundamental")!;
+  // The first band is the one the others are compared with (a diatomic's fundamental, a linear
+  // molecule's first listed band, which may be a combination band).
+  const fundamental = entry.bands[0];
   const all = overviewPoints(entry);
   const points = scale === "log" ? all.filter((p) => p.intensity >= logFloor) : all;
   const bands = [...new Set(points.map((p) => p.band))];
@@ -82,7 +84,7 @@ export function bandOverviewSpec(entry: AtlasEntry, scale: IntensityScale, size 
 
 /** What the plot shows, in words, for the aria-label and for readers who cannot see it. */
 export function bandOverviewDescription(entry: AtlasEntry, scale: IntensityScale): string {
-  const fundamental = entry.bands.find((b) => b.kind === "fundamental")!;
+  const fundamental = entry.bands[0];
   const lines = fundamental.lines.lines;
   const hot = entry.bands.filter((b) => b.kind === "hot" && b.shownWithFundamental).map((b) => b.label);
   const strongest = lines.reduce((best, l) => (l.relativeIntensity > best.relativeIntensity ? l : best), lines[0]);

@@ -148,7 +148,7 @@ function accuracyOf(result: BandLines): string {
 }
 
 function otherBandsNoteOf(entry: AtlasEntry): string | null {
-  const shown = entry.bands.filter((b: AtlasBand) => b.kind !== "fundamental" && b.shownWithFundamental);
+  const shown = entry.bands.filter((b: AtlasBand, i) => i > 0 && b.shownWithFundamental);
   if (!shown.length) return null;
   const parts = shown.map((b) => `${b.label}${b.strengthRelativeToFundamental !== null ? ` (strongest line ${significant(b.strengthRelativeToFundamental, 2)} of the fundamental's)` : ""}`);
   return `At ${entry.temperatureK} K the hot band${shown.length === 1 ? "" : "s"} ${parts.join(", ")} also show${shown.length === 1 ? "s" : ""} in a spectrum; only the fundamental is drawn and listed here.`;
@@ -166,8 +166,9 @@ export function sheetContent(input: SheetContentInput): SheetContent {
   const { molecule, entry, build } = input;
   const speciesIndex = molecule.species.findIndex((s) => s.model.label === entry.species);
   if (speciesIndex < 0) throw new SheetInputError(`${displayText(molecule.name)} has no species "${entry.species}"`);
-  const fundamental = entry.bands.find((b) => b.kind === "fundamental");
-  if (!fundamental || fundamental.lines.lines.length === 0) throw new SheetInputError(`${displayText(molecule.name)} ${entry.species}: the atlas entry has no fundamental band lines`);
+  // The principal band: a diatomic's fundamental, a linear molecule's first listed band.
+  const fundamental = entry.bands[0];
+  if (!fundamental || fundamental.lines.lines.length === 0) throw new SheetInputError(`${displayText(molecule.name)} ${entry.species}: the atlas entry has no lines in its principal band`);
   const bandLines = fundamental.lines;
   const model = molecule.species[speciesIndex].model;
   const constants = model.constantsOrigin === "cited" ? `constants cited for ${model.label}` : `constants scaled from ${molecule.species[0].model.label} by Dunham's isotope relations`;

@@ -236,9 +236,10 @@ export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: En
     hazard: hazardView(molecule),
     plots,
     calibration,
-    fundamental: bands.filter((b) => b.kind === "fundamental"),
-    hot: bands.filter((b) => b.kind === "hot"),
-    overtones: bands.filter((b) => b.kind === "overtone" || b.kind === "combination"),
+    // The first band is the principal one (a diatomic's fundamental, a linear molecule's first listed band).
+    fundamental: bands.slice(0, 1),
+    hot: bands.slice(1).filter((b) => b.kind === "hot"),
+    overtones: bands.slice(1).filter((b) => b.kind === "overtone" || b.kind === "combination" || b.kind === "fundamental"),
     temperatures: sameSpecies.map((e) => ({ token: temperatureToken(e.temperatureK), path: speciesPagePath(e.moleculeId, e.species, e.temperatureK), current: e === entry })),
     otherSpecies: molecule.species
       .filter((s) => s.model.label !== entry.species)

@@ -3,7 +3,7 @@ import { join } from "node:path";
 import { isMap, parseDocument } from "yaml";
 import { dunhamTermName, termSupport } from "../../core/index.ts";
 import { fitReportText, termSupportRule, type FitReport } from "../../format/index.ts";
-import { fitDecimals, MoleculeFileError, parseMoleculeBytes, type FileFit, type MoleculeFile } from "../../molecules/index.ts";
+import { fitDecimals, MoleculeFileError, parseMoleculeBytes, type FileFit, type LinearFileFit, type LinearMoleculeFile, type MoleculeFile } from "../../molecules/index.ts";
 import { SheetInputError, writeFileAtomic } from "../../sheet/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
 import { formatOption, parseCommandLine } from "../options.ts";
@@ -59,6 +59,41 @@ export function dunhamFitReport(file: MoleculeFile, fileName: string, fileFit: F
   };
 }
 
+export function linearFitReport(file: LinearMoleculeFile, fileName: string, fit: LinearFileFit): FitReport {
+  const { solution, residuals } = fit.fit;
+  const signs = fit.fit.parameters.map((p) => (p.l === 2 ? -1 : 1));
+  const heldOut = residuals.filter((r) => r.observation.heldOut);
+  return {
+    molecule: `${file.id} (${file.species[fit.speciesIndex].label ?? file.species[fit.speciesIndex].massNumbers.join("/")})`,
+    file: fileName,
+    parameters: fit.names.map((name, i) => {
+      const significance = Math.abs(fit.values[i]) / fit.uncertainties[i];
+      return { name, value: fit.values[i], uncertainty: fit.uncertainties[i], significance, supported: significance >= 3 };
+    }),
+    correlation: solution.correlation.map((row, i) => row.map((c, j) => c * signs[i] * signs[j])),
+    lines: residuals.map((r) => ({
+      species: r.observation.species,
+      band: r.observation.band,
+      label: r.observation.label,
+      measured: r.observation.wavenumberCm,
+      uncertainty: r.observation.uncertaintyCm,
+      calculated: r.calculatedCm,
+      residual: r.residualCm,
+      normalized: r.normalized,
+      heldOut: r.observation.heldOut,
+      source: r.observation.sourceKey,
+    })),
+    fittedCount: fit.fit.fittedCount,
+    heldOutCount: fit.fit.heldOutCount,
+    degreesOfFreedom: solution.degreesOfFreedom,
+    rmsCm: fit.fit.rmsCm,
+    reducedChiSquared: solution.reducedChiSquared,
+    heldOutRmsCm: heldOut.length ? Math.sqrt(heldOut.reduce((sum, r) => sum + r.residualCm ** 2, 0) / heldOut.length) : null,
+    nextTerms: [],
+    rule: termSupportRule,
+  };
+}
+
 /** The file's text with the fit's result written in, everything else (comments included) kept. */
 export function withFitResult(text: string, path: Array<string | number>, report: FitReport): string {
   const doc = parseDocument(text, { version: "1.2" });
@@ -85,18 +120,22 @@ export function runFit(args: string[]): { output: string; exitCode: number } {
   const expectedId = path.replace(/^.*[\\/]/, "").replace(/\.yaml$/, "");
   const parsed = parseMoleculeBytes(bytes, path, expectedId, { checkFitResult: false });
   if (!parsed.ok) throw new MoleculeFileError(parsed.problems);
-  if (!parsed.fileFit) throw new UsageError(`${path} has no \`fit\` block: its constants are cited, not fitted (see DEVELOPERS.md, "Fitting constants to measured lines")`);
-  const report = dunhamFitReport(parsed.data as MoleculeFile, path, parsed.fileFit);
+  const reports: Array<{ report: FitReport; resultPath: Array<string | number> }> = [];
+  if (parsed.fileFit) reports.push({ report: dunhamFitReport(parsed.data as MoleculeFile, path, parsed.fileFit), resultPath: ["species", parsed.fileFit.referenceIndex, "constants", "fit"] });
+  for (const fit of parsed.linearFits ?? []) reports.push({ report: linearFitReport(parsed.data as LinearMoleculeFile, path, fit), resultPath: ["species", fit.speciesIndex, "fit"] });
+  if (!reports.length) throw new UsageError(`${path} has no \`fit\` block: its constants are cited, not fitted (see DEVELOPERS.md, "Fitting constants to measured lines")`);
   let note = "";
   if (values.write) {
+    let text = new TextDecoder().decode(bytes);
+    for (const { report, resultPath } of reports) text = withFitResult(text, resultPath, report);
     try {
-      writeFileAtomic(path, new TextEncoder().encode(withFitResult(new TextDecoder().decode(bytes), ["species", parsed.fileFit.referenceIndex, "constants", "fit"], report)));
+      writeFileAtomic(path, new TextEncoder().encode(text));
     } catch (error) {
       if (error instanceof SheetInputError) throw new UsageError(error.message);
       throw error;
     }
     note = `\nwrote the result into ${path}\n`;
   }
-  if (format === "json") return { output: JSON.stringify(report, null, 2) + "\n", exitCode: 0 };
-  return { output: fitReportText(report) + note, exitCode: 0 };
+  if (format === "json") return { output: JSON.stringify(reports.length === 1 ? reports[0].report : reports.map((r) => r.report), null, 2) + "\n", exitCode: 0 };
+  return { output: reports.map((r) => fitReportText(r.report)).join("\n") + note, exitCode: 0 };
 }
