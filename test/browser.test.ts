@@ -91,6 +91,23 @@ describe("the site in Chromium", () => {
     expect(page.url()).toContain(`molecules/${expected[0].molecule}/${expected[0].species}-296K/index.html#line-${expected[0].band}-`);
   });
 
+  it("finds lines near an air wavelength in nm as `bandatlas find --air` does", async () => {
+    // 12C2H2 P(13) lies at 1532.830 nm in vacuum (BIPM recommended frequency, c2h2.yaml), about
+    // 0.42 nm shorter in standard air; the search is by the air value with a ±0.05 nm window.
+    const table = (await cli("find", "1532.41", "nm", "--air", "--window", "0.05")).trim().split("\n").slice(4).map((l) => l.trim().split(/\s+/));
+    expect(table.map((r) => r.slice(0, 4))).toContainEqual(["c2h2", "12C2H2", "10100-00000", "P(13)"]);
+    await page.goto(base);
+    await page.fill("#wavenumber", "1532.41");
+    await page.selectOption("#unit", "nm");
+    await page.check("#air");
+    await page.fill("#window", "0.05");
+    await page.click("form[data-search=wavenumber] button");
+    await page.locator("#find-results tbody tr").first().waitFor();
+    const rows = await page.locator("#find-results tbody tr").evaluateAll((trs) => trs.map((tr) => [...tr.children].map((td) => td.textContent!.trim())));
+    expect(rows).toEqual(table);
+    await expect(page.locator("#find-results p").first().textContent()).resolves.toContain("(1532.41 nm, air)");
+  });
+
   it("shows the band overview as an SVG with axes, and switches to a log scale", async () => {
     await page.goto(`${base}molecules/co/12C16O-296K/index.html`);
     const linear = page.locator("figure.plot-linear svg[role=img]");

@@ -3,6 +3,7 @@
 // with textContent, never innerHTML.
 import MiniSearch from "minisearch";
 import { fixed, significant } from "../format/numbers.ts";
+import { parseSpectralPosition, positionToWavenumber, unitLabels, windowToWavenumber, type PositionUnit, type SpectralPosition } from "../core/spectralPosition.ts";
 import { decodeLineIndex, type DecodedLineIndex, type LineIndexFile } from "./lineIndexCodec.ts";
 import { nameIndexOptions, nameSearchOptions } from "./nameSearchOptions.ts";
 import { searchWavenumber } from "./wavenumberSearch.ts";
@@ -71,18 +72,26 @@ function setupWavenumberSearch(form: HTMLFormElement) {
   };
   const fail = (message: string) => show(output, el("p", message, { class: "error", role: "alert" }));
   const run = async () => {
-    const wavenumber = Number(field("wavenumber").value.trim().replace(/\s*cm-1$/i, ""));
-    const windowCm = Number(field("window").value.trim());
+    const air = (field("air") as HTMLInputElement).checked;
+    let position: SpectralPosition;
+    try {
+      position = parseSpectralPosition(field("wavenumber").value, field("unit").value as PositionUnit, air ? "air" : "vacuum");
+    } catch (error) {
+      return fail(`${(error as Error).message}.`);
+    }
+    const wavenumber = positionToWavenumber(position);
+    const windowGiven = Number(field("window").value.trim());
+    const windowCm = windowGiven > 0 ? windowToWavenumber(position, windowGiven) : NaN;
     const minRelative = Number(field("minRelative").value.trim());
     const token = field("temperature").value;
-    if (!(wavenumber > 0)) return fail("The wavenumber must be a number of cm⁻¹ above 0.");
-    if (!(windowCm > 0) || windowCm > 500) return fail("The window (half-width) must be above 0 and at most 500 cm⁻¹.");
+    if (!(windowCm > 0) || windowCm > 500) return fail("The window (half-width) must be above 0 and at most 500 cm⁻¹ (in the position's unit).");
     if (!(minRelative < 1)) return fail("The minimum relative intensity must be below 1.");
     try {
       const index = await load(token);
       if (minRelative < index.minRelative) return fail(`The site's index holds lines down to ${index.minRelative} of their band's strongest line; for weaker lines use \`bandatlas find --min-relative\`.`);
       const matches = searchWavenumber(index, wavenumber, windowCm, minRelative);
-      const head = el("p", `Lines within ±${windowCm} cm⁻¹ of ${wavenumber} cm⁻¹ at ${index.temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}`);
+      const given = position.unit === "cm-1" ? "" : ` (${position.value} ${unitLabels[position.unit]}, ${position.medium})`;
+      const head = el("p", `Lines within ±${significant(windowCm, 4)} cm⁻¹ of ${position.unit === "cm-1" ? wavenumber : fixed(wavenumber, 4)} cm⁻¹${given} at ${index.temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}`);
       if (!matches.length) return show(output, head);
       const table = el("table", undefined, { class: "lines compact" });
       const headRow = el("tr");
@@ -105,16 +114,18 @@ function setupWavenumberSearch(form: HTMLFormElement) {
   form.addEventListener("submit", (event) => {
     event.preventDefault();
     const params = new URLSearchParams();
-    for (const name of ["wavenumber", "window", "temperature", "minRelative"]) params.set(name, field(name).value.trim());
+    for (const name of ["wavenumber", "unit", "window", "temperature", "minRelative"]) params.set(name, field(name).value.trim());
+    if ((field("air") as HTMLInputElement).checked) params.set("air", "1");
     history.replaceState(null, "", `?${params}#find`);
     void run();
   });
   const params = new URLSearchParams(location.search);
   if (params.has("wavenumber")) {
-    for (const name of ["wavenumber", "window", "temperature", "minRelative"]) {
+    for (const name of ["wavenumber", "unit", "window", "temperature", "minRelative"]) {
       const value = params.get(name);
       if (value !== null) field(name).value = value;
     }
+    (field("air") as HTMLInputElement).checked = params.get("air") === "1";
     void run();
   }
 }

@@ -41,3 +41,4 @@ export * from "./calibrationLines.ts";
 export * from "./weightedLeastSquares.ts";
 export * from "./dunhamFit.ts";
 export * from "./linearStateFit.ts";
+export * from "./spectralPosition.ts";

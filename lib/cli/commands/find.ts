@@ -1,17 +1,23 @@
 import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, findInAtlas } from "../../atlas/index.ts";
 import { fixed, significant, textTable } from "../../format/index.ts";
+import { parseSpectralPosition, positionToWavenumber, unitLabels, windowToWavenumber, type PositionUnit } from "../../core/index.ts";
 import { loadMoleculesOrThrow } from "../../molecules/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine, temperatureOption } from "../options.ts";
 import { UsageError } from "../usageError.ts";
 
-export const findHelp = `bandatlas find <wavenumber> [options]
+export const findHelp = `bandatlas find <position> [options]
 
-Which lines of the whole atlas lie near a wavenumber (an unexpected peak, a calibration line):
+Which lines of the whole atlas lie near a position (an unexpected peak, a calibration line):
 every shipped molecule, species and band, nearest first.
 
-  <wavenumber>            vacuum wavenumber in cm⁻¹
-  --window <cm-1>         half-width of the search window (default ${defaultFindWindowCm})
+  <position>              vacuum wavenumber in cm⁻¹ (2143.3), or a wavelength with its unit:
+                          1532.83nm, 1.53283um (vacuum unless --air)
+  --unit cm-1|nm|um       the position's unit when it carries none (default cm-1)
+  --air                   the wavelength is in standard air (Edlén 1966), as grating
+                          instruments and many optical spectrum analysers report it
+  --window <x>            half-width of the search window, in the position's unit
+                          (default ${defaultFindWindowCm} cm⁻¹, or the same width in nm or µm there)
   --temperature <K>       gas temperature in kelvin (default ${defaultTemperatureK})
   --min-relative <x>      only lines at least x times the strongest of their band (default ${defaultFindMinRelative})
   --format table|json     table (default) or JSON
@@ -21,24 +27,30 @@ export function runFind(args: string[]): string {
   const { values, positionals } = parseCommandLine(
     "find",
     args,
-    { window: { type: "string" }, temperature: { type: "string" }, "min-relative": { type: "string" }, format: { type: "string" }, molecules: { type: "string" } },
-    1,
+    { window: { type: "string" }, unit: { type: "string" }, air: { type: "boolean" }, temperature: { type: "string" }, "min-relative": { type: "string" }, format: { type: "string" }, molecules: { type: "string" } },
+    2,
   );
   if (values.help) return findHelp + "\n";
-  if (positionals.length === 0) throw new UsageError("which wavenumber? e.g. `bandatlas find 2143.3` (see bandatlas find --help)");
-  const wavenumber = numberOption("wavenumber", positionals[0], NaN, "cm-1");
-  if (!(wavenumber > 0)) throw new UsageError(`the wavenumber must be a number of cm⁻¹ above 0, got "${positionals[0]}"`);
-  const windowCm = numberOption("window", values.window as string | undefined, defaultFindWindowCm, "cm-1");
-  if (!(windowCm > 0) || windowCm > 500) throw new UsageError(`--window ${windowCm}: the half-width must be above 0 and at most 500 cm⁻¹`);
+  if (positionals.length === 0) throw new UsageError("which position? e.g. `bandatlas find 2143.3` or `bandatlas find 1532.83nm` (see bandatlas find --help)");
+  const unitText = values.unit as string | undefined;
+  if (unitText !== undefined && !["cm-1", "nm", "um"].includes(unitText)) throw new UsageError(`--unit ${unitText}: use cm-1, nm or um`);
+  // "1532.41 nm" may arrive as two words.
+  const position = parseSpectralPosition(positionals.join(" "), (unitText ?? "cm-1") as PositionUnit, values.air ? "air" : "vacuum");
+  const wavenumber = positionToWavenumber(position);
+  const windowGiven = values.window === undefined ? null : numberOption("window", values.window as string, NaN);
+  if (windowGiven !== null && !(windowGiven > 0)) throw new UsageError(`--window ${values.window}: the half-width must be a number above 0`);
+  const windowCm = windowGiven === null ? defaultFindWindowCm : windowToWavenumber(position, windowGiven);
+  if (windowCm > 500) throw new UsageError(`--window ${values.window}: the half-width must be at most 500 cm⁻¹ (${windowCm.toPrecision(3)} cm⁻¹ given)`);
   const temperatureK = temperatureOption(values.temperature as string | undefined, defaultTemperatureK);
   const minRelative = numberOption("min-relative", values["min-relative"] as string | undefined, defaultFindMinRelative);
   if (!(minRelative >= 0 && minRelative < 1)) throw new UsageError(`--min-relative ${minRelative} must be at least 0 and below 1`);
   const format = formatOption(values.format as string | undefined, ["table", "json"]);
   const matches = findInAtlas(loadMoleculesOrThrow(moleculesDir(values.molecules as string | undefined)), wavenumber, windowCm, temperatureK, minRelative);
   if (format === "json") {
-    return JSON.stringify({ query: { wavenumber, window: windowCm, temperatureK, minRelative }, matches }, null, 2) + "\n";
+    return JSON.stringify({ query: { wavenumber, window: windowCm, temperatureK, minRelative, position: position.value, unit: position.unit, medium: position.medium }, matches }, null, 2) + "\n";
   }
-  const head = `Lines within ±${windowCm} cm⁻¹ of ${wavenumber} cm⁻¹ at ${temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}\n`;
+  const given = position.unit === "cm-1" ? "" : ` (${position.value} ${unitLabels[position.unit]}, ${position.medium})`;
+  const head = `Lines within ±${significant(windowCm, 4)} cm⁻¹ of ${position.unit === "cm-1" ? wavenumber : fixed(wavenumber, 4)} cm⁻¹${given} at ${temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}\n`;
   if (!matches.length) return head;
   const rows = matches.map((m) => [m.molecule, m.species, m.band, m.label, fixed(m.wavenumber, 4), (m.offset >= 0 ? "+" : "") + fixed(m.offset, 4), significant(m.relativeIntensity, 3)]);
   return head + "\n" + textTable(["molecule", "species", "band", "line", "ν̃ / cm⁻¹", "offset / cm⁻¹", "rel. int."], rows, [false, false, false, false, true, true, true]) + "\n";
