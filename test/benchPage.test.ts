@@ -109,7 +109,7 @@ describe("the CO bench page in Chromium", () => {
 
     const calibration = JSON.parse(await cli("calibration-lines", "co", ...settings, "--format", "json")) as { lines: Array<{ label: string; species: string; peakShiftCm: number | null }> };
     const rows = await page.locator("#bench-lines tbody tr").evaluateAll((trs) => trs.map((tr) => [...tr.children].map((c) => c.textContent!)));
-    expect(rows.map((r) => `${r[1]} ${r[0]} ${r[6]}`)).toEqual(calibration.lines.map((l) => `${l.species} ${l.label} ${l.peakShiftCm === null ? "no peak" : peakShiftDigits(l.peakShiftCm)}`));
+    expect(rows.map((r) => `${r[1]} ${r[0]} ${r[7]}`)).toEqual(calibration.lines.map((l) => `${l.species} ${l.label} ${l.peakShiftCm === null ? "no peak" : peakShiftDigits(l.peakShiftCm)}`));
     expect(problems).toEqual([]);
   });
 
@@ -126,7 +126,9 @@ describe("a molecule without cited intensities", () => {
     await ready("0.5");
     await expect(page.locator("#bench-relative").textContent()).resolves.toContain("No transmittance for Hydrogen chloride.");
     await expect(page.locator(".spectrum-plot .axis-label").nth(1).textContent()).resolves.toBe("relative absorbance (peak = 1)");
-    expect(await page.locator("#bench-lines tbody tr").count()).toBeGreaterThan(0);
+    // No cited measured line validates the HCl constants: no line is calibration grade, and the page says why.
+    expect(await page.locator("#bench-lines tbody tr").count()).toBe(0);
+    await expect(page.locator("#bench-lines caption").textContent()).resolves.toMatch(/^0 calibration-grade lines .*validated against cited measured lines/);
     expect(problems).toEqual([]);
   });
 });
@@ -167,10 +169,13 @@ describe("calibration marks on the bench sheets", () => {
     const text = execFileSync("pdftotext", ["-layout", file, "-"], { encoding: "utf8" }).replace(/\s+/g, " ");
     expect(text).toContain("Recommended for calibration");
     expect(text).toContain("a 10 cm cell of the pure gas at 296 K and 20 Torr");
-    const at4 = marks.byResolution.find((r) => r.resolutionCm === 4)!.lines.filter((l) => l.species === "12C16O" && l.band === "1-0").map((l) => l.label);
-    expect(at4.length).toBeGreaterThan(0);
-    expect(text).toContain(`at 4 cm⁻¹`);
-    for (const label of at4) expect(text).toContain(label);
+    // Only the validated low-J lines qualify; at 1 cm⁻¹ some are isolated, at 4 cm⁻¹ none is
+    // (12C16O 1-0 lines are 3.5–4 cm⁻¹ apart near the origin, fact of the trade).
+    const at1 = marks.byResolution.find((r) => r.resolutionCm === 1)!.lines.filter((l) => l.species === "12C16O" && l.band === "1-0").map((l) => l.label);
+    expect(at1.length).toBeGreaterThan(0);
+    expect(text).toContain(`at 1 cm⁻¹`);
+    for (const label of at1) expect(text).toContain(label);
+    expect(text).toContain("at 4 cm⁻¹: none");
     expect(text).toContain("typical (not measured) pressure-broadening");
   });
 });

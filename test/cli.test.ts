@@ -58,7 +58,7 @@ describe("bandatlas lines", () => {
     [["lines", "co", "--frequency"], /unknown option --frequency/],
     [["lines"], /which molecule\?/],
     [["frobnicate"], /unknown command "frobnicate"/],
-    [["find", "abc"], /wavenumber expects a number in cm-1, got "abc"/],
+    [["find", "abc"], /"abc" is not a position: give a number with an optional unit/],
     [["find", "2143", "--window", "0"], /half-width must be above 0/],
   ];
   for (const [args, pattern] of bad) {

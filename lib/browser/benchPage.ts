@@ -46,10 +46,11 @@ function shownSignal(c: Computed): { values: Float64Array; label: string; digits
 function calibrationTable(c: Computed): HTMLElement {
   const wrap = el("div", undefined, { class: "table-wrap" });
   const table = el("table", undefined, { class: "lines calibration-lines", id: "bench-lines" });
-  const cap = el("caption", `${c.lines.length} calibration-grade line${c.lines.length === 1 ? "" : "s"} at ${c.settings.resolutionCm} cm⁻¹ between ${c.settings.fromCm} and ${c.settings.toCm} cm⁻¹`);
+  const none = c.lines.length === 0 ? " (a line must be strong, isolated, and known to R/50 inside a band validated against cited measured lines)" : "";
+  const cap = el("caption", `${c.lines.length} calibration-grade line${c.lines.length === 1 ? "" : "s"} at ${c.settings.resolutionCm} cm⁻¹ between ${c.settings.fromCm} and ${c.settings.toCm} cm⁻¹${none}`);
   table.append(cap);
   const head = el("tr");
-  for (const [name, unit] of [["line", ""], ["species", ""], ["band", ""], ["wavenumber ν̃", "/ cm⁻¹"], ["strength", "(strongest line of the gas = 1)"], ["apparent peak", "/ cm⁻¹"], ["expected peak shift", "/ cm⁻¹"]]) {
+  for (const [name, unit] of [["line", ""], ["species", ""], ["band", ""], ["wavenumber ν̃", "/ cm⁻¹"], ["± ν̃", "/ cm⁻¹"], ["strength", "(strongest line of the gas = 1)"], ["apparent peak", "/ cm⁻¹"], ["expected peak shift", "/ cm⁻¹"]]) {
     const th = el("th", name, { scope: "col" });
     if (unit) th.append(el("br"), el("span", unit, { class: "unit" }));
     head.append(th);
@@ -64,6 +65,7 @@ function calibrationTable(c: Computed): HTMLElement {
       el("td", l.species),
       el("td", l.band),
       el("td", calibrationWavenumberDigits(l.wavenumber)),
+      el("td", significant(l.wavenumberUncertainty, 2)),
       el("td", significant(l.relativeToStrongest, 3)),
       el("td", l.apparentWavenumber === null ? "no peak" : calibrationWavenumberDigits(l.apparentWavenumber)),
       el("td", peakShiftDigits(l.peakShiftCm) || "no peak"),

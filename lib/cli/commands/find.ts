@@ -38,7 +38,7 @@ export function runFind(args: string[]): string {
   const position = parseSpectralPosition(positionals.join(" "), (unitText ?? "cm-1") as PositionUnit, values.air ? "air" : "vacuum");
   const wavenumber = positionToWavenumber(position);
   const windowGiven = values.window === undefined ? null : numberOption("window", values.window as string, NaN);
-  if (windowGiven !== null && !(windowGiven > 0)) throw new UsageError(`--window ${values.window}: the half-width must be a number above 0`);
+  if (windowGiven !== null && !(windowGiven > 0)) throw new UsageError(`--window ${values.window}: the half-width must be above 0 (a number in the position's unit)`);
   const windowCm = windowGiven === null ? defaultFindWindowCm : windowToWavenumber(position, windowGiven);
   if (windowCm > 500) throw new UsageError(`--window ${values.window}: the half-width must be at most 500 cm⁻¹ (${windowCm.toPrecision(3)} cm⁻¹ given)`);
   const temperatureK = temperatureOption(values.temperature as string | undefined, defaultTemperatureK);
