@@ -1,6 +1,6 @@
 import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { sameBand, type Band, type BandLines, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
-import { accuracyText, calibrationConditionsText, criteriaPhrase, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
+import { accuracyText, calibrationConditionsText, intensityOriginWords, criteriaPhrase, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
 import { describeBuild } from "../build/buildIdentity.ts";
@@ -173,7 +173,7 @@ export function sheetContent(input: SheetContentInput): SheetContent {
   const model = molecule.species[speciesIndex].model;
   const constants = model.constantsOrigin === "cited" ? `constants cited for ${model.label}` : `constants scaled from ${molecule.species[0].model.label} by Dunham's isotope relations`;
   const intensity =
-    bandLines.intensityOrigin === null ? "relative intensities only (no cited band strength or dipole)" : `absolute intensities from ${bandLines.intensityOrigin.replace(/-/g, " ")} dipole data`;
+    bandLines.intensityOrigin === null ? "relative intensities only (no cited band strength or dipole)" : `absolute intensities ${intensityOriginWords[bandLines.intensityOrigin]}`;
   const title = displayText(molecule.name);
   const temperatureText = `T = ${entry.temperatureK} K (${fixed(entry.temperatureK - 273.15, 2).replace(/\.?0+$/, "")} °C)`;
   const calibration = input.calibration

@@ -1,6 +1,6 @@
 import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
-import { accuracyText, calibrationByLine, calibrationCellText, positionStatusWords, calibrationConditionsText, calibrationCriteriaText, calibrationLineKey, fixed, resolutionsText, significant, type LineCalibration } from "../format/index.ts";
+import { accuracyText, intensityOriginWords, calibrationByLine, calibrationCellText, positionStatusWords, calibrationConditionsText, calibrationCriteriaText, calibrationLineKey, fixed, resolutionsText, significant, type LineCalibration } from "../format/index.ts";
 import { lineShapeNames, type BenchSettings } from "../browser/benchSettings.ts";
 import { bandLabel, standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
@@ -97,7 +97,7 @@ const bandTitles: Record<AtlasBand["kind"], string> = { fundamental: "fundamenta
 function intensityNote(band: AtlasBand): string {
   const origin = band.lines.intensityOrigin;
   if (origin === null) return "No absolute intensities: the molecule file cites no band strength or transition dipole for this band.";
-  return `Absolute intensities from ${origin.replace(/-/g, " ")} dipole data, per molecule of the gas at natural isotopic abundance.`;
+  return `Absolute intensities ${intensityOriginWords[origin]}, per molecule of the gas at natural isotopic abundance.`;
 }
 
 function truncationNote(band: AtlasBand): string {
