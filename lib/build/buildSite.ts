@@ -5,15 +5,15 @@ import { atlasEntry, standardTemperaturesK, type AtlasEntry, type CalibrationMar
 import { linesCsv, linesDocument } from "../format/index.ts";
 import { loadMoleculesOrThrow, type Molecule } from "../molecules/index.ts";
 import { bandOverviewDescription, bandOverviewSvg } from "../plot/index.ts";
-import { lineIndexBytesPerLine } from "../browser/lineIndexCodec.ts";
+import { lineIndexBytesPerLine } from "../shared/lineIndexCodec.ts";
 import { contentDir, runEleventy } from "../site/runEleventy.ts";
 import { siteData, type EntryPlots } from "../site/pageData.ts";
 import { lineIndex, nameIndexJson } from "../site/searchIndexes.ts";
-import { benchModelPath, downloadPath, temperatureToken } from "../site/sitePaths.ts";
+import { benchModelPath, downloadPath, temperatureToken } from "../shared/sitePaths.ts";
 import { startBenchData, type BenchDataRun } from "./benchDataPool.ts";
 import { bundleBenchScript, bundleBrowserScript } from "./bundleBrowser.ts";
 import type { BuildCache } from "./buildCache.ts";
-import { buildIdentity, type BuildIdentity } from "./buildIdentity.ts";
+import { buildIdentity, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { checkInternalLinks } from "./checkLinks.ts";
 import { swapDirectory } from "./swapDirectory.ts";
 

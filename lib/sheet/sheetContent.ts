@@ -3,7 +3,7 @@ import { sameBand, type Band, type Branch, type Line, type SpeciesModel } from "
 import { calibrationConditionsText, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
-import { describeBuild } from "../build/buildIdentity.ts";
+import { describeBuild } from "../shared/buildIdentity.ts";
 import { displayText, safeLink } from "./displayText.ts";
 
 /** Lines at least this fraction of the band's strongest are marked strong in the table. */

@@ -4,11 +4,11 @@ import { calibrationByLine, calibrationCellText, calibrationConditionsText, cali
 import { lineShapeNames, type BenchSettings } from "../browser/benchSettings.ts";
 import { bandLabel, standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
-import { describeBuild, type BuildIdentity } from "../build/buildIdentity.ts";
+import { describeBuild, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { pageLineCells, signedSignificant, speciesDisplay } from "./formatCells.ts";
 import { ghsPictogramNames } from "./ghsPictograms.ts";
 import { nearInfraredLimitNm, nearInfraredRows } from "./nearInfraredIndex.ts";
-import { benchModelPath, benchPagePath, downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "./sitePaths.ts";
+import { benchModelPath, benchPagePath, downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 
 /** Plots of one entry, rendered beforehand (lib/plot) and inlined by the template. */
 export interface EntryPlots {
