@@ -6,7 +6,7 @@ import { bandLabel, standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { describeBuild, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { pageLineCells, signedSignificant, speciesDisplay } from "./formatCells.ts";
-import { ghsPictogramNames } from "./ghsPictograms.ts";
+import { ghsPictogramName } from "../shared/ghsPictograms.ts";
 import { nearInfraredLimitNm, nearInfraredRows } from "./nearInfraredIndex.ts";
 import { benchModelPath, benchPagePath, downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 
@@ -26,7 +26,7 @@ export interface HazardView {
 
 function hazardView(molecule: Molecule): HazardView {
   return {
-    pictograms: molecule.hazard.ghsPictograms.map((code) => ({ code, name: ghsPictogramNames[code] ?? "pictogram" })),
+    pictograms: molecule.hazard.ghsPictograms.map((code) => ({ code, name: ghsPictogramName(code) })),
     sentences: molecule.hazard.sentences,
     limitations: molecule.limitations,
   };
