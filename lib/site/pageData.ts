@@ -1,7 +1,7 @@
 import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
 import { calibrationByLine, calibrationCellText, calibrationConditionsText, calibrationCriteriaText, calibrationLineKey, fixed, resolutionsText, significant, type LineCalibration } from "../format/index.ts";
-import { lineShapeNames, type BenchSettings } from "../browser/benchSettings.ts";
+import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
 import { bandLabel, standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { describeBuild, type BuildIdentity } from "../shared/buildIdentity.ts";
