@@ -7,11 +7,9 @@ import { buildHelp, runBuild } from "./build.ts";
 import { runServe, serveHelp } from "./serve.ts";
 import { runSpectrum, spectrumHelp } from "./spectrum.ts";
 import { calibrationLinesHelp, runCalibrationLines } from "./calibrationLines.ts";
+import type { CommandResult } from "../../shared/commandResult.ts";
 
-export interface CommandResult {
-  output: string;
-  exitCode: number;
-}
+export type { CommandResult };
 
 export interface Command {
   summary: string;
