@@ -41,21 +41,28 @@ function referencesOf(fileName: string, text: string): { references: Reference[]
   const references: Reference[] = [];
   const unreadable: Reference[] = [];
   const lineOf = (node: ts.Node) => source.getLineAndCharacterOfPosition(node.getStart(source)).line + 1;
-  const literal = (node: ts.Node | undefined): string | null => (node && (ts.isStringLiteral(node) || ts.isNoSubstitutionTemplateLiteral(node)) ? node.text : null);
+  const literal = (node: ts.Node | undefined): string | null =>
+    node && (ts.isStringLiteral(node) || ts.isNoSubstitutionTemplateLiteral(node)) ? node.text : null;
   const add = (node: ts.Node, specifierNode: ts.Node | undefined, kind: Reference["kind"]) => {
     const specifier = literal(specifierNode);
-    (specifier === null ? unreadable : references).push({ specifier: specifier ?? (specifierNode?.getText(source) ?? ""), kind, line: lineOf(node) });
+    (specifier === null ? unreadable : references).push({ specifier: specifier ?? specifierNode?.getText(source) ?? "", kind, line: lineOf(node) });
   };
   const isImportMetaUrl = (node: ts.Node | undefined) =>
-    !!node && ts.isPropertyAccessExpression(node) && node.name.text === "url" && ts.isMetaProperty(node.expression) && node.expression.keywordToken === ts.SyntaxKind.ImportKeyword;
+    !!node &&
+    ts.isPropertyAccessExpression(node) &&
+    node.name.text === "url" &&
+    ts.isMetaProperty(node.expression) &&
+    node.expression.keywordToken === ts.SyntaxKind.ImportKeyword;
   const visit = (node: ts.Node): void => {
     if (ts.isImportDeclaration(node)) add(node, node.moduleSpecifier, "import");
     else if (ts.isExportDeclaration(node) && node.moduleSpecifier) add(node, node.moduleSpecifier, "export");
     else if (ts.isImportEqualsDeclaration(node) && ts.isExternalModuleReference(node.moduleReference)) add(node, node.moduleReference.expression, "require");
     else if (ts.isImportTypeNode(node) && ts.isLiteralTypeNode(node.argument)) add(node, node.argument.literal, "import type");
     else if (ts.isCallExpression(node) && node.expression.kind === ts.SyntaxKind.ImportKeyword) add(node, node.arguments[0], "dynamic import");
-    else if (ts.isCallExpression(node) && ts.isIdentifier(node.expression) && node.expression.text === "require" && node.arguments.length === 1) add(node, node.arguments[0], "require");
-    else if (ts.isNewExpression(node) && ts.isIdentifier(node.expression) && node.expression.text === "URL" && isImportMetaUrl(node.arguments?.[1])) add(node, node.arguments![0], "new URL");
+    else if (ts.isCallExpression(node) && ts.isIdentifier(node.expression) && node.expression.text === "require" && node.arguments.length === 1)
+      add(node, node.arguments[0], "require");
+    else if (ts.isNewExpression(node) && ts.isIdentifier(node.expression) && node.expression.text === "URL" && isImportMetaUrl(node.arguments?.[1]))
+      add(node, node.arguments![0], "new URL");
     ts.forEachChild(node, visit);
   };
   visit(source);
@@ -105,7 +112,9 @@ function libTargets(target: string, seen: Set<string>, followed: Set<string>): A
     return [];
   }
   return referencesOf(target, text).references.flatMap((r) =>
-    r.specifier.startsWith(".") ? libTargets(resolve(dirname(target), r.specifier), seen, followed).map((t) => ({ path: t.path, via: [show(target), ...t.via] })) : [],
+    r.specifier.startsWith(".")
+      ? libTargets(resolve(dirname(target), r.specifier), seen, followed).map((t) => ({ path: t.path, via: [show(target), ...t.via] }))
+      : [],
   );
 }
 
@@ -215,7 +224,9 @@ describe("import layers of lib/", () => {
   it("keeps lib/core free of everything outside it, Node's modules included", () => {
     const outside = [
       ...graph.edges.filter((e) => e.from === "core").map((e) => e.evidence),
-      ...graph.external.filter((x) => x.file.startsWith("lib/core/")).map((x) => `${x.file}:${x.line} imports ${x.specifier}${isNodeModule(x.specifier) ? " (a Node module)" : " (a package)"}`),
+      ...graph.external
+        .filter((x) => x.file.startsWith("lib/core/"))
+        .map((x) => `${x.file}:${x.line} imports ${x.specifier}${isNodeModule(x.specifier) ? " (a Node module)" : " (a package)"}`),
     ];
     expect(outside, "lib/core runs in the browser and in tests as pure functions: pass the data in instead").toEqual([]);
   });
