@@ -4,9 +4,9 @@ import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
 import { startJobs, type JobRun } from "../shared/jobPool.ts";
+import { sheetPath } from "../shared/sitePaths.ts";
 import { runBenchSheetJob, type BenchSheetJob } from "./benchSheetJob.ts";
 import { paperNames, type PaperName } from "./paper.ts";
-import { sheetFileName } from "./sheetFileName.ts";
 
 export interface WriteBenchSheetsOptions {
   molecules: Molecule[];
@@ -21,11 +21,6 @@ export interface WriteBenchSheetsOptions {
   papers?: PaperName[];
   /** Threads to render on, the main thread included; default 2 (both cores) when there are enough sheets to pay for starting a worker. */
   threads?: number;
-}
-
-/** Where the build puts one sheet, relative to the site folder (for links from the pages). */
-export function sheetPath(moleculeId: string, species: string, temperatureK: number, paper: PaperName): string {
-  return join("sheets", moleculeId, sheetFileName(species, temperatureK, paper));
 }
 
 /**
