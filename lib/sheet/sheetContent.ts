@@ -2,7 +2,7 @@ import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts"
 import { sameBand, type Band, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
 import { calibrationConditionsText, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
-import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
+import { SheetInputError, type SheetBuildIdentity } from "./sheetInput.ts";
 import { describeBuild } from "../shared/buildIdentity.ts";
 import { displayText, safeLink } from "./displayText.ts";
 

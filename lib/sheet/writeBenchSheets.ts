@@ -2,7 +2,7 @@ import { availableParallelism } from "node:os";
 import { join } from "node:path";
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
-import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
+import { SheetInputError, type SheetBuildIdentity } from "./sheetInput.ts";
 import { startJobs, type JobRun } from "../shared/jobPool.ts";
 import { sheetPath } from "../shared/sitePaths.ts";
 import { runBenchSheetJob, type BenchSheetJob } from "./benchSheetJob.ts";
