@@ -18,7 +18,10 @@ export type BenchDataRun = JobRun<MoleculeBenchData>;
  * computed exactly once, by one thread, with the same code, so the results are those of a
  * single-threaded build.
  */
-export function startBenchData(molecules: Molecule[], threads = Math.min(2, availableParallelism(), 1 + Math.floor(molecules.length / moleculesPerExtraThread))): BenchDataRun {
+export function startBenchData(
+  molecules: Molecule[],
+  threads = Math.min(2, availableParallelism(), 1 + Math.floor(molecules.length / moleculesPerExtraThread)),
+): BenchDataRun {
   return startJobs({
     jobs: molecules,
     workers: threads >= 2 && molecules.length >= 2 ? 1 : 0,

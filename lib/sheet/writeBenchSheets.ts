@@ -40,7 +40,10 @@ function sheetJobs(options: WriteBenchSheetsOptions): BenchSheetJob[] {
     if (!molecule) throw new SheetInputError(`no molecule "${entry.moleculeId}" for the atlas entry of ${entry.species} at ${entry.temperatureK} K`);
     for (const paper of papers) {
       const calibration = options.calibration?.find((c) => c.moleculeId === molecule.id);
-      jobs.push({ request: { molecule, entry, paper, build: options.build, ...(calibration ? { calibration } : {}) }, path: join(options.outDir, sheetPath(molecule.id, entry.species, entry.temperatureK, paper)) });
+      jobs.push({
+        request: { molecule, entry, paper, build: options.build, ...(calibration ? { calibration } : {}) },
+        path: join(options.outDir, sheetPath(molecule.id, entry.species, entry.temperatureK, paper)),
+      });
     }
   }
   return jobs;
