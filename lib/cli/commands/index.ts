@@ -1,3 +1,4 @@
+import type { CommandResult } from "../../shared/commandResult.ts";
 import { checkHelp, runCheck } from "./check.ts";
 import { findHelp, runFind } from "./find.ts";
 import { linesHelp, runLines } from "./lines.ts";
@@ -7,7 +8,6 @@ import { buildHelp, runBuild } from "./build.ts";
 import { runServe, serveHelp } from "./serve.ts";
 import { runSpectrum, spectrumHelp } from "./spectrum.ts";
 import { calibrationLinesHelp, runCalibrationLines } from "./calibrationLines.ts";
-import type { CommandResult } from "../../shared/commandResult.ts";
 
 export type { CommandResult };
 
