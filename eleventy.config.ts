@@ -3,7 +3,7 @@
 // data arrives as global data from the build, never from Eleventy data files.
 import syntaxHighlight from "@11ty/eleventy-plugin-syntaxhighlight";
 import { EleventyRenderPlugin } from "@11ty/eleventy";
-import { relativeUrl } from "./lib/site/sitePaths.ts";
+import { relativeUrl } from "./lib/shared/sitePaths.ts";
 import { constantSymbol } from "./lib/site/constantSymbols.ts";
 
 interface EleventyPageContext {

@@ -9,7 +9,7 @@ import { standardTemperaturesK } from "../lib/atlas/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
 import { lineIndex } from "../lib/site/searchIndexes.ts";
-import { temperatureToken } from "../lib/site/sitePaths.ts";
+import { temperatureToken } from "../lib/shared/sitePaths.ts";
 import { loadNote, runChild, seconds } from "./childProcess.ts";
 import { writeSyntheticMolecules } from "./syntheticMolecules.ts";
 

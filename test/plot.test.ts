@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { atlasEntry } from "../lib/atlas/index.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
-import { bandOverviewDescription, bandOverviewSpec, bandOverviewSvg, branchStyle, escapeXml, logFloor, overviewPoints } from "../lib/plot/index.ts";
+import { bandOverviewDescription, bandOverviewSpec, bandOverviewSvg, escapeXml, logFloor, overviewPoints } from "../lib/plot/index.ts";
+import { branchStyle } from "../lib/shared/branchStyle.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 
 const molecules = loadMoleculesOrThrow(shippedMoleculesDir);

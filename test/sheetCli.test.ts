@@ -1,7 +1,7 @@
 import { spawnSync } from "node:child_process";
 import { mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { Worker } from "node:worker_threads";
+import { Piscina } from "piscina";
 import { fileURLToPath } from "node:url";
 import { beforeAll, describe, expect, it } from "vitest";
 import { atlasEntry, selectMolecule } from "../lib/atlas/index.ts";
@@ -91,16 +91,11 @@ describe("writeBenchSheets", () => {
     const hcl = selectMolecule(shippedMolecules(), "hcl");
     const entry = atlasEntry(hcl, hcl.species[1], 273.15);
     const path = join(scratchDir("worker"), "sheets", "hcl", "1H37Cl-273.15K-a4.pdf");
-    const worker = new Worker(new URL("../lib/sheet/sheetWorkerEntry.mjs", import.meta.url));
+    const pool = new Piscina({ filename: fileURLToPath(new URL("../lib/sheet/sheetWorkerEntry.mjs", import.meta.url)), maxThreads: 1 });
     try {
-      const reply = await new Promise<{ id: number; ok: boolean; message?: string }>((resolve, reject) => {
-        worker.once("message", resolve);
-        worker.once("error", reject);
-        worker.postMessage({ id: 7, job: { request: { molecule: hcl, entry, paper: "a4", build }, path } });
-      });
-      expect(reply).toEqual({ id: 7, ok: true });
+      expect(await pool.run({ request: { molecule: hcl, entry, paper: "a4", build }, path })).toBe(path);
     } finally {
-      await worker.terminate();
+      await pool.destroy();
     }
     const inProcess = await renderBenchSheet({ molecule: hcl, entry, paper: "a4", build });
     expect(Buffer.compare(readFileSync(path), inProcess)).toBe(0);

@@ -4,15 +4,15 @@ import { join, relative } from "node:path";
 import MiniSearch from "minisearch";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { atlasEntry, defaultFindMinRelative, findInAtlas, standardTemperaturesK } from "../lib/atlas/index.ts";
-import { decodeLineIndex, lineIndexBytesPerLine } from "../lib/browser/lineIndexCodec.ts";
-import { nameIndexOptions, nameSearchOptions } from "../lib/browser/nameSearchOptions.ts";
+import { decodeLineIndex, lineIndexBytesPerLine } from "../lib/shared/lineIndexCodec.ts";
+import { nameIndexOptions, nameSearchOptions } from "../lib/shared/nameSearchOptions.ts";
 import { searchWavenumber } from "../lib/browser/wavenumberSearch.ts";
 import { buildSite } from "../lib/build/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { loadMoleculesOrThrow, MoleculeFileError } from "../lib/molecules/index.ts";
 import { accuracyRows, bandView } from "../lib/site/pageData.ts";
 import { lineIndex, nameIndexJson } from "../lib/site/searchIndexes.ts";
-import { lineRowId, relativeUrl, speciesPagePath } from "../lib/site/sitePaths.ts";
+import { lineRowId, relativeUrl, speciesPagePath } from "../lib/shared/sitePaths.ts";
 import { speciesDisplay } from "../lib/site/formatCells.ts";
 import { constantSymbol } from "../lib/site/constantSymbols.ts";
 

@@ -6,7 +6,7 @@ import { cellLinesOfModel, lengthUnitsCm, maxCellPressurePa, pressureUnitsPa, ty
 import { calibrationLines, cellSpectrum, CoreInputError, nearestGridIndex, type CalibrationLine, type CellConditions, type CellSpectrum, type Instrument } from "../core/index.ts";
 import { significant } from "../format/numbers.ts";
 import { calibrationWavenumberDigits, peakShiftDigits, spectrumWavenumberDigits, transmittanceDigits } from "../format/spectrumCells.ts";
-import { benchCommands, benchQuery, instrumentOf, readBenchSettings, type BenchSettings } from "./benchSettings.ts";
+import { benchCommands, benchQuery, instrumentOf, readBenchSettings, type BenchSettings } from "../format/benchSettings.ts";
 import { drawSpectrumPlot, type PlotSeries } from "./spectrumPlot.ts";
 import { el } from "./dom.ts";
 

@@ -4,10 +4,10 @@
 import MiniSearch from "minisearch";
 import { fixed, significant } from "../format/numbers.ts";
 import { parseSpectralPosition, positionToWavenumber, unitLabels, windowToWavenumber, type PositionUnit, type SpectralPosition } from "../core/spectralPosition.ts";
-import { decodeLineIndex, type DecodedLineIndex, type LineIndexFile } from "./lineIndexCodec.ts";
-import { nameIndexOptions, nameSearchOptions } from "./nameSearchOptions.ts";
+import { decodeLineIndex, type DecodedLineIndex, type LineIndexFile } from "../shared/lineIndexCodec.ts";
+import { nameIndexOptions, nameSearchOptions } from "../shared/nameSearchOptions.ts";
 import { searchWavenumber } from "./wavenumberSearch.ts";
-import { lineRowId } from "../site/sitePaths.ts";
+import { lineRowId } from "../shared/sitePaths.ts";
 import { el } from "./dom.ts";
 
 const root = document.documentElement.dataset.root ?? "";

@@ -1,7 +1,7 @@
 // A small SVG plot of a sampled spectrum, drawn in the browser: wavenumber axis in cm⁻¹, the
 // signal as one path (min/max of the samples under each pixel column, so no line disappears when
 // 100 000 samples meet 900 pixels), tick marks for the calibration-grade lines, a cursor read-out.
-import { axisTicks } from "../sheet/axisTicks.ts";
+import { axisTicks } from "../shared/axisTicks.ts";
 
 const svgNs = "http://www.w3.org/2000/svg";
 

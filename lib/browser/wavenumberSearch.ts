@@ -1,5 +1,5 @@
 import { nearbyLines, type NearbyLine } from "../core/nearbyLines.ts";
-import type { DecodedLineIndex, IndexedLine } from "./lineIndexCodec.ts";
+import type { DecodedLineIndex, IndexedLine } from "../shared/lineIndexCodec.ts";
 
 /** First index whose wavenumber is ≥ value (the index is sorted by wavenumber). */
 function lowerBound(values: Float64Array, value: number): number {

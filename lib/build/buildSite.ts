@@ -1,19 +1,19 @@
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync, cpSync } from "node:fs";
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync, cpSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
-import { fileURLToPath, pathToFileURL } from "node:url";
-import { atlasEntry, standardTemperaturesK, type AtlasEntry, type CalibrationMarks } from "../atlas/index.ts";
+import { fileURLToPath } from "node:url";
+import { atlasEntry, standardTemperaturesK, type AtlasEntry } from "../atlas/index.ts";
 import { linesCsv, linesDocument } from "../format/index.ts";
 import { loadMoleculesOrThrow, type Molecule } from "../molecules/index.ts";
 import { bandOverviewDescription, bandOverviewSvg } from "../plot/index.ts";
-import { lineIndexBytesPerLine } from "../browser/lineIndexCodec.ts";
+import { lineIndexBytesPerLine } from "../shared/lineIndexCodec.ts";
 import { contentDir, runEleventy } from "../site/runEleventy.ts";
 import { siteData, type EntryPlots } from "../site/pageData.ts";
 import { lineIndex, nameIndexJson } from "../site/searchIndexes.ts";
-import { benchModelPath, downloadPath, temperatureToken } from "../site/sitePaths.ts";
+import { benchModelPath, downloadPath, temperatureToken } from "../shared/sitePaths.ts";
 import { startBenchData, type BenchDataRun } from "./benchDataPool.ts";
 import { bundleBenchScript, bundleBrowserScript } from "./bundleBrowser.ts";
 import type { BuildCache } from "./buildCache.ts";
-import { buildIdentity, type BuildIdentity } from "./buildIdentity.ts";
+import { buildIdentity, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { checkInternalLinks } from "./checkLinks.ts";
 import { swapDirectory } from "./swapDirectory.ts";
 
@@ -70,14 +70,11 @@ export class BuildError extends Error {
   }
 }
 
-type StartBenchSheets = (options: { molecules: Molecule[]; entries: AtlasEntry[]; outDir: string; build: BuildIdentity; calibration?: CalibrationMarks[] }) => { finish(): Promise<string[]>; cancel(): Promise<void> };
+type StartBenchSheets = typeof import("../sheet/index.ts").startBenchSheets;
 
-/** The sheet renderer, once lib/sheet exports it; until then the site is built without sheets. */
-async function findSheetWriter(): Promise<StartBenchSheets | null> {
-  const index = fileURLToPath(new URL("../sheet/index.ts", import.meta.url));
-  if (!existsSync(index)) return null;
-  const sheetModule = (await import(pathToFileURL(index).href)) as { startBenchSheets?: StartBenchSheets };
-  return typeof sheetModule.startBenchSheets === "function" ? sheetModule.startBenchSheets : null;
+/** Loaded only when sheets are wanted: PDFKit and the fonts take about 0.4 s to load, which page-only builds (the tests) skip. */
+async function loadSheetWriter(): Promise<StartBenchSheets> {
+  return (await import("../sheet/index.ts")).startBenchSheets;
 }
 
 function writeFile(root: string, path: string, text: string) {
@@ -113,7 +110,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   const entries: AtlasEntry[] = [...entriesOf.values()].flat();
   const entriesMs = lap();
   const build = options.build ?? buildIdentity(repoDir);
-  const startBenchSheets = options.sheets === false ? null : await findSheetWriter();
+  const startBenchSheets = options.sheets === false ? null : await loadSheetWriter();
 
   const outDir = resolve(options.outDir);
   mkdirSync(dirname(outDir), { recursive: true });
@@ -196,7 +193,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     if (sheetRun) {
       sheets = await sheetRun.finish();
       log(`bench sheets: ${sheets.length} PDFs`);
-    } else log(options.sheets === false ? "bench sheets: not requested" : "bench sheets: skipped (lib/sheet does not export writeBenchSheets yet)");
+    } else log("bench sheets: not requested");
 
     const sheetsMs = sheetRun ? lap() : 0;
     const links = checkInternalLinks(work);

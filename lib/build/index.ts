@@ -1,5 +1,4 @@
 export * from "./buildCache.ts";
-export * from "./buildIdentity.ts";
 export * from "./buildSite.ts";
 export * from "./checkLinks.ts";
 export * from "./swapDirectory.ts";

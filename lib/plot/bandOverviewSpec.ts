@@ -1,6 +1,6 @@
 import type { AtlasEntry } from "../atlas/index.ts";
 import { fixed } from "../format/index.ts";
-import { bandOriginColour, branchStyle } from "./branchStyle.ts";
+import { bandOriginColour, branchStyle } from "../shared/branchStyle.ts";
 
 export type IntensityScale = "linear" | "log";
 

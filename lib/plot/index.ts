@@ -1,4 +1,3 @@
-export * from "./branchStyle.ts";
 export * from "./bandOverviewSpec.ts";
 export * from "./renderSvg.ts";
 export * from "./bandOverviewSvg.ts";

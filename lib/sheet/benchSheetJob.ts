@@ -1,6 +1,6 @@
 import { mkdirSync } from "node:fs";
 import { dirname } from "node:path";
-import { SheetInputError } from "./buildIdentity.ts";
+import { SheetInputError } from "./sheetInput.ts";
 import { renderBenchSheet, type BenchSheetRequest } from "./renderBenchSheet.ts";
 import { writeFileAtomic } from "./writeFileAtomic.ts";
 

@@ -1,4 +1,4 @@
-import { ghsPictogramText } from "./ghsPictograms.ts";
+import { ghsPictogramText } from "../shared/ghsPictograms.ts";
 import type { SheetContent } from "./sheetContent.ts";
 import { ink, rule, sheetFonts, softInk } from "./sheetStyle.ts";
 

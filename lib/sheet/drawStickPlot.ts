@@ -1,5 +1,5 @@
 import type { Branch } from "../core/index.ts";
-import { axisTicks } from "./axisTicks.ts";
+import { axisTicks } from "../shared/axisTicks.ts";
 import { drawStick } from "./drawMarker.ts";
 import type { SheetContent } from "./sheetContent.ts";
 import { branchStyle, ink, rule, sheetFonts, softInk } from "./sheetStyle.ts";

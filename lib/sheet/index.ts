@@ -1,4 +1,4 @@
-export * from "./buildIdentity.ts";
+export * from "./sheetInput.ts";
 export * from "./paper.ts";
 export * from "./sheetFileName.ts";
 export * from "./sheetContent.ts";

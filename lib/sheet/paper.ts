@@ -1,4 +1,4 @@
-import { SheetInputError } from "./buildIdentity.ts";
+import { SheetInputError } from "./sheetInput.ts";
 
 /** Page sizes in PostScript points (1/72 in): ISO 216 A4 is 210 × 297 mm, US Letter 8.5 × 11 in. */
 export const paperSizes = {

@@ -1,7 +1,7 @@
 import PDFDocument from "pdfkit";
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
-import { buildDate, type SheetBuildIdentity } from "./buildIdentity.ts";
+import { buildDate, type SheetBuildIdentity } from "./sheetInput.ts";
 import { drawLegendLine } from "./drawLegend.ts";
 import { drawTableHead, drawTableRows, tableHeadHeightPt, tableRowHeightPt } from "./drawLineTable.ts";
 import { drawCautionBox, drawContinuationHeader, drawSheetFooter, drawSheetHeader, footerHeight } from "./drawSheetParts.ts";

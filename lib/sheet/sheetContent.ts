@@ -2,8 +2,8 @@ import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts"
 import { sameBand, type Band, type BandLines, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
 import { accuracyText, calibrationConditionsText, intensityOriginWords, criteriaPhrase, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
-import { SheetInputError, type SheetBuildIdentity } from "./buildIdentity.ts";
-import { describeBuild } from "../build/buildIdentity.ts";
+import { SheetInputError, type SheetBuildIdentity } from "./sheetInput.ts";
+import { describeBuild } from "../shared/buildIdentity.ts";
 import { displayText, safeLink } from "./displayText.ts";
 
 /** Lines at least this fraction of the band's strongest are marked strong in the table. */

@@ -1,8 +1,8 @@
 import type { Branch } from "../core/index.ts";
-import { branchStyle as plotBranchStyle } from "../plot/branchStyle.ts";
+import { branchStyle as plotBranchStyle } from "../shared/branchStyle.ts";
 
 // The sheet's look in one place. The branch colours, stick patterns and marker shapes are the
-// website plot's (lib/plot/branchStyle.ts), so a printed sheet and a page read the same way;
+// website plot's (lib/shared/branchStyle.ts), so a printed sheet and a page read the same way;
 // the stroke and the marker tell P from R again on a black-and-white printout.
 export const sheetFonts = { regular: "sheet-regular", bold: "sheet-bold" } as const;
 

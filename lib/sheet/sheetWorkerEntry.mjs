@@ -1,6 +1,11 @@
 // Worker threads start without the TypeScript loader the main thread has; register tsx first,
-// as bin/bandatlas.js does, then load the worker's TypeScript.
+// as bin/bandatlas.js does, then load the worker's TypeScript. No top-level await: the pool reads
+// this module's default export without waiting for one.
 import { register } from "tsx/esm/api";
 
 register();
-await import("./sheetWorker.ts");
+const worker = import("./sheetWorker.ts");
+
+export default async function runSheetJob(job) {
+  return (await worker).default(job);
+}

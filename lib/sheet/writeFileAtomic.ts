@@ -1,7 +1,7 @@
 import { existsSync, renameSync, statSync, unlinkSync, writeFileSync } from "node:fs";
 import { basename, dirname, join, resolve } from "node:path";
 import { threadId } from "node:worker_threads";
-import { SheetInputError } from "./buildIdentity.ts";
+import { SheetInputError } from "./sheetInput.ts";
 
 function reason(error: unknown, dir: string): string {
   const code = (error as NodeJS.ErrnoException | null)?.code;

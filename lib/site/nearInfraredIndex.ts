@@ -1,7 +1,7 @@
 import { defaultTemperatureK, type AtlasEntry } from "../atlas/index.ts";
 import { fixed } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
-import { speciesPagePath } from "./sitePaths.ts";
+import { speciesPagePath } from "../shared/sitePaths.ts";
 
 /** The short-wavelength end of the near infrared as the telecom and NIR trade reads it, 2.5 µm (common practice, no source). */
 export const nearInfraredLimitNm = 2500;

@@ -1,14 +1,14 @@
 import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
 import { accuracyText, intensityOriginWords, calibrationByLine, calibrationCellText, positionStatusWords, calibrationConditionsText, calibrationCriteriaText, calibrationLineKey, fixed, resolutionsText, significant, type LineCalibration } from "../format/index.ts";
-import { lineShapeNames, type BenchSettings } from "../browser/benchSettings.ts";
+import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
 import { bandLabel, standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
-import { describeBuild, type BuildIdentity } from "../build/buildIdentity.ts";
+import { describeBuild, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { pageLineCells, signedSignificant, speciesDisplay } from "./formatCells.ts";
-import { ghsPictogramNames } from "./ghsPictograms.ts";
+import { ghsPictogramName } from "../shared/ghsPictograms.ts";
 import { nearInfraredLimitNm, nearInfraredRows } from "./nearInfraredIndex.ts";
-import { benchModelPath, benchPagePath, downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "./sitePaths.ts";
+import { benchModelPath, benchPagePath, downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 
 /** Plots of one entry, rendered beforehand (lib/plot) and inlined by the template. */
 export interface EntryPlots {
@@ -26,7 +26,7 @@ export interface HazardView {
 
 function hazardView(molecule: Molecule): HazardView {
   return {
-    pictograms: molecule.hazard.ghsPictograms.map((code) => ({ code, name: ghsPictogramNames[code] ?? "pictogram" })),
+    pictograms: molecule.hazard.ghsPictograms.map((code) => ({ code, name: ghsPictogramName(code) })),
     sentences: molecule.hazard.sentences,
     limitations: molecule.limitations,
   };

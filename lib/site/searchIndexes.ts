@@ -1,9 +1,9 @@
 import MiniSearch from "minisearch";
 import { atlasLines, defaultFindMinRelative, entryLines, type AtlasEntry } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
-import { encodeLineIndex, type LineIndexFile } from "../browser/lineIndexCodec.ts";
-import { nameIndexOptions, type NameDocument } from "../browser/nameSearchOptions.ts";
-import { moleculePagePath, speciesPagePath } from "./sitePaths.ts";
+import { encodeLineIndex, type LineIndexFile } from "../shared/lineIndexCodec.ts";
+import { nameIndexOptions, type NameDocument } from "../shared/nameSearchOptions.ts";
+import { moleculePagePath, speciesPagePath } from "../shared/sitePaths.ts";
 
 /** The name/formula/alias/CAS index as MiniSearch's JSON, molecules in id order. */
 export function nameIndexJson(molecules: Molecule[]): string {

@@ -2,7 +2,7 @@ import { join } from "node:path";
 import { BuildError, buildSite, repoDir, siteStats } from "../../build/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
 import { parseCommandLine } from "../options.ts";
-import type { CommandResult } from "./index.ts";
+import type { CommandResult } from "../../shared/commandResult.ts";
 
 export const buildHelp = `bandatlas build [options]
 

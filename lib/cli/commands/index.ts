@@ -1,3 +1,4 @@
+import type { CommandResult } from "../../shared/commandResult.ts";
 import { checkHelp, runCheck } from "./check.ts";
 import { findHelp, runFind } from "./find.ts";
 import { linesHelp, runLines } from "./lines.ts";
@@ -9,10 +10,7 @@ import { runSpectrum, spectrumHelp } from "./spectrum.ts";
 import { calibrationLinesHelp, runCalibrationLines } from "./calibrationLines.ts";
 import { fitHelp, runFit } from "./fit.ts";
 
-export interface CommandResult {
-  output: string;
-  exitCode: number;
-}
+export type { CommandResult };
 
 export interface Command {
   summary: string;

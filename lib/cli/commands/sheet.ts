@@ -1,6 +1,6 @@
 import { fileURLToPath } from "node:url";
 import { atlasEntry, calibrationMarks, defaultCellConditions, defaultTemperatureK, selectSpecies } from "../../atlas/index.ts";
-import { buildIdentity } from "../../build/buildIdentity.ts";
+import { buildIdentity } from "../../shared/buildIdentity.ts";
 import { parsePaper, renderBenchSheet, SheetInputError, sheetFileName, writeFileAtomic } from "../../sheet/index.ts";
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
 import { parseCommandLine, temperatureOption } from "../options.ts";

@@ -34,7 +34,7 @@ export function downloadPath(moleculeId: string, species: string, temperatureK: 
   return `${speciesPageDir(moleculeId, species, temperatureK)}/${moleculeId}-${species}-${temperatureToken(temperatureK)}K-${bandLabel}.${format}`;
 }
 
-/** Bench sheets, written by lib/sheet: sheets/<moleculeId>/<species>-<T>K-<a4|letter>.pdf. */
+/** A bench sheet: the pages link here and lib/sheet writes the file here. sheets/<moleculeId>/<species>-<T>K-<a4|letter>.pdf. */
 export function sheetPath(moleculeId: string, species: string, temperatureK: number, paper: "a4" | "letter"): string {
   return `sheets/${moleculeId}/${species}-${temperatureToken(temperatureK)}K-${paper}.pdf`;
 }

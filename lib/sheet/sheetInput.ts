@@ -1,4 +1,4 @@
-import type { BuildIdentity } from "../build/buildIdentity.ts";
+import type { BuildIdentity } from "../shared/buildIdentity.ts";
 
 /** Which build made a sheet (the build's own identity type), printed so an old printout can be recognised. */
 export type SheetBuildIdentity = BuildIdentity;
