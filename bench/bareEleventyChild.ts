@@ -20,7 +20,10 @@ try {
   const eleventy = new Eleventy(input, join(root, "site"), {
     quietMode: true,
     config(config: any) {
-      config.addGlobalData("items", Array.from({ length: pages }, (_, i) => i));
+      config.addGlobalData(
+        "items",
+        Array.from({ length: pages }, (_, i) => i),
+      );
     },
   });
   await eleventy.write();

@@ -13,7 +13,14 @@ import { temperatureToken } from "../lib/shared/sitePaths.ts";
 import { loadNote, runChild, seconds } from "./childProcess.ts";
 import { writeSyntheticMolecules } from "./syntheticMolecules.ts";
 
-const types: Record<string, string> = { ".html": "text/html", ".js": "text/javascript", ".json": "application/json", ".css": "text/css", ".svg": "image/svg+xml", ".bin": "application/octet-stream" };
+const types: Record<string, string> = {
+  ".html": "text/html",
+  ".js": "text/javascript",
+  ".json": "application/json",
+  ".css": "text/css",
+  ".svg": "image/svg+xml",
+  ".bin": "application/octet-stream",
+};
 
 /**
  * The home page's wavenumber search over an atlas of N invented molecules, in Chromium: the
@@ -33,7 +40,11 @@ export async function benchBrowserSearch(n: number, queries: number): Promise<st
     createReadStream(file).pipe(res);
   });
   try {
-    const built = await runChild<{ lines: Array<{ temperatureK: number; lines: number }> }>("./buildChild.ts", { moleculesDir: shippedMoleculesDir, outDir: join(work, "site"), sheets: false });
+    const built = await runChild<{ lines: Array<{ temperatureK: number; lines: number }> }>("./buildChild.ts", {
+      moleculesDir: shippedMoleculesDir,
+      outDir: join(work, "site"),
+      sheets: false,
+    });
     const molecules = loadMoleculesOrThrow(writeSyntheticMolecules(join(work, "molecules"), n));
     const searchDir = join(work, "site/assets/search");
     const indexed = [];
@@ -43,7 +54,10 @@ export async function benchBrowserSearch(n: number, queries: number): Promise<st
       writeFileSync(join(searchDir, `lines-${temperatureToken(temperatureK)}K.json`), JSON.stringify(file));
       indexed.push({ temperatureK, lines: file.count });
     }
-    const out = [`machine: ${await loadNote()}`, `shipped site built in ${seconds(built.wallMs)} (no sheets); line indexes of ${n} invented molecules made in ${seconds(performance.now() - started)} and put in its place`];
+    const out = [
+      `machine: ${await loadNote()}`,
+      `shipped site built in ${seconds(built.wallMs)} (no sheets); line indexes of ${n} invented molecules made in ${seconds(performance.now() - started)} and put in its place`,
+    ];
     let totalLines = 0;
     let totalGzip = 0;
     let totalRaw = 0;
@@ -54,15 +68,28 @@ export async function benchBrowserSearch(n: number, queries: number): Promise<st
       totalLines += lines;
       totalGzip += gz;
       totalRaw += raw;
-      if (temperatureK === 296) out.push(`index at 296 K: ${lines} lines, ${raw} bytes, ${gz} gzip = ${(gz / lines).toFixed(2)} bytes/line compressed (${(raw / lines).toFixed(2)} uncompressed)`);
+      if (temperatureK === 296)
+        out.push(
+          `index at 296 K: ${lines} lines, ${raw} bytes, ${gz} gzip = ${(gz / lines).toFixed(2)} bytes/line compressed (${(raw / lines).toFixed(2)} uncompressed)`,
+        );
     }
-    out.push(`index, all temperatures: ${totalLines} lines, ${(totalGzip / totalLines).toFixed(2)} bytes/line compressed (${(totalRaw / totalLines).toFixed(2)} uncompressed); target ≤ 16 bytes/line`);
+    out.push(
+      `index, all temperatures: ${totalLines} lines, ${(totalGzip / totalLines).toFixed(2)} bytes/line compressed (${(totalRaw / totalLines).toFixed(2)} uncompressed); target ≤ 16 bytes/line`,
+    );
 
     await new Promise<void>((r) => server.listen(0, "127.0.0.1", r));
     const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}/`;
     const browser = await chromium.launch({
       executablePath: "/usr/bin/chromium",
-      args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--no-first-run", "--disable-sync"],
+      args: [
+        "--headless",
+        "--no-sandbox",
+        "--disable-gpu",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--no-first-run",
+        "--disable-sync",
+      ],
     });
     try {
       const page = await browser.newPage();
@@ -92,7 +119,9 @@ export async function benchBrowserSearch(n: number, queries: number): Promise<st
       const [first, ...rest] = times;
       rest.sort((a, b) => a - b);
       out.push(`first query (fetching and decoding the 296 K index): ${first.toFixed(1)} ms`);
-      out.push(`query in Chromium over ${n} molecules: median ${rest[Math.floor(rest.length / 2)].toFixed(2)} ms, slowest ${rest[rest.length - 1].toFixed(2)} ms of ${rest.length}; target ≤ 20 ms`);
+      out.push(
+        `query in Chromium over ${n} molecules: median ${rest[Math.floor(rest.length / 2)].toFixed(2)} ms, slowest ${rest[rest.length - 1].toFixed(2)} ms of ${rest.length}; target ≤ 20 ms`,
+      );
     } finally {
       await browser.close();
     }

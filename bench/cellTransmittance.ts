@@ -10,7 +10,13 @@ import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
  */
 export function benchCellTransmittance(): string[] {
   const co = loadMoleculesOrThrow(shippedMoleculesDir).find((m) => m.id === "co")!;
-  const settings = { conditions: defaultCellConditions, fromCm: 2000, toCm: 2300, instrument: { kind: "fourier-transform" as const, resolutionCm: 0.5, apodization: "triangular" as const }, stepCm: 0.002 };
+  const settings = {
+    conditions: defaultCellConditions,
+    fromCm: 2000,
+    toCm: 2300,
+    instrument: { kind: "fourier-transform" as const, resolutionCm: 0.5, apodization: "triangular" as const },
+    stepCm: 0.002,
+  };
   const run = () => moleculeCellSpectrum(co, settings, cellLineSet(co, settings.conditions));
   for (let i = 0; i < 3; i++) run();
   const times: number[] = [];

@@ -19,7 +19,10 @@ export interface ChildResult<T> {
 export function runChild<T>(script: string, args: unknown, extraNodeArgs: string[] = []): Promise<ChildResult<T>> {
   return new Promise((resolve, reject) => {
     const started = performance.now();
-    const child = spawn(process.execPath, [...extraNodeArgs, "--import", "tsx", fileURLToPath(new URL(script, import.meta.url)), JSON.stringify(args)], { cwd: repoDir, stdio: ["ignore", "pipe", "pipe"] });
+    const child = spawn(process.execPath, [...extraNodeArgs, "--import", "tsx", fileURLToPath(new URL(script, import.meta.url)), JSON.stringify(args)], {
+      cwd: repoDir,
+      stdio: ["ignore", "pipe", "pipe"],
+    });
     let out = "";
     let err = "";
     child.stdout.on("data", (d) => (out += d));

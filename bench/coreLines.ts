@@ -7,7 +7,9 @@ import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
  * every shipped diatomic species, fundamental and first overtone, down to 1e-6 of the strongest line, at 296 K and 1000 K.
  */
 export function benchCoreLines(): { linesPerSecond: number; lines: number; seconds: number } {
-  const species = loadMoleculesOrThrow(shippedMoleculesDir).flatMap((m) => m.species.map((s) => s.model)).filter((model) => !model.linear);
+  const species = loadMoleculesOrThrow(shippedMoleculesDir)
+    .flatMap((m) => m.species.map((s) => s.model))
+    .filter((model) => !model.linear);
   const work = species.flatMap((model) => [296, 1000].map((temperatureK) => ({ model, temperatureK, q: partitionFunction(model.dunham, temperatureK) })));
   const run = () => {
     let count = 0;

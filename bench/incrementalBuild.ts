@@ -26,7 +26,11 @@ export async function benchIncremental(saves: number): Promise<string[]> {
   const site = join(work, "site");
   cpSync(shippedMoleculesDir, molecules, { recursive: true });
   const port = 20000 + Math.floor(Math.random() * 20000);
-  const child = spawn(process.execPath, [fileURLToPath(new URL("../bin/bandatlas.js", import.meta.url)), "serve", "--port", String(port), "--molecules", molecules, "--out", site], { cwd: repoDir, stdio: ["ignore", "pipe", "pipe"] });
+  const child = spawn(
+    process.execPath,
+    [fileURLToPath(new URL("../bin/bandatlas.js", import.meta.url)), "serve", "--port", String(port), "--molecules", molecules, "--out", site],
+    { cwd: repoDir, stdio: ["ignore", "pipe", "pipe"] },
+  );
   let output = "";
   child.stdout.on("data", (d) => (output += d));
   child.stderr.on("data", (d) => (output += d));

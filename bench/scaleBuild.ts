@@ -13,7 +13,11 @@ export async function benchScale(sizes: number[]): Promise<string[]> {
     const runs: Array<{ n: number; wallMs: number; maxRssMb: number }> = [];
     for (const n of sizes) {
       const moleculesDir = writeSyntheticMolecules(join(work, `molecules-${n}`), n);
-      const r = await runChild<{ timings: BuildTimings; pages: number; sheets: number }>("./buildChild.ts", { moleculesDir, outDir: join(work, `site-${n}`), sheets: true });
+      const r = await runChild<{ timings: BuildTimings; pages: number; sheets: number }>("./buildChild.ts", {
+        moleculesDir,
+        outDir: join(work, `site-${n}`),
+        sheets: true,
+      });
       rmSync(join(work, `site-${n}`), { recursive: true, force: true });
       runs.push({ n, wallMs: r.wallMs, maxRssMb: r.maxRssMb });
       const t = r.value.timings;
@@ -27,7 +31,9 @@ export async function benchScale(sizes: number[]): Promise<string[]> {
     if (runs.length > 1) {
       const growth = last.wallMs / first.wallMs;
       const factor = last.n / first.n;
-      out.push(`growth ${first.n} → ${last.n}: ${growth.toFixed(2)}× the time for ${factor}× the molecules; target ≤ ${(factor * 1.2).toFixed(0)}× (500 ≤ 12× of 50)`);
+      out.push(
+        `growth ${first.n} → ${last.n}: ${growth.toFixed(2)}× the time for ${factor}× the molecules; target ≤ ${(factor * 1.2).toFixed(0)}× (500 ≤ 12× of 50)`,
+      );
     }
     out.push(`machine: ${await loadNote()} at the end`);
     return out;

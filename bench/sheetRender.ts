@@ -26,5 +26,7 @@ export async function benchSheetRender(): Promise<string[]> {
   const used = process.cpuUsage(cpu);
   const cpuMs = (used.user + used.system) / 1000 / requests.length;
   const wallMs = (performance.now() - started) / requests.length;
-  return [`${requests.length} sheets on one thread: ${cpuMs.toFixed(1)} ms CPU each (${wallMs.toFixed(1)} ms wall), ${(bytes / requests.length / 1024).toFixed(0)} KiB each; target ≤ 50 ms of one core`];
+  return [
+    `${requests.length} sheets on one thread: ${cpuMs.toFixed(1)} ms CPU each (${wallMs.toFixed(1)} ms wall), ${(bytes / requests.length / 1024).toFixed(0)} KiB each; target ≤ 50 ms of one core`,
+  ];
 }

@@ -16,7 +16,7 @@ const pairs: Array<{ atoms: [string, string]; massNumbers: [number, number] }> =
 /** A small deterministic generator, so the same N gives the same files on every run. */
 function random(seed: number) {
   let s = seed >>> 0;
-  return () => ((s = (s * 1664525 + 1013904223) >>> 0) / 2 ** 32);
+  return () => (s = (s * 1664525 + 1013904223) >>> 0) / 2 ** 32;
 }
 
 /** An invented CAS-shaped number with a valid check digit (the loader checks it), unique per i. */

@@ -21,8 +21,14 @@ describe("12C16O 1-0 against published values", () => {
     // Chemistry and Physics, table "Wavenumbers for the v = 1-0 band of CO" (from Maki & Wells,
     // NIST SP 821, 1991), read directly. Handbook constants are good to ~1e-4–1e-3 cm⁻¹ for CO.
     const published: Record<string, number> = {
-      "R(0)": 2147.081132, "R(1)": 2150.856006, "R(2)": 2154.595581, "R(3)": 2158.29971,
-      "P(1)": 2139.426071, "P(2)": 2135.546178, "P(3)": 2131.631574, "P(4)": 2127.682404,
+      "R(0)": 2147.081132,
+      "R(1)": 2150.856006,
+      "R(2)": 2154.595581,
+      "R(3)": 2158.29971,
+      "P(1)": 2139.426071,
+      "P(2)": 2135.546178,
+      "P(3)": 2131.631574,
+      "P(4)": 2127.682404,
     };
     for (const [label, wavenumber] of Object.entries(published)) {
       expect(Math.abs(line(co, label).wavenumber - wavenumber), label).toBeLessThan(5e-4);
@@ -61,8 +67,16 @@ describe("12C16O 1-0 against published values", () => {
 describe("rigid rotor and harmonic oscillator limit", () => {
   const bCm = 10;
   const rigid: SpeciesModel = {
-    label: "rigid", massNumbers: [1, 35], atomMassesU: [1, 35], abundance: 1, reducedMassU: reducedMassU(1, 35),
-    dunham: equilibriumToDunham({ omegaE: 3000, bE: bCm }), constantsOrigin: "cited", constantsSourceKey: "none", intensities: [], referenceLines: [],
+    label: "rigid",
+    massNumbers: [1, 35],
+    atomMassesU: [1, 35],
+    abundance: 1,
+    reducedMassU: reducedMassU(1, 35),
+    dunham: equilibriumToDunham({ omegaE: 3000, bE: bCm }),
+    constantsOrigin: "cited",
+    constantsSourceKey: "none",
+    intensities: [],
+    referenceLines: [],
   };
   const result = bandLines(rigid, { vUpper: 1, vLower: 0 }, at296);
   it("spaces the lines by exactly 2B within each branch", () => {
@@ -107,7 +121,10 @@ describe("isotopologues", () => {
     // from H35Cl must agree with them to within a few tenths of a cm⁻¹ (mass-dependent corrections).
     const h = shippedSpecies("hcl", "H35Cl");
     const d = shippedSpecies("hcl", "D35Cl");
-    const scaled: SpeciesModel = { ...d, dunham: h.dunham.map((c) => ({ ...c, valueCm: c.valueCm * Math.pow(h.reducedMassU / d.reducedMassU, c.k / 2 + c.l) })) };
+    const scaled: SpeciesModel = {
+      ...d,
+      dunham: h.dunham.map((c) => ({ ...c, valueCm: c.valueCm * Math.pow(h.reducedMassU / d.reducedMassU, c.k / 2 + c.l) })),
+    };
     const cited = bandLines(d, { vUpper: 1, vLower: 0 }, at296).bandOrigin;
     const predicted = bandLines(scaled, { vUpper: 1, vLower: 0 }, at296).bandOrigin;
     expect(Math.abs(cited - predicted)).toBeLessThan(0.5);

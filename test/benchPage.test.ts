@@ -63,10 +63,14 @@ afterAll(async () => {
 });
 
 const ready = (resolution: string) =>
-  page.waitForFunction((r) => {
-    const b = document.getElementById("bench")!;
-    return b.dataset.state === "ready" && b.dataset.resolution === r;
-  }, resolution, { timeout: 60_000 });
+  page.waitForFunction(
+    (r) => {
+      const b = document.getElementById("bench")!;
+      return b.dataset.state === "ready" && b.dataset.resolution === r;
+    },
+    resolution,
+    { timeout: 60_000 },
+  );
 
 describe("the CO bench page in Chromium", () => {
   it("shows the hazard caution, the defaults of a 10 cm cell, and a plot with the calibration-grade list", async () => {
@@ -94,8 +98,29 @@ describe("the CO bench page in Chromium", () => {
     expect(new URL(page.url()).searchParams.get("resolutionCm")).toBe("2");
 
     // The same cell on the command line; the page rounds with the CLI's digit formatters.
-    const settings = ["--temperature", "296", "--pressure", "20", "Torr", "--path", "10", "cm", "--mole-fraction", "1", "--resolution", "2", "--apodization", "triangular", "--from", "2100", "--to", "2200"];
-    const spectrum = JSON.parse(await cli("spectrum", "co", ...settings, "--format", "json")) as { samples: Array<{ wavenumber: number; transmittance: number }> };
+    const settings = [
+      "--temperature",
+      "296",
+      "--pressure",
+      "20",
+      "Torr",
+      "--path",
+      "10",
+      "cm",
+      "--mole-fraction",
+      "1",
+      "--resolution",
+      "2",
+      "--apodization",
+      "triangular",
+      "--from",
+      "2100",
+      "--to",
+      "2200",
+    ];
+    const spectrum = JSON.parse(await cli("spectrum", "co", ...settings, "--format", "json")) as {
+      samples: Array<{ wavenumber: number; transmittance: number }>;
+    };
     // The deepest sample (a line centre) and one in a wing: both must agree to the printed digits.
     const deepest = spectrum.samples.reduce((a, b) => (b.transmittance < a.transmittance ? b : a));
     const wing = spectrum.samples[Math.floor(spectrum.samples.length / 3)];
@@ -107,9 +132,13 @@ describe("the CO bench page in Chromium", () => {
     }
     expect(deepest.transmittance).toBeLessThan(0.95);
 
-    const calibration = JSON.parse(await cli("calibration-lines", "co", ...settings, "--format", "json")) as { lines: Array<{ label: string; species: string; peakShiftCm: number | null }> };
+    const calibration = JSON.parse(await cli("calibration-lines", "co", ...settings, "--format", "json")) as {
+      lines: Array<{ label: string; species: string; peakShiftCm: number | null }>;
+    };
     const rows = await page.locator("#bench-lines tbody tr").evaluateAll((trs) => trs.map((tr) => [...tr.children].map((c) => c.textContent!)));
-    expect(rows.map((r) => `${r[1]} ${r[0]} ${r[7]}`)).toEqual(calibration.lines.map((l) => `${l.species} ${l.label} ${l.peakShiftCm === null ? "no peak" : peakShiftDigits(l.peakShiftCm)}`));
+    expect(rows.map((r) => `${r[1]} ${r[0]} ${r[7]}`)).toEqual(
+      calibration.lines.map((l) => `${l.species} ${l.label} ${l.peakShiftCm === null ? "no peak" : peakShiftDigits(l.peakShiftCm)}`),
+    );
     expect(problems).toEqual([]);
   });
 
@@ -171,7 +200,10 @@ describe("calibration marks on the bench sheets", () => {
     expect(text).toContain("a 10 cm cell of the pure gas at 296 K and 20 Torr");
     // Only the validated low-J lines qualify; at 1 cm⁻¹ some are isolated, at 4 cm⁻¹ none is
     // (12C16O 1-0 lines are 3.5–4 cm⁻¹ apart near the origin, fact of the trade).
-    const at1 = marks.byResolution.find((r) => r.resolutionCm === 1)!.lines.filter((l) => l.species === "12C16O" && l.band === "1-0").map((l) => l.label);
+    const at1 = marks.byResolution
+      .find((r) => r.resolutionCm === 1)!
+      .lines.filter((l) => l.species === "12C16O" && l.band === "1-0")
+      .map((l) => l.label);
     expect(at1.length).toBeGreaterThan(0);
     expect(text).toContain(`at 1 cm⁻¹`);
     for (const label of at1) expect(text).toContain(label);

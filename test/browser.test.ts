@@ -72,9 +72,21 @@ describe("the site in Chromium", () => {
 
   it("finds lines near a wavenumber exactly as `bandatlas find` does and lands on the row", async () => {
     const wavenumber = "2143.3";
-    const expected = JSON.parse(await cli("find", wavenumber, "--format", "json")).matches as Array<{ molecule: string; species: string; band: string; label: string; wavenumber: number; offset: number; relativeIntensity: number }>;
+    const expected = JSON.parse(await cli("find", wavenumber, "--format", "json")).matches as Array<{
+      molecule: string;
+      species: string;
+      band: string;
+      label: string;
+      wavenumber: number;
+      offset: number;
+      relativeIntensity: number;
+    }>;
     expect(expected.length).toBeGreaterThan(2);
-    const table = (await cli("find", wavenumber)).trim().split("\n").slice(4).map((l) => l.trim().split(/\s+/));
+    const table = (await cli("find", wavenumber))
+      .trim()
+      .split("\n")
+      .slice(4)
+      .map((l) => l.trim().split(/\s+/));
     await page.goto(base);
     await page.fill("#wavenumber", wavenumber);
     await page.click("form[data-search=wavenumber] button");
@@ -94,7 +106,11 @@ describe("the site in Chromium", () => {
   it("finds lines near an air wavelength in nm as `bandatlas find --air` does", async () => {
     // 12C2H2 P(13) lies at 1532.830 nm in vacuum (BIPM recommended frequency, c2h2.yaml), about
     // 0.42 nm shorter in standard air; the search is by the air value with a ±0.05 nm window.
-    const table = (await cli("find", "1532.41", "nm", "--air", "--window", "0.05")).trim().split("\n").slice(4).map((l) => l.trim().split(/\s+/));
+    const table = (await cli("find", "1532.41", "nm", "--air", "--window", "0.05"))
+      .trim()
+      .split("\n")
+      .slice(4)
+      .map((l) => l.trim().split(/\s+/));
     expect(table.map((r) => r.slice(0, 4))).toContainEqual(["c2h2", "12C2H2", "10100-00000", "P(13)"]);
     await page.goto(base);
     await page.fill("#wavenumber", "1532.41");

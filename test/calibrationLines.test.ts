@@ -7,9 +7,26 @@ import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
 const molecules = loadMoleculesOrThrow(new URL("../molecules", import.meta.url).pathname);
 const co = molecules.find((m) => m.id === "co")!;
 // Invented lines (demo values, not a gas): a strong line and a weaker neighbour.
-const line = (wavenumber: number, intensity: number, label: string): AbsorbingLine => ({ species: "invented", band: "1-0", label, wavenumber, wavenumberUncertainty: 1e-5, positionStatus: "validated", intensity, dopplerHwhmCm: 0.0025, lorentzHwhmCm: 0.002 });
+const line = (wavenumber: number, intensity: number, label: string): AbsorbingLine => ({
+  species: "invented",
+  band: "1-0",
+  label,
+  wavenumber,
+  wavenumberUncertainty: 1e-5,
+  positionStatus: "validated",
+  intensity,
+  dopplerHwhmCm: 0.0025,
+  lorentzHwhmCm: 0.002,
+});
 const thin = (lines: AbsorbingLine[], resolutionCm: number) =>
-  cellSpectrum({ lines, conditions: defaultCellConditions, intensityScale: "relative-thin", fromCm: 2090, toCm: 2130, instrument: { kind: "fourier-transform", resolutionCm, apodization: "triangular" } });
+  cellSpectrum({
+    lines,
+    conditions: defaultCellConditions,
+    intensityScale: "relative-thin",
+    fromCm: 2090,
+    toCm: 2130,
+    instrument: { kind: "fourier-transform", resolutionCm, apodization: "triangular" },
+  });
 
 describe("calibration-grade lines", () => {
   it("an isolated symmetric line shows no peak shift (to 1e-5 cm⁻¹)", () => {
@@ -36,8 +53,12 @@ describe("calibration-grade lines", () => {
 
   it("CO: fewer usable lines as the resolution coarsens, none of them within R of a counted neighbour", () => {
     const counts = calibrationResolutionsCm.map((r) => {
-      const result = moleculeCalibrationLines(co, { conditions: defaultCellConditions, instrument: { kind: "fourier-transform", resolutionCm: r, apodization: "triangular" } });
-      for (const l of result.lines) if (l.nearestNeighbourCm !== null) expect(l.nearestNeighbourCm).toBeGreaterThan(defaultCalibrationCriteria.isolationMultiple * r);
+      const result = moleculeCalibrationLines(co, {
+        conditions: defaultCellConditions,
+        instrument: { kind: "fourier-transform", resolutionCm: r, apodization: "triangular" },
+      });
+      for (const l of result.lines)
+        if (l.nearestNeighbourCm !== null) expect(l.nearestNeighbourCm).toBeGreaterThan(defaultCalibrationCriteria.isolationMultiple * r);
       return result.lines.length;
     });
     for (let i = 1; i < counts.length; i++) expect(counts[i]).toBeLessThanOrEqual(counts[i - 1]);
@@ -46,7 +67,10 @@ describe("calibration-grade lines", () => {
     expect(counts[0]).toBeGreaterThanOrEqual(6);
     expect(counts[0]).toBeLessThanOrEqual(9);
     for (const r of calibrationResolutionsCm) {
-      const result = moleculeCalibrationLines(co, { conditions: defaultCellConditions, instrument: { kind: "fourier-transform", resolutionCm: r, apodization: "triangular" } });
+      const result = moleculeCalibrationLines(co, {
+        conditions: defaultCellConditions,
+        instrument: { kind: "fourier-transform", resolutionCm: r, apodization: "triangular" },
+      });
       for (const l of result.lines) {
         expect(l.species).toBe("12C16O");
         expect(l.wavenumberUncertainty).toBeLessThanOrEqual(defaultCalibrationCriteria.maxUncertaintyFraction * r);
@@ -55,7 +79,11 @@ describe("calibration-grade lines", () => {
   });
 
   it("a line outside the validated J range, or with a ± above R/50, is not calibration grade", () => {
-    const lines = [line(2100, 1, "R(0)"), { ...line(2110, 1, "R(1)"), positionStatus: "extrapolated" as const }, { ...line(2120, 1, "R(2)"), wavenumberUncertainty: 0.03 }];
+    const lines = [
+      line(2100, 1, "R(0)"),
+      { ...line(2110, 1, "R(1)"), positionStatus: "extrapolated" as const },
+      { ...line(2120, 1, "R(2)"), wavenumberUncertainty: 0.03 },
+    ];
     expect(calibrationLines(lines, thin(lines, 1), 1).map((l) => l.label)).toEqual(["R(0)"]);
     expect(calibrationLines(lines, thin(lines, 2), 2).map((l) => l.label)).toEqual(["R(0)", "R(2)"]);
   });

@@ -21,7 +21,16 @@ describe("gas in the cell", () => {
 
   it("Lorentz HWHM is linear in pressure, mixes self and air by mole fraction, and scales as (296/T)^n", () => {
     const b: GasBroadening = {
-      self: { hwhmCmPerAtm: 0.06, byAbsM: [{ absM: 1, hwhmCmPerAtm: 0.08 }, { absM: 11, hwhmCmPerAtm: 0.05 }], temperatureExponent: 0.7, sourceKey: "invented", origin: "cited" },
+      self: {
+        hwhmCmPerAtm: 0.06,
+        byAbsM: [
+          { absM: 1, hwhmCmPerAtm: 0.08 },
+          { absM: 11, hwhmCmPerAtm: 0.05 },
+        ],
+        temperatureExponent: 0.7,
+        sourceKey: "invented",
+        origin: "cited",
+      },
       air: { hwhmCmPerAtm: 0.05, byAbsM: null, temperatureExponent: 0.75, sourceKey: "invented", origin: "cited" },
     };
     // invented coefficients: the test checks the model's arithmetic, not a gas.
@@ -66,9 +75,26 @@ describe("CO cell spectrum", () => {
 
   it("keeps the equivalent width of a line through the instrument (the ILS has unit area)", () => {
     // One invented line, saturated at its centre, in the middle of a 40 cm⁻¹ window.
-    const line = { species: "invented", band: "1-0", label: "R(0)", wavenumber: 2110, wavenumberUncertainty: 1e-5, positionStatus: "validated" as const, intensity: 2e-19, dopplerHwhmCm: 0.0025, lorentzHwhmCm: 0.002 };
+    const line = {
+      species: "invented",
+      band: "1-0",
+      label: "R(0)",
+      wavenumber: 2110,
+      wavenumberUncertainty: 1e-5,
+      positionStatus: "validated" as const,
+      intensity: 2e-19,
+      dopplerHwhmCm: 0.0025,
+      lorentzHwhmCm: 0.002,
+    };
     for (const apodization of ["boxcar", "triangular", "happ-genzel", "norton-beer-medium"] as const) {
-      const s = cellSpectrum({ lines: [line], conditions: defaultCellConditions, intensityScale: "absolute", fromCm: 2090, toCm: 2130, instrument: { kind: "fourier-transform", resolutionCm: 0.5, apodization } });
+      const s = cellSpectrum({
+        lines: [line],
+        conditions: defaultCellConditions,
+        intensityScale: "absolute",
+        fromCm: 2090,
+        toCm: 2130,
+        instrument: { kind: "fourier-transform", resolutionCm: 0.5, apodization },
+      });
       let mono = 0;
       let seen = 0;
       for (let i = 0; i < s.grid.count; i++) {
@@ -82,7 +108,11 @@ describe("CO cell spectrum", () => {
   });
 
   it("sees the strong R(7) line saturated at its centre in 10 cm of 20 Torr CO (τ0 = S N L g(0) ≫ 1)", () => {
-    const { spectrum } = moleculeCellSpectrum(co, { conditions: defaultCellConditions, fromCm: 2172, toCm: 2173.5, instrument: { kind: "monochromatic" } }, set);
+    const { spectrum } = moleculeCellSpectrum(
+      co,
+      { conditions: defaultCellConditions, fromCm: 2172, toCm: 2173.5, instrument: { kind: "monochromatic" } },
+      set,
+    );
     const r7 = set.lines.find((l) => l.species === "12C16O" && l.label === "R(7)" && l.band === "1-0")!;
     const i = Math.round((r7.wavenumber - spectrum.grid.startCm) / spectrum.grid.stepCm);
     expect(spectrum.transmittance![i]).toBeLessThan(1e-6);
@@ -98,17 +128,49 @@ describe("CO cell spectrum", () => {
   });
 
   it("CLI CSV prints the core's transmittance to the shared digits", async () => {
-    const r = await runCli(["spectrum", "co", "--pressure", "20", "Torr", "--path", "10", "cm", "--resolution", "0.5", "--from", "2165", "--to", "2170", "--step", "0.01"]);
+    const r = await runCli([
+      "spectrum",
+      "co",
+      "--pressure",
+      "20",
+      "Torr",
+      "--path",
+      "10",
+      "cm",
+      "--resolution",
+      "0.5",
+      "--from",
+      "2165",
+      "--to",
+      "2170",
+      "--step",
+      "0.01",
+    ]);
     expect(r.exitCode).toBe(0);
-    const rows = r.stdout.trim().split("\n").slice(1).map((l) => l.split(","));
-    const { spectrum } = moleculeCellSpectrum(co, { conditions: defaultCellConditions, fromCm: 2165, toCm: 2170, instrument: { kind: "fourier-transform", resolutionCm: 0.5, apodization: "triangular" } });
+    const rows = r.stdout
+      .trim()
+      .split("\n")
+      .slice(1)
+      .map((l) => l.split(","));
+    const { spectrum } = moleculeCellSpectrum(co, {
+      conditions: defaultCellConditions,
+      fromCm: 2165,
+      toCm: 2170,
+      instrument: { kind: "fourier-transform", resolutionCm: 0.5, apodization: "triangular" },
+    });
     const row = rows.find((c) => c[0] === "2167.5000")!;
     const i = Math.round((2167.5 - spectrum.grid.startCm) / spectrum.grid.stepCm);
     expect(row[1]).toBe(transmittanceDigits(spectrum.observedTransmittance![i]));
   });
 
   it("rejects impossible values with one plain line and a non-zero exit", async () => {
-    for (const bad of [["--pressure", "0 Pa"], ["--path", "-1 cm"], ["--mole-fraction", "1.5"], ["--resolution", "-1"], ["--pressure", "3 bar"]]) {
+    for (const bad of [
+      ["--pressure", "0 Pa"],
+      ["--path", "-1 cm"],
+      ["--mole-fraction", "1.5"],
+      ["--resolution", "-1"],
+      ["--pressure", "3 bar"],
+    ]) {
       const r = await runCli(["spectrum", "co", "--from", "2100", "--to", "2110", ...bad]);
       expect(r.exitCode, bad.join(" ")).not.toBe(0);
       expect(r.stderr.trim().split("\n")).toHaveLength(1);

@@ -14,7 +14,21 @@ describe("bandatlas lines", () => {
     expect(exitCode).toBe(0);
     const doc = JSON.parse(stdout);
     expect(doc).toMatchObject({ molecule: "co", species: "12C16O", band: "1-0", temperatureK: 296 });
-    const keys = ["label", "branch", "jLower", "jUpper", "wavenumber", "wavenumberUncertainty", "wavelengthVacuumUm", "wavelengthAirNm", "lowerStateEnergy", "relativeIntensity", "lineIntensity", "populationFraction", "positionStatus"];
+    const keys = [
+      "label",
+      "branch",
+      "jLower",
+      "jUpper",
+      "wavenumber",
+      "wavenumberUncertainty",
+      "wavelengthVacuumUm",
+      "wavelengthAirNm",
+      "lowerStateEnergy",
+      "relativeIntensity",
+      "lineIntensity",
+      "populationFraction",
+      "positionStatus",
+    ];
     for (const line of doc.lines) expect(Object.keys(line)).toEqual(keys);
     expect(doc.accuracy).toMatchObject({ status: "validated", measuredLines: 9, absMMin: 1, absMMax: 5, sources: ["makiCrc"] });
     expect(doc.limitations).toEqual([]);

@@ -27,15 +27,28 @@ function rng(seed: number) {
 
 function syntheticLines(gauss: () => number, sigmaCm: number): FitObservation[] {
   const out: FitObservation[] = [];
-  for (const [vUpper, vLower] of [[1, 0], [2, 0]]) {
+  for (const [vUpper, vLower] of [
+    [1, 0],
+    [2, 0],
+  ]) {
     for (let jLower = 0; jLower <= 12; jLower++) {
       for (const jUpper of [jLower + 1, jLower - 1]) {
         if (jUpper < 0) continue;
         const exact = termValue(truth, vUpper, jUpper) - termValue(truth, vLower, jLower);
         out.push({
-          species: "invented", massRatio: 1, inverseMassShifts: [0, 0], vUpper, jUpper, vLower, jLower,
-          label: `${jUpper > jLower ? "R" : "P"}(${jLower})`, band: `${vUpper}-${vLower}`,
-          wavenumberCm: exact + sigmaCm * gauss(), uncertaintyCm: sigmaCm, sourceKey: "synthetic", heldOut: false,
+          species: "invented",
+          massRatio: 1,
+          inverseMassShifts: [0, 0],
+          vUpper,
+          jUpper,
+          vLower,
+          jLower,
+          label: `${jUpper > jLower ? "R" : "P"}(${jLower})`,
+          band: `${vUpper}-${vLower}`,
+          wavenumberCm: exact + sigmaCm * gauss(),
+          uncertaintyCm: sigmaCm,
+          sourceKey: "synthetic",
+          heldOut: false,
         });
       }
     }
@@ -45,7 +58,10 @@ function syntheticLines(gauss: () => number, sigmaCm: number): FitObservation[] 
 
 describe("fitDunham (weighted least squares by SVD)", () => {
   it("recovers the constants exactly from noiseless lines", () => {
-    const fit = fitDunham(syntheticLines(() => 0, 1e-3), terms);
+    const fit = fitDunham(
+      syntheticLines(() => 0, 1e-3),
+      terms,
+    );
     fit.terms.forEach((t, i) => {
       const expected = truth.find((c) => c.k === t.k && c.l === t.l)!.valueCm;
       expect(fit.solution.parameters[i]).toBeCloseTo(expected, 8);
@@ -73,7 +89,11 @@ describe("fitDunham (weighted least squares by SVD)", () => {
       const { dunham, covariance } = speciesDunhamFromFit(fit, 1, [0, 0]);
       predictions.push(termValue(dunham, probe.vUpper, probe.jUpper) - termValue(dunham, probe.vLower, probe.jLower));
       if (trial === 0) {
-        const g = dunham.map((c) => Math.pow(probe.vUpper + 0.5, c.k) * Math.pow(probe.jUpper * (probe.jUpper + 1), c.l) - Math.pow(probe.vLower + 0.5, c.k) * Math.pow(probe.jLower * (probe.jLower + 1), c.l));
+        const g = dunham.map(
+          (c) =>
+            Math.pow(probe.vUpper + 0.5, c.k) * Math.pow(probe.jUpper * (probe.jUpper + 1), c.l) -
+            Math.pow(probe.vLower + 0.5, c.k) * Math.pow(probe.jLower * (probe.jLower + 1), c.l),
+        );
         propagated = Math.sqrt(g.reduce((s, gi, i) => s + gi * g.reduce((t, gj, j) => t + gj * covariance[i][j], 0), 0));
       }
     }
@@ -99,6 +119,11 @@ describe("fitDunham (weighted least squares by SVD)", () => {
     const lines = syntheticLines(() => 0, 1e-3).filter((o) => o.vUpper === 1);
     // From the 1-0 band alone Y10 and Y20 enter only as one combination, Y10 + 2·Y20 (the origin).
     expect(() => fitDunham(lines, terms)).toThrow(/not independent/);
-    expect(() => fitDunham(lines.map((o) => ({ ...o, uncertaintyCm: 0 })), [{ k: 0, l: 1 }])).toThrow(/uncertainty above 0/);
+    expect(() =>
+      fitDunham(
+        lines.map((o) => ({ ...o, uncertaintyCm: 0 })),
+        [{ k: 0, l: 1 }],
+      ),
+    ).toThrow(/uncertainty above 0/);
   });
 });

@@ -58,7 +58,9 @@ describe("bandatlas fit", () => {
     writeFileSync(path, edited);
     const { stderr, exitCode } = await runCli(["check", path]);
     expect(exitCode).toBe(1);
-    expect(stderr).toMatch(/xo\.yaml:\d+:\d+: `species\[0\]\.constants\.fit\.result\.Y01`: the file says [\d.]+ ± [\d.e-]+ but the fit to the cited lines gives [\d.]+ ± /);
+    expect(stderr).toMatch(
+      /xo\.yaml:\d+:\d+: `species\[0\]\.constants\.fit\.result\.Y01`: the file says [\d.]+ ± [\d.e-]+ but the fit to the cited lines gives [\d.]+ ± /,
+    );
   });
 
   it("says so plainly for a file without a fit and for one that does not exist", async () => {

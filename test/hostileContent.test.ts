@@ -17,7 +17,12 @@ const files = (ext: string) =>
     .map((d) => join(d.parentPath, d.name));
 
 beforeAll(async () => {
-  await buildSite({ moleculesDir: join(root, "test/fixtures/hostile"), outDir: site, sheets: true, build: { version: "0.0.0-test", commit: "test", dateIso: "2026-01-01T00:00:00Z" } });
+  await buildSite({
+    moleculesDir: join(root, "test/fixtures/hostile"),
+    outDir: site,
+    sheets: true,
+    build: { version: "0.0.0-test", commit: "test", dateIso: "2026-01-01T00:00:00Z" },
+  });
 }, 240_000);
 afterAll(() => rmSync(work, { recursive: true, force: true }));
 

@@ -1,7 +1,15 @@
 import { describe, expect, it } from "vitest";
 import {
-  airRefractiveIndexEdlen, airWavelengthNm, bandLines, frequencyThz, hermanWallisFactor, hoenlLondon, intensityPrefactorCgs,
-  transitionDipoleFromBandStrength, vacuumWavelengthUm, type SpeciesModel,
+  airRefractiveIndexEdlen,
+  airWavelengthNm,
+  bandLines,
+  frequencyThz,
+  hermanWallisFactor,
+  hoenlLondon,
+  intensityPrefactorCgs,
+  transitionDipoleFromBandStrength,
+  vacuumWavelengthUm,
+  type SpeciesModel,
 } from "../lib/core/index.ts";
 import { shippedSpecies } from "./helpers/shipped.ts";
 
@@ -58,7 +66,20 @@ describe("absolute intensities", () => {
     const co = shippedSpecies("co");
     const bandStrength = 1.0e-17;
     const dipole = transitionDipoleFromBandStrength(co, { vUpper: 1, vLower: 0 }, bandStrength, 296, null);
-    const withDipole: SpeciesModel = { ...co, abundance: 1, intensities: [{ band: { vUpper: 1, vLower: 0 }, transitionDipoleDebye: dipole, transitionDipoleUncertaintyDebye: 0, hermanWallis: null, origin: "cited", sourceKey: "test" }] };
+    const withDipole: SpeciesModel = {
+      ...co,
+      abundance: 1,
+      intensities: [
+        {
+          band: { vUpper: 1, vLower: 0 },
+          transitionDipoleDebye: dipole,
+          transitionDipoleUncertaintyDebye: 0,
+          hermanWallis: null,
+          origin: "cited",
+          sourceKey: "test",
+        },
+      ],
+    };
     const lines = bandLines(withDipole, { vUpper: 1, vLower: 0 }, { temperatureK: 296, minRelative: 0 }).lines;
     const sum = lines.reduce((s, l) => s + (l.lineIntensity ?? 0), 0);
     expect(sum / bandStrength).toBeCloseTo(1, 9);
@@ -69,7 +90,14 @@ describe("absolute intensities", () => {
   });
   it("multiplies by the isotopic abundance and drops with the Boltzmann factor for hot bands", () => {
     const co = shippedSpecies("co");
-    const data = { band: { vUpper: 1, vLower: 0 }, transitionDipoleDebye: 0.1, transitionDipoleUncertaintyDebye: 0, hermanWallis: null, origin: "cited" as const, sourceKey: "t" };
+    const data = {
+      band: { vUpper: 1, vLower: 0 },
+      transitionDipoleDebye: 0.1,
+      transitionDipoleUncertaintyDebye: 0,
+      hermanWallis: null,
+      origin: "cited" as const,
+      sourceKey: "t",
+    };
     const fundamental = bandLines({ ...co, intensities: [data] }, { vUpper: 1, vLower: 0 }, { temperatureK: 296 });
     const hot = bandLines({ ...co, intensities: [data] }, { vUpper: 2, vLower: 1 }, { temperatureK: 296 });
     const ratio = hot.strongestLineIntensity! / fundamental.strongestLineIntensity!;

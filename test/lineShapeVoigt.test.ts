@@ -29,7 +29,11 @@ function referenceVoigt(x: number, y: number): number {
   // adaptively, so no piece hides a narrow feature.
   const cuts = new Set<number>();
   for (let t = -9; t <= 9; t += 0.25) cuts.add(t);
-  for (const k of [0, 1, 10, 100, 1000]) for (const s of [-1, 1]) { const t = x + s * k * y; if (t > -9 && t < 9) cuts.add(t); }
+  for (const k of [0, 1, 10, 100, 1000])
+    for (const s of [-1, 1]) {
+      const t = x + s * k * y;
+      if (t > -9 && t < 9) cuts.add(t);
+    }
   const ts = [...cuts].sort((p, q) => p - q);
   const f = (theta: number) => Math.exp(-((x + y * Math.tan(theta)) ** 2));
   const pieces = ts.slice(1).map((t, i) => [Math.atan((ts[i] - x) / y), Math.atan((t - x) / y)]);
@@ -51,7 +55,10 @@ describe("Voigt function K(x, y) (Weideman 1994 N=32 inside |x|+y<15, Humlíček
       for (const x of xs) {
         const ref = referenceVoigt(x, y);
         const rel = Math.abs(voigtFunction(x, y) - ref) / ref;
-        if (rel > worst) { worst = rel; where = `x=${x} y=${y}`; }
+        if (rel > worst) {
+          worst = rel;
+          where = `x=${x} y=${y}`;
+        }
       }
     }
     // Required: 1e-4. Measured when written: 3.3e-8 (x=5, y=10); 2.9e-8 in the outer region, where
@@ -60,7 +67,12 @@ describe("Voigt function K(x, y) (Weideman 1994 N=32 inside |x|+y<15, Humlíček
   });
 
   it("is even in x", () => {
-    for (const [x, y] of [[2.5, 0.1], [20, 0.5], [7, 3]]) expect(voigtFunction(-x, y)).toBeCloseTo(voigtFunction(x, y), 14);
+    for (const [x, y] of [
+      [2.5, 0.1],
+      [20, 0.5],
+      [7, 3],
+    ])
+      expect(voigtFunction(-x, y)).toBeCloseTo(voigtFunction(x, y), 14);
   });
 
   it("reaches the Gaussian limit e^{−x²} as y → 0 (definition of K)", () => {
@@ -88,7 +100,11 @@ describe("Voigt function K(x, y) (Weideman 1994 N=32 inside |x|+y<15, Humlíček
 
 describe("area-normalised Voigt profile", () => {
   it("has unit area (trapezoid over ±50 cm⁻¹ plus the analytic Lorentz tail 2γ_L/(πD))", () => {
-    for (const [gD, gL] of [[0.0025, 0.002], [0.0025, 0.0001], [0.005, 0.05]]) {
+    for (const [gD, gL] of [
+      [0.0025, 0.002],
+      [0.0025, 0.0001],
+      [0.005, 0.05],
+    ]) {
       const D = 50;
       const h = Math.min(gD, gL + gD) / 4;
       let sum = 0;
@@ -107,7 +123,11 @@ describe("area-normalised Voigt profile", () => {
   });
 
   it("has the HWHM Olivero & Longbothum give (their approximation, 0.02 %): profile at HWHM is half the peak", () => {
-    for (const [gD, gL] of [[0.0025, 0.0025], [0.0025, 0.02], [0.01, 0.001]]) {
+    for (const [gD, gL] of [
+      [0.0025, 0.0025],
+      [0.0025, 0.02],
+      [0.01, 0.001],
+    ]) {
       const h = voigtHwhm(gD, gL);
       expect(voigtProfile(h, gD, gL) / voigtProfile(0, gD, gL)).toBeCloseTo(0.5, 3);
     }

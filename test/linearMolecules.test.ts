@@ -25,12 +25,32 @@ function inventedSpecies(weights: LinearSpeciesData["nuclearSpinWeights"], symme
       { id: "g", symmetry: symmetries[0], termEnergy: c(0), b: c(1.18), d: c(1.6e-6), h: c(0), sourceKey: "invented" },
       { id: "u", symmetry: symmetries[1], termEnergy: c(6556), b: c(1.17), d: c(1.6e-6), h: c(0), sourceKey: "invented" },
     ],
-    bands: [{ band: { vUpper: 1, vLower: 0, label: "u-g" }, upperStateIndex: 1, lowerStateIndex: 0, name: "invented", kind: "combination", sourceKey: "invented" }],
+    bands: [
+      { band: { vUpper: 1, vLower: 0, label: "u-g" }, upperStateIndex: 1, lowerStateIndex: 0, name: "invented", kind: "combination", sourceKey: "invented" },
+    ],
     groundStateIndex: 0,
-    modes: [{ wavenumberCm: 3374, degeneracy: 1 }, { wavenumberCm: 1974, degeneracy: 1 }, { wavenumberCm: 3289, degeneracy: 1 }, { wavenumberCm: 612, degeneracy: 2 }, { wavenumberCm: 730, degeneracy: 2 }],
+    modes: [
+      { wavenumberCm: 3374, degeneracy: 1 },
+      { wavenumberCm: 1974, degeneracy: 1 },
+      { wavenumberCm: 3289, degeneracy: 1 },
+      { wavenumberCm: 612, degeneracy: 2 },
+      { wavenumberCm: 730, degeneracy: 2 },
+    ],
     nuclearSpinWeights: weights,
   };
-  return { label: "invented", massNumbers: [], atomMassesU: [], abundance: 1, reducedMassU: Number.NaN, dunham: [], constantsOrigin: "cited", constantsSourceKey: "invented", intensities: [], referenceLines: [], linear };
+  return {
+    label: "invented",
+    massNumbers: [],
+    atomMassesU: [],
+    abundance: 1,
+    reducedMassU: Number.NaN,
+    dunham: [],
+    constantsOrigin: "cited",
+    constantsSourceKey: "invented",
+    intensities: [],
+    referenceLines: [],
+    linear,
+  };
 }
 
 describe("vibrational partition function", () => {
@@ -83,9 +103,14 @@ describe("rotational partition function of a linear molecule", () => {
 describe("nuclear-spin statistics", () => {
   it("12C2H2-like Σu+ ← Σg+ band: lines from odd J'' are 3 times as strong as the smooth envelope, even J'' once", () => {
     // Fact of the trade (Herzberg 1945, ch. I.3): H has spin ½, so in 12C2H2 ortho (odd J of Σg+) : para = 3 : 1.
-    const weighted = bandLines(inventedSpecies({ evenJ: 1, oddJ: 3 }, ["Σg+", "Σu+"]), { vUpper: 1, vLower: 0, label: "u-g" }, { temperatureK: 296, minRelative: 0 });
+    const weighted = bandLines(
+      inventedSpecies({ evenJ: 1, oddJ: 3 }, ["Σg+", "Σu+"]),
+      { vUpper: 1, vLower: 0, label: "u-g" },
+      { temperatureK: 296, minRelative: 0 },
+    );
     const plain = bandLines(inventedSpecies(null, ["Σ+", "Σ+"]), { vUpper: 1, vLower: 0, label: "u-g" }, { temperatureK: 296, minRelative: 0 });
-    const ratio = (label: string) => weighted.lines.find((l) => l.label === label)!.relativeIntensity / plain.lines.find((l) => l.label === label)!.relativeIntensity;
+    const ratio = (label: string) =>
+      weighted.lines.find((l) => l.label === label)!.relativeIntensity / plain.lines.find((l) => l.label === label)!.relativeIntensity;
     for (const j of [1, 3, 5, 9, 15]) {
       expect(ratio(`R(${j})`) / ratio(`R(${j - 1})`), `R(${j})/R(${j - 1})`).toBeCloseTo(3, 10);
       expect(ratio(`P(${j})`) / ratio(`P(${j + 1})`), `P(${j})/P(${j + 1})`).toBeCloseTo(3, 10);
@@ -99,7 +124,11 @@ describe("nuclear-spin statistics", () => {
   });
   it("12C16O2 ν3 has every other line missing: only even J'' (R(0), R(2), P(2) …), never P(1) or R(1)", () => {
     // Fact of the trade: 16O has nuclear spin 0, so the ground state 00001 has only even J (Herzberg 1945).
-    const result = bandLines(co2(), resolveBand(selectMolecule(shippedMolecules(), "co2"), selectSpecies(selectMolecule(shippedMolecules(), "co2"), undefined), undefined), { temperatureK: 296, minRelative: 0 });
+    const result = bandLines(
+      co2(),
+      resolveBand(selectMolecule(shippedMolecules(), "co2"), selectSpecies(selectMolecule(shippedMolecules(), "co2"), undefined), undefined),
+      { temperatureK: 296, minRelative: 0 },
+    );
     expect(result.lines.length).toBeGreaterThan(100);
     expect(result.lines.every((l) => l.jLower % 2 === 0)).toBe(true);
     const labels = new Set(result.lines.map((l) => l.label));
@@ -132,7 +161,13 @@ describe("line positions from the cited state constants", () => {
     const textbook = (m: number) => nu0 + (b1 + b0) * m + (b1 - b0) * m * m - 2 * (d1 + d0) * m ** 3 - (d1 - d0) * m ** 4;
     const result = bandLines(co2(), co2().linear!.bands[0].band, { temperatureK: 296, minRelative: 0 });
     expect(result.bandOrigin).toBeCloseTo(2349.1433, 6);
-    for (const [label, m] of [["R(0)", 1], ["R(2)", 3], ["R(10)", 11], ["P(2)", -2], ["P(10)", -10]] as const) {
+    for (const [label, m] of [
+      ["R(0)", 1],
+      ["R(2)", 3],
+      ["R(10)", 11],
+      ["P(2)", -2],
+      ["P(10)", -10],
+    ] as const) {
       expect(result.lines.find((l) => l.label === label)!.wavenumber, label).toBeCloseTo(textbook(m), 6);
     }
   });
@@ -194,19 +229,42 @@ ${bands}
     return result.ok ? [] : result.problems.map(formatProblem);
   };
   it("accepts a good file", () => {
-    expect(problemsOf(base(`${ground}\n      - { id: "00011", symmetry: "Σu+", source: s, termEnergy: 2349.1, b: 0.387 }`, `      - { upper: "00011", lower: "00001", name: "ν3", kind: fundamental, source: s, bandOrigin: 2349.1 }`))).toEqual([]);
+    expect(
+      problemsOf(
+        base(
+          `${ground}\n      - { id: "00011", symmetry: "Σu+", source: s, termEnergy: 2349.1, b: 0.387 }`,
+          `      - { upper: "00011", lower: "00001", name: "ν3", kind: fundamental, source: s, bandOrigin: 2349.1 }`,
+        ),
+      ),
+    ).toEqual([]);
   });
   it("refuses a Π state (a perpendicular band) with a message saying what is modelled", () => {
-    const problems = problemsOf(base(`${ground}\n      - { id: "01101", symmetry: "Πu", source: s, termEnergy: 667.4, b: 0.39 }`, `      - { upper: "01101", lower: "00001", name: "ν2", kind: fundamental, source: s }`));
+    const problems = problemsOf(
+      base(
+        `${ground}\n      - { id: "01101", symmetry: "Πu", source: s, termEnergy: 667.4, b: 0.39 }`,
+        `      - { upper: "01101", lower: "00001", name: "ν2", kind: fundamental, source: s }`,
+      ),
+    );
     expect(problems.join("\n")).toMatch(/^test\.yaml:17:\d+: `species\[0\]\.states\[1\]\.symmetry`: .*Π.*not modelled.*Σ–Σ/m);
   });
   it("refuses a g ← g band and a band origin that disagrees with the term energies", () => {
-    const problems = problemsOf(base(`${ground}\n      - { id: "10001", symmetry: "Σg+", source: s, termEnergy: 1388.2, b: 0.39 }`, `      - { upper: "10001", lower: "00001", name: "ν1", kind: fundamental, source: s, bandOrigin: 1390.5 }`)).join("\n");
+    const problems = problemsOf(
+      base(
+        `${ground}\n      - { id: "10001", symmetry: "Σg+", source: s, termEnergy: 1388.2, b: 0.39 }`,
+        `      - { upper: "10001", lower: "00001", name: "ν1", kind: fundamental, source: s, bandOrigin: 1390.5 }`,
+      ),
+    ).join("\n");
     expect(problems).toMatch(/test\.yaml:19:\d+: .*forbidden for an electric-dipole transition/);
     expect(problems).toMatch(/bandOrigin.*disagrees with the states. term energies/);
   });
   it("refuses modes that do not add up to 3N−5", () => {
-    const problems = problemsOf(base(`${ground}\n      - { id: "00011", symmetry: "Σu+", source: s, termEnergy: 2349.1, b: 0.387 }`, `      - { upper: "00011", lower: "00001", name: "ν3", kind: fundamental, source: s }`, `, { wavenumber: 100, degeneracy: 1 }`)).join("\n");
+    const problems = problemsOf(
+      base(
+        `${ground}\n      - { id: "00011", symmetry: "Σu+", source: s, termEnergy: 2349.1, b: 0.387 }`,
+        `      - { upper: "00011", lower: "00001", name: "ν3", kind: fundamental, source: s }`,
+        `, { wavenumber: 100, degeneracy: 1 }`,
+      ),
+    ).join("\n");
     expect(problems).toMatch(/3N−5 = 4/);
   });
   it("refuses an unknown structure", () => {

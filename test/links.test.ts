@@ -24,7 +24,15 @@ describe("internal links of the built site", () => {
     // home, method, cautions, contributing, one page per molecule, one per species and
     // temperature, and any further hand-written page in content/
     expect(result.pages).toBeGreaterThanOrEqual(4 + report.molecules + report.entries);
-    for (const page of ["index.html", "method/index.html", "cautions/index.html", "contributing/index.html", "molecules/co/index.html", "molecules/co/12C16O-273.15K/index.html"]) expect(existsSync(join(report.outDir, page)), page).toBe(true);
+    for (const page of [
+      "index.html",
+      "method/index.html",
+      "cautions/index.html",
+      "contributing/index.html",
+      "molecules/co/index.html",
+      "molecules/co/12C16O-273.15K/index.html",
+    ])
+      expect(existsSync(join(report.outDir, page)), page).toBe(true);
     expect(report.entries % standardTemperaturesK.length).toBe(0);
     expect(result.links).toBeGreaterThan(result.pages * 10);
   });
@@ -41,17 +49,27 @@ describe("internal links of the built site", () => {
     for (const page of ["index.html", "molecules/co/12C16O-1000K/index.html", "molecules/hcl/index.html", "method/index.html"]) {
       const ids = [...readFileSync(join(report.outDir, page), "utf8").matchAll(/\sid="([^"]+)"/g)].map((m) => m[1]);
       expect(ids.length).toBeGreaterThan(3);
-      expect(ids.filter((id, i) => ids.indexOf(id) !== i), page).toEqual([]);
+      expect(
+        ids.filter((id, i) => ids.indexOf(id) !== i),
+        page,
+      ).toEqual([]);
     }
   });
 
   it("reports a missing file, a missing anchor and a link out of the site", () => {
     const site = join(work, "broken");
     mkdirSync(join(site, "a"), { recursive: true });
-    writeFileSync(join(site, "index.html"), '<p id="top"><a href="a/index.html#nowhere">x</a> <a href="missing.html">y</a> <a href="#top">ok</a> <a href="../outside.html">z</a> <a href="https://example.org/">ext</a></p>');
+    writeFileSync(
+      join(site, "index.html"),
+      '<p id="top"><a href="a/index.html#nowhere">x</a> <a href="missing.html">y</a> <a href="#top">ok</a> <a href="../outside.html">z</a> <a href="https://example.org/">ext</a></p>',
+    );
     writeFileSync(join(site, "a/index.html"), '<p id="here"><a href="../index.html#top">back</a></p>');
     const result = checkInternalLinks(site);
     expect(result.links).toBe(5);
-    expect(result.broken.map((b) => `${b.page} ${b.href}`).sort()).toEqual(["index.html ../outside.html", "index.html a/index.html#nowhere", "index.html missing.html"]);
+    expect(result.broken.map((b) => `${b.page} ${b.href}`).sort()).toEqual([
+      "index.html ../outside.html",
+      "index.html a/index.html#nowhere",
+      "index.html missing.html",
+    ]);
   });
 });

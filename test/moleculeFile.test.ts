@@ -50,7 +50,9 @@ const cases: Array<[string, number | null, RegExp]> = [
 
 describe("malformed molecule files", () => {
   it("has a test case for every fixture", () => {
-    const names = readdirSync(join(fixtures, "bad")).map((n) => n.replace(/\.yaml$/, "")).sort();
+    const names = readdirSync(join(fixtures, "bad"))
+      .map((n) => n.replace(/\.yaml$/, ""))
+      .sort();
     expect(names).toEqual(cases.map((c) => c[0]).sort());
   });
   for (const [name, line, pattern] of cases) {

@@ -20,7 +20,7 @@ describe("bandatlas new", () => {
 
     // Filled in with invented numbers (labelled as such) but the name left as the placeholder.
     const filled = text
-      .replace('formula: REPLACE', "formula: CO")
+      .replace("formula: REPLACE", "formula: CO")
       .replace('casNumber: "REPLACE"', 'casNumber: "630-08-0"')
       .replace("atoms: [REPLACE, REPLACE]", "atoms: [C, O]")
       .replace('"REPLACE with one or two plain hazard sentences (e.g. toxic if inhaled; gas under pressure)."', '"Invented test gas."')
@@ -28,7 +28,10 @@ describe("bandatlas new", () => {
       .replace('"10.0000/REPLACE"', '"10.0000/invented"')
       .replace("massNumbers: [0, 0]", "massNumbers: [12, 16]")
       .replace("{ value: REPLACE, uncertainty: REPLACE }", "{ value: 2000.0, uncertainty: 0.1 }")
-      .replace(/(omegaExe|omegaEye|bE|alphaE|gammaE|dE|betaE): REPLACE/g, (_, k) => `${k}: ${{ omegaExe: 12, omegaEye: 0.01, bE: 2, alphaE: 0.02, gammaE: 1e-7, dE: 6e-6, betaE: 1e-9 }[k as string]}`);
+      .replace(
+        /(omegaExe|omegaEye|bE|alphaE|gammaE|dE|betaE): REPLACE/g,
+        (_, k) => `${k}: ${{ omegaExe: 12, omegaEye: 0.01, bE: 2, alphaE: 0.02, gammaE: 1e-7, dE: 6e-6, betaE: 1e-9 }[k as string]}`,
+      );
     writeFileSync(path, filled);
     const { problems } = loadMoleculeFiles([path]);
     expect(problems.map(formatProblem)).toEqual([expect.stringMatching(/`name`: still holds the template's placeholder REPLACE/)]);

@@ -7,7 +7,12 @@ describe("partition function", () => {
     // H. P. Mulholland, Proc. Cambridge Philos. Soc. 24, 280 (1928): Q_rot = kT/hcB + 1/3 + hcB/15kT + …;
     // harmonic vibration: Q_vib = 1/(1 − e^(−c2 ω/T)) (Herzberg 1950, ch. III). Tolerance 1e-6 relative:
     // the dropped terms are O((hcB/kT)³).
-    for (const [bCm, omegaE, temperatureK] of [[1.93, 2170, 296], [10.59, 2991, 296], [1.93, 2170, 1000], [20.9, 4138, 1000]]) {
+    for (const [bCm, omegaE, temperatureK] of [
+      [1.93, 2170, 296],
+      [10.59, 2991, 296],
+      [1.93, 2170, 1000],
+      [20.9, 4138, 1000],
+    ]) {
       const q = partitionFunction(equilibriumToDunham({ omegaE, bE: bCm }), temperatureK);
       const vib = 1 / (1 - Math.exp((-secondRadiationConstantCmK * omegaE) / temperatureK));
       const expected = rigidRotorPartitionFunctionExpansion(bCm, temperatureK) * vib;

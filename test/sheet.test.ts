@@ -25,7 +25,11 @@ async function sheetOf(molecule: Molecule, species: string | undefined, temperat
 async function linesCsvDigits(args: string[], label: string): Promise<{ wavenumber: string; um: string; rel: string }> {
   const { stdout, exitCode } = await runCli(["lines", ...args, "--format", "csv"]);
   expect(exitCode).toBe(0);
-  const [head, ...rows] = stdout.trim().split("\n").filter((r) => !r.startsWith("#")).map((r) => r.split(","));
+  const [head, ...rows] = stdout
+    .trim()
+    .split("\n")
+    .filter((r) => !r.startsWith("#"))
+    .map((r) => r.split(","));
   const row = rows.find((r) => r[0] === label)!;
   expect(row, `${label} in bandatlas lines`).toBeDefined();
   return { wavenumber: row[head.indexOf("wavenumber (cm-1)")], um: row[head.indexOf("wavelengthVacuum (um)")], rel: row[head.indexOf("relativeIntensity")] };
@@ -87,7 +91,9 @@ describe("bench sheet of 12C16O at 296 K on A4", () => {
     for (const source of co().sources) expect(flat).toContain(source.citation);
     expect(flat).toContain("Dunham expansion of the term values");
     expect(flat).toContain("selection rule ΔJ = ±1"); // \s also matches the no-break spaces that keep it on one line
-    expect(flat).toMatch(/Accuracy: validated against 9 cited measured lines of band 1-0, \|m\| 1–5 \[makiCrc\]: largest \|predicted − measured\| [\d.e-]+ cm⁻¹/);
+    expect(flat).toMatch(
+      /Accuracy: validated against 9 cited measured lines of band 1-0, \|m\| 1–5 \[makiCrc\]: largest \|predicted − measured\| [\d.e-]+ cm⁻¹/,
+    );
   });
 
   it("shows the units and symbols in an embedded DejaVu font, no system font", () => {

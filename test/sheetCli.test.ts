@@ -36,7 +36,17 @@ describe("bandatlas sheet", () => {
   });
 
   it("takes the issue's own example: H37Cl at 298.15 K on Letter to a named file", async () => {
-    const { exitCode, stderr, dir, left } = await sheetIn((d) => ["hcl", "--species", "H37Cl", "--temperature", "298.15", "--paper", "letter", "--out", join(d, "h37cl.pdf")]);
+    const { exitCode, stderr, dir, left } = await sheetIn((d) => [
+      "hcl",
+      "--species",
+      "H37Cl",
+      "--temperature",
+      "298.15",
+      "--paper",
+      "letter",
+      "--out",
+      join(d, "h37cl.pdf"),
+    ]);
     expect(stderr).toBe("");
     expect(exitCode).toBe(0);
     expect(left).toEqual(["h37cl.pdf"]);
@@ -45,12 +55,32 @@ describe("bandatlas sheet", () => {
 
   const bad: Array<[string, (dir: string) => string[], RegExp]> = [
     ["an unknown paper size", (d) => ["co", "--paper", "legal", "--out", join(d, "x.pdf")], /^bandatlas sheet: paper "legal" is not one of: a4, letter\n$/],
-    ["a folder that does not exist", (d) => ["co", "--out", join(d, "missing", "x.pdf")], /^bandatlas sheet: cannot write .*missing\/x\.pdf: the folder .*missing does not exist\n$/],
+    [
+      "a folder that does not exist",
+      (d) => ["co", "--out", join(d, "missing", "x.pdf")],
+      /^bandatlas sheet: cannot write .*missing\/x\.pdf: the folder .*missing does not exist\n$/,
+    ],
     ["a folder as --out", (d) => ["co", "--out", d], /^bandatlas sheet: cannot write .*: it is a folder; give a file name, e.g. .*sheet\.pdf\n$/],
-    ["a file name under a regular file", (d) => (writeFileSync(join(d, "plain"), "x"), ["co", "--out", join(d, "plain", "x.pdf")]), /^bandatlas sheet: cannot write .*plain\/x\.pdf: .*plain is not a folder\n$/],
-    ["a temperature that is not a number", (d) => ["co", "--temperature", "warm", "--out", join(d, "x.pdf")], /^bandatlas sheet: --temperature expects a number in K, got "warm"\n$/],
-    ["a negative temperature", (d) => ["co", "--temperature", "-5", "--out", join(d, "x.pdf")], /^bandatlas sheet: --temperature -5: a temperature must be above 0 K\n$/],
-    ["an unknown species", (d) => ["co", "--species", "14CO", "--out", join(d, "x.pdf")], /^bandatlas sheet: Carbon monoxide has no species "14CO"; it has: 12C16O, 13C16O, 12C18O\n$/],
+    [
+      "a file name under a regular file",
+      (d) => (writeFileSync(join(d, "plain"), "x"), ["co", "--out", join(d, "plain", "x.pdf")]),
+      /^bandatlas sheet: cannot write .*plain\/x\.pdf: .*plain is not a folder\n$/,
+    ],
+    [
+      "a temperature that is not a number",
+      (d) => ["co", "--temperature", "warm", "--out", join(d, "x.pdf")],
+      /^bandatlas sheet: --temperature expects a number in K, got "warm"\n$/,
+    ],
+    [
+      "a negative temperature",
+      (d) => ["co", "--temperature", "-5", "--out", join(d, "x.pdf")],
+      /^bandatlas sheet: --temperature -5: a temperature must be above 0 K\n$/,
+    ],
+    [
+      "an unknown species",
+      (d) => ["co", "--species", "14CO", "--out", join(d, "x.pdf")],
+      /^bandatlas sheet: Carbon monoxide has no species "14CO"; it has: 12C16O, 13C16O, 12C18O\n$/,
+    ],
     ["an unknown molecule", (d) => ["xenon", "--out", join(d, "x.pdf")], /^bandatlas sheet: unknown molecule "xenon"; the atlas has: .*co.*\n$/],
     ["an empty --out", () => ["co", "--out", ""], /^bandatlas sheet: --out needs a file name, e.g. --out co-296K\.pdf\n$/],
   ];
@@ -79,9 +109,16 @@ describe("writeBenchSheets", () => {
     const entries = [...co.species.map((s) => atlasEntry(co, s, 296)), atlasEntry(hf, hf.species[0], 1000)];
     const outDir = scratchDir("site");
     const paths = await writeBenchSheets({ molecules, entries, outDir, build, threads: 2 });
-    const expected = ["co/12C16O-296K", "co/13C16O-296K", "co/12C18O-296K", "hf/1H19F-1000K"].flatMap((n) => [`${n}-a4.pdf`, `${n}-letter.pdf`]).map((n) => join(outDir, "sheets", n));
+    const expected = ["co/12C16O-296K", "co/13C16O-296K", "co/12C18O-296K", "hf/1H19F-1000K"]
+      .flatMap((n) => [`${n}-a4.pdf`, `${n}-letter.pdf`])
+      .map((n) => join(outDir, "sheets", n));
     expect(paths).toEqual(expected);
-    expect(readdirSync(join(outDir, "sheets", "co")).sort()).toEqual(expected.slice(0, 6).map((p) => p.split("/").pop()).sort());
+    expect(readdirSync(join(outDir, "sheets", "co")).sort()).toEqual(
+      expected
+        .slice(0, 6)
+        .map((p) => p.split("/").pop())
+        .sort(),
+    );
     const inProcess = await renderBenchSheet({ molecule: hf, entry: entries[3], paper: "letter", build });
     expect(Buffer.compare(readFileSync(paths[7]), inProcess)).toBe(0);
     expect(pdfText(paths[7])).toContain("1H19F · band 1-0 (fundamental) · T = 1000 K");
@@ -106,7 +143,9 @@ describe("writeBenchSheets", () => {
     const hf = selectMolecule(molecules, "hf");
     const dir = scratchDir("blocked");
     writeFileSync(join(dir, "sheets"), "a file where the folder should be");
-    await expect(writeBenchSheets({ molecules, entries: [atlasEntry(hf, hf.species[0], 296)], outDir: dir, build })).rejects.toThrow(/^cannot create the folder .*sheets\/hf: ENOTDIR$/);
+    await expect(writeBenchSheets({ molecules, entries: [atlasEntry(hf, hf.species[0], 296)], outDir: dir, build })).rejects.toThrow(
+      /^cannot create the folder .*sheets\/hf: ENOTDIR$/,
+    );
     mkdirSync(join(dir, "other"));
     expect(readdirSync(dir).sort()).toEqual(["other", "sheets"]);
   });

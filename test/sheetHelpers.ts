@@ -29,7 +29,12 @@ export function pdfText(path: string, layout = false): string {
 
 export function pdfInfo(path: string): Record<string, string> {
   const out = execFileSync("pdfinfo", ["-isodates", path], { encoding: "utf8" });
-  return Object.fromEntries(out.split("\n").filter((l) => l.includes(":")).map((l) => [l.slice(0, l.indexOf(":")).trim(), l.slice(l.indexOf(":") + 1).trim()]));
+  return Object.fromEntries(
+    out
+      .split("\n")
+      .filter((l) => l.includes(":"))
+      .map((l) => [l.slice(0, l.indexOf(":")).trim(), l.slice(l.indexOf(":") + 1).trim()]),
+  );
 }
 
 export function pdfFonts(path: string): string {

@@ -35,7 +35,10 @@ describe("page data", () => {
 
   it("shows measured − predicted with that sign, against the cited reference lines", () => {
     // Maki, CRC Handbook table of CO 1-0 wavenumbers (cited in molecules/co.yaml): R(0) = 2147.081132, P(4) = 2127.682404 cm⁻¹.
-    for (const [label, measured] of [["R(0)", 2147.081132], ["P(4)", 2127.682404]] as const) {
+    for (const [label, measured] of [
+      ["R(0)", 2147.081132],
+      ["P(4)", 2127.682404],
+    ] as const) {
       const row = fundamental.rows.find((r) => r.label === label)!;
       expect(row.measuredMinusPredicted).not.toBeNull();
       // The cell is printed to 2 significant figures and the wavenumber to 4 decimals.

@@ -13,7 +13,7 @@ describe("positions in cm⁻¹, nm and µm", () => {
 
   it("converts vacuum wavelengths exactly and air wavelengths back through Edlén's n", () => {
     // 12C2H2 P(13): 195 580 979 370 kHz (BIPM recommended frequency) = 6523.878748 cm⁻¹ = 1532.8303 nm (c exact).
-    const sigma = (195580979370e3 / 29979245800);
+    const sigma = 195580979370e3 / 29979245800;
     expect(positionToWavenumber({ value: 1e7 / sigma, unit: "nm", medium: "vacuum" })).toBeCloseTo(sigma, 9);
     expect(positionToWavenumber({ value: 1e4 / sigma, unit: "um", medium: "vacuum" })).toBeCloseTo(sigma, 9);
     // Round trip with the atlas's own air wavelength (Edlén 1966): to 1e-9 cm⁻¹.

@@ -32,7 +32,12 @@ export interface AtlasEntry {
 export function atlasEntry(molecule: Molecule, species: SpeciesInfo, temperatureK: number, minRelative?: number): AtlasEntry {
   const q = speciesPartitionFunction(species.model, temperatureK);
   // The first band (a diatomic's fundamental, a linear molecule's first listed band) is the reference.
-  const computed = speciesBands(species).map(({ band, kind, name }) => ({ kind, band, name, lines: bandLines(species.model, band, { temperatureK, partitionFunction: q, minRelative }) }));
+  const computed = speciesBands(species).map(({ band, kind, name }) => ({
+    kind,
+    band,
+    name,
+    lines: bandLines(species.model, band, { temperatureK, partitionFunction: q, minRelative }),
+  }));
   const fundamental = computed[0].lines;
   const bands: AtlasBand[] = computed.map(({ kind, band, name, lines }, index) => {
     let ratio: number | null = null;

@@ -13,7 +13,14 @@ export function atlasLines(molecules: Molecule[], temperatureK: number, minRelat
         const result = bandLines(species.model, band, { temperatureK, partitionFunction: q, minRelative });
         const label = bandLabel(band);
         for (const line of result.lines) {
-          out.push({ molecule: molecule.id, species: species.model.label, band: label, label: line.label, wavenumber: line.wavenumber, relativeIntensity: line.relativeIntensity });
+          out.push({
+            molecule: molecule.id,
+            species: species.model.label,
+            band: label,
+            label: line.label,
+            wavenumber: line.wavenumber,
+            relativeIntensity: line.relativeIntensity,
+          });
         }
       }
     }
@@ -27,13 +34,22 @@ export function atlasLines(molecules: Molecule[], temperatureK: number, minRelat
  * bands again: a band's relative intensities do not depend on where its list is cut.
  */
 export function entryLines(entries: AtlasEntry[], temperatureK: number, minRelative: number): LocatedLine[] {
-  if (minRelative < defaultMinRelativeIntensity) throw new RangeError(`entryLines: the entries hold lines down to ${defaultMinRelativeIntensity} of their band's strongest, not ${minRelative}`);
+  if (minRelative < defaultMinRelativeIntensity)
+    throw new RangeError(`entryLines: the entries hold lines down to ${defaultMinRelativeIntensity} of their band's strongest, not ${minRelative}`);
   const out: LocatedLine[] = [];
   for (const entry of entries) {
     if (entry.temperatureK !== temperatureK) continue;
     for (const band of entry.bands) {
       for (const line of band.lines.lines) {
-        if (line.relativeIntensity >= minRelative) out.push({ molecule: entry.moleculeId, species: entry.species, band: band.label, label: line.label, wavenumber: line.wavenumber, relativeIntensity: line.relativeIntensity });
+        if (line.relativeIntensity >= minRelative)
+          out.push({
+            molecule: entry.moleculeId,
+            species: entry.species,
+            band: band.label,
+            label: line.label,
+            wavenumber: line.wavenumber,
+            relativeIntensity: line.relativeIntensity,
+          });
       }
     }
   }

@@ -64,7 +64,14 @@ function hasAbsoluteData(molecule: Molecule): boolean {
  */
 function unitDipoleModel(species: SpeciesInfo, reference: SpeciesInfo): SpeciesModel {
   const first = speciesBands(species)[0].band;
-  const unit = { band: first, transitionDipoleDebye: 1, transitionDipoleUncertaintyDebye: 0, hermanWallis: null, origin: "cited" as const, sourceKey: "unit-dipole" };
+  const unit = {
+    band: first,
+    transitionDipoleDebye: 1,
+    transitionDipoleUncertaintyDebye: 0,
+    hermanWallis: null,
+    origin: "cited" as const,
+    sourceKey: "unit-dipole",
+  };
   const data = species === reference ? unit : scaleTransitionDipoleToIsotopologue(unit, reference.model.reducedMassU, species.model.reducedMassU);
   return { ...species.model, intensities: [data] };
 }
@@ -118,7 +125,16 @@ export function cellLinesOfModel(cell: CellModel, conditions: CellConditions): C
         leftOut.push({ species: model.label, band: label, reason: "no intensity data for this band" });
         continue;
       }
-      used.push({ species: model.label, band: label, intensityOrigin: scale === "absolute" ? result.intensityOrigin ?? "cited" : result.intensityOrigin === "harmonic-hot-band" ? "unit-dipole, harmonic hot band" : "unit-dipole" });
+      used.push({
+        species: model.label,
+        band: label,
+        intensityOrigin:
+          scale === "absolute"
+            ? (result.intensityOrigin ?? "cited")
+            : result.intensityOrigin === "harmonic-hot-band"
+              ? "unit-dipole, harmonic hot band"
+              : "unit-dipole",
+      });
       lines = lines.concat(absorbingLines(model, result, conditions, broadening, (l) => l.lineIntensity));
     }
   }
@@ -128,7 +144,9 @@ export function cellLinesOfModel(cell: CellModel, conditions: CellConditions): C
   const typical = broadeningIsTypical(broadening, conditions.moleFraction);
   const notes: string[] = [];
   if (scale === "relative-thin") {
-    notes.push(`${cell.moleculeName} has no cited band intensity: no transmittance can be given. Shapes are relative, optically thin, with a 1 D stand-in dipole; peak shifts assume a weak absorber.`);
+    notes.push(
+      `${cell.moleculeName} has no cited band intensity: no transmittance can be given. Shapes are relative, optically thin, with a 1 D stand-in dipole; peak shifts assume a weak absorber.`,
+    );
   }
   if (typical) notes.push("Line widths use a typical pressure-broadening coefficient (0.07 cm⁻¹/atm, n = 0.75), not a measured one for this gas.");
   if (leftOut.length) notes.push(`Left out for want of intensity data: ${leftOut.map((b) => `${b.species} ${b.band}`).join(", ")}.`);
@@ -148,13 +166,29 @@ export interface MoleculeCellSpectrum {
   spectrum: CellSpectrum;
 }
 
-export function moleculeCellSpectrum(molecule: Molecule, settings: CellSpectrumSettings, set = cellLineSet(molecule, settings.conditions)): MoleculeCellSpectrum {
-  const spectrum = cellSpectrum({ lines: set.lines, conditions: settings.conditions, intensityScale: set.intensityScale, fromCm: settings.fromCm, toCm: settings.toCm, instrument: settings.instrument, stepCm: settings.stepCm });
+export function moleculeCellSpectrum(
+  molecule: Molecule,
+  settings: CellSpectrumSettings,
+  set = cellLineSet(molecule, settings.conditions),
+): MoleculeCellSpectrum {
+  const spectrum = cellSpectrum({
+    lines: set.lines,
+    conditions: settings.conditions,
+    intensityScale: set.intensityScale,
+    fromCm: settings.fromCm,
+    toCm: settings.toCm,
+    instrument: settings.instrument,
+    stepCm: settings.stepCm,
+  });
   return { set, spectrum };
 }
 
 /** The range worth computing for calibration lines: the strong lines of the gas, plus a margin. */
-export function calibrationRange(set: CellLineSet, resolutionCm: number, criteria: CalibrationCriteria = defaultCalibrationCriteria): { fromCm: number; toCm: number } {
+export function calibrationRange(
+  set: CellLineSet,
+  resolutionCm: number,
+  criteria: CalibrationCriteria = defaultCalibrationCriteria,
+): { fromCm: number; toCm: number } {
   let strongest = 0;
   for (const l of set.lines) if (l.intensity > strongest) strongest = l.intensity;
   const strong = set.lines.filter((l) => l.intensity >= criteria.strongFraction * strongest).map((l) => l.wavenumber);
@@ -207,7 +241,14 @@ export function calibrationMarks(molecule: Molecule, conditions: CellConditions 
     last = moleculeCalibrationLines(molecule, settings, defaultCalibrationCriteria, set);
     byResolution.push({
       resolutionCm,
-      lines: last.lines.map((l) => ({ species: l.species, band: l.band, label: l.label, wavenumber: l.wavenumber, relativeToStrongest: l.relativeToStrongest, peakShiftCm: l.peakShiftCm })),
+      lines: last.lines.map((l) => ({
+        species: l.species,
+        band: l.band,
+        label: l.label,
+        wavenumber: l.wavenumber,
+        relativeToStrongest: l.relativeToStrongest,
+        peakShiftCm: l.peakShiftCm,
+      })),
     });
   }
   return {

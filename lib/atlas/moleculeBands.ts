@@ -30,7 +30,9 @@ export function resolveBand(molecule: Molecule, species: SpeciesInfo, text: stri
   if (!linear) return parseBand(text ?? "1-0");
   if (text === undefined) return linear.bands[0].band;
   const wanted = text.trim().toLowerCase();
-  const found = linear.bands.find((b) => b.band.label!.toLowerCase() === wanted || b.name.toLowerCase() === wanted || b.name.replace(/ν/g, "nu").toLowerCase() === wanted);
+  const found = linear.bands.find(
+    (b) => b.band.label!.toLowerCase() === wanted || b.name.toLowerCase() === wanted || b.name.replace(/ν/g, "nu").toLowerCase() === wanted,
+  );
   if (!found) {
     throw new CoreInputError(
       `${molecule.name} (${species.model.label}) has no band "${text}"; its bands are: ${linear.bands.map((b) => `${b.band.label} (${b.name})`).join(", ")}`,

@@ -12,7 +12,10 @@ export function selectMolecule(molecules: Molecule[], name: string): Molecule {
   const wanted = name.trim().toLowerCase();
   const found =
     molecules.find((m) => m.id === wanted) ??
-    molecules.find((m) => m.formula.toLowerCase() === wanted || m.casNumber === wanted || m.aliases.some((a) => a.toLowerCase() === wanted) || m.name.toLowerCase() === wanted);
+    molecules.find(
+      (m) =>
+        m.formula.toLowerCase() === wanted || m.casNumber === wanted || m.aliases.some((a) => a.toLowerCase() === wanted) || m.name.toLowerCase() === wanted,
+    );
   if (!found) {
     throw new AtlasLookupError(`unknown molecule "${name}"; the atlas has: ${molecules.map((m) => m.id).join(", ")}`);
   }
@@ -25,9 +28,7 @@ export function selectSpecies(molecule: Molecule, name: string | undefined): Spe
   const wanted = name.trim().toLowerCase();
   const found = molecule.species.find((s) => s.spellings.includes(wanted));
   if (!found) {
-    throw new AtlasLookupError(
-      `${molecule.name} has no species "${name}"; it has: ${molecule.species.map((s) => s.model.label).join(", ")}`,
-    );
+    throw new AtlasLookupError(`${molecule.name} has no species "${name}"; it has: ${molecule.species.map((s) => s.model.label).join(", ")}`);
   }
   return found;
 }

@@ -3,7 +3,16 @@
 // uses (cellLinesOfModel, cellSpectrum, calibrationLines). Loaded as an external file (the CSP
 // allows no inline script); every text is written with textContent, never innerHTML.
 import { cellLinesOfModel, lengthUnitsCm, maxCellPressurePa, pressureUnitsPa, type CellLineSet, type CellModel } from "../atlas/index.ts";
-import { calibrationLines, cellSpectrum, CoreInputError, nearestGridIndex, type CalibrationLine, type CellConditions, type CellSpectrum, type Instrument } from "../core/index.ts";
+import {
+  calibrationLines,
+  cellSpectrum,
+  CoreInputError,
+  nearestGridIndex,
+  type CalibrationLine,
+  type CellConditions,
+  type CellSpectrum,
+  type Instrument,
+} from "../core/index.ts";
 import { significant } from "../format/numbers.ts";
 import { calibrationWavenumberDigits, peakShiftDigits, spectrumWavenumberDigits, transmittanceDigits } from "../format/spectrumCells.ts";
 import { benchCommands, benchQuery, instrumentOf, readBenchSettings, type BenchSettings } from "../format/benchSettings.ts";
@@ -22,7 +31,12 @@ interface Computed {
 
 function compute(model: CellModel, settings: BenchSettings): Computed {
   const started = performance.now();
-  const conditions: CellConditions = { temperatureK: settings.temperatureK, pressurePa: settings.pressure * pressureUnitsPa[settings.pressureUnit], pathCm: settings.path * lengthUnitsCm[settings.pathUnit], moleFraction: settings.moleFraction };
+  const conditions: CellConditions = {
+    temperatureK: settings.temperatureK,
+    pressurePa: settings.pressure * pressureUnitsPa[settings.pressureUnit],
+    pathCm: settings.path * lengthUnitsCm[settings.pathUnit],
+    moleFraction: settings.moleFraction,
+  };
   if (conditions.pressurePa > maxCellPressurePa) throw new CoreInputError("above 100 atm the ideal-gas and Voigt models mean nothing: lower the pressure");
   const instrument: Instrument = instrumentOf(settings);
   const set = cellLinesOfModel(model, conditions);
@@ -47,10 +61,22 @@ function calibrationTable(c: Computed): HTMLElement {
   const wrap = el("div", undefined, { class: "table-wrap" });
   const table = el("table", undefined, { class: "lines calibration-lines", id: "bench-lines" });
   const none = c.lines.length === 0 ? " (a line must be strong, isolated, and known to R/50 inside a band validated against cited measured lines)" : "";
-  const cap = el("caption", `${c.lines.length} calibration-grade line${c.lines.length === 1 ? "" : "s"} at ${c.settings.resolutionCm} cm⁻¹ between ${c.settings.fromCm} and ${c.settings.toCm} cm⁻¹${none}`);
+  const cap = el(
+    "caption",
+    `${c.lines.length} calibration-grade line${c.lines.length === 1 ? "" : "s"} at ${c.settings.resolutionCm} cm⁻¹ between ${c.settings.fromCm} and ${c.settings.toCm} cm⁻¹${none}`,
+  );
   table.append(cap);
   const head = el("tr");
-  for (const [name, unit] of [["line", ""], ["species", ""], ["band", ""], ["wavenumber ν̃", "/ cm⁻¹"], ["± ν̃", "/ cm⁻¹"], ["strength", "(strongest line of the gas = 1)"], ["apparent peak", "/ cm⁻¹"], ["expected peak shift", "/ cm⁻¹"]]) {
+  for (const [name, unit] of [
+    ["line", ""],
+    ["species", ""],
+    ["band", ""],
+    ["wavenumber ν̃", "/ cm⁻¹"],
+    ["± ν̃", "/ cm⁻¹"],
+    ["strength", "(strongest line of the gas = 1)"],
+    ["apparent peak", "/ cm⁻¹"],
+    ["expected peak shift", "/ cm⁻¹"],
+  ]) {
     const th = el("th", name, { scope: "col" });
     if (unit) th.append(el("br"), el("span", unit, { class: "unit" }));
     head.append(th);
@@ -102,11 +128,17 @@ function setup(page: HTMLElement, model: CellModel) {
     const s = c.spectrum;
     const first = s.grid.startCm + s.windowFirst * s.grid.stepCm;
     const last = s.grid.startCm + s.windowLast * s.grid.stepCm;
-    if (wavenumber < first || wavenumber > last) return probeOut.replaceChildren(`${wavenumber} cm⁻¹ is outside the range shown (${c.settings.fromCm} to ${c.settings.toCm} cm⁻¹).`);
+    if (wavenumber < first || wavenumber > last)
+      return probeOut.replaceChildren(`${wavenumber} cm⁻¹ is outside the range shown (${c.settings.fromCm} to ${c.settings.toCm} cm⁻¹).`);
     const i = nearestGridIndex(s.grid, wavenumber);
     const nu = s.grid.startCm + i * s.grid.stepCm;
     const value = el("strong", signal.digits(signal.values[i]), { id: "bench-probe-value" });
-    const parts: Array<string | Node> = [`At ν̃ = `, el("span", spectrumWavenumberDigits(nu), { id: "bench-probe-wavenumber" }), ` cm⁻¹: ${signal.absolute ? "transmittance seen by the instrument" : "relative absorbance"} `, value];
+    const parts: Array<string | Node> = [
+      `At ν̃ = `,
+      el("span", spectrumWavenumberDigits(nu), { id: "bench-probe-wavenumber" }),
+      ` cm⁻¹: ${signal.absolute ? "transmittance seen by the instrument" : "relative absorbance"} `,
+      value,
+    ];
     if (s.transmittance) parts.push(` (monochromatic ${transmittanceDigits(s.transmittance[i])})`);
     probeOut.replaceChildren(...parts, ".");
   };
@@ -134,9 +166,12 @@ function setup(page: HTMLElement, model: CellModel) {
     list.replaceChildren(calibrationTable(c));
     showProbe(c, c.settings.at);
     const commands = benchCommands(model.moleculeId, c.settings);
-    document.getElementById("bench-cli-spectrum")!.textContent = commands.spectrum + (c.set.intensityScale === "absolute" ? " --format csv" : " --relative --format csv");
+    document.getElementById("bench-cli-spectrum")!.textContent =
+      commands.spectrum + (c.set.intensityScale === "absolute" ? " --format csv" : " --relative --format csv");
     document.getElementById("bench-cli-calibration")!.textContent = commands.calibration;
-    status.replaceChildren(`Computed in ${Math.round(c.ms)} ms in your browser: ${c.set.lines.length} lines of ${c.set.bandsUsed.length} bands, ${s.windowLast - s.windowFirst + 1} points at ${s.grid.stepCm.toPrecision(3)} cm⁻¹.`);
+    status.replaceChildren(
+      `Computed in ${Math.round(c.ms)} ms in your browser: ${c.set.lines.length} lines of ${c.set.bandsUsed.length} bands, ${s.windowLast - s.windowFirst + 1} points at ${s.grid.stepCm.toPrecision(3)} cm⁻¹.`,
+    );
     status.classList.remove("error");
     page.dataset.state = "ready";
     page.dataset.resolution = String(c.settings.resolutionCm);
@@ -154,7 +189,9 @@ function setup(page: HTMLElement, model: CellModel) {
           render(current);
         } catch (error) {
           page.dataset.state = "error";
-          status.replaceChildren(error instanceof CoreInputError || error instanceof RangeError ? error.message : `Could not compute: ${(error as Error).message}`);
+          status.replaceChildren(
+            error instanceof CoreInputError || error instanceof RangeError ? error.message : `Could not compute: ${(error as Error).message}`,
+          );
           status.classList.add("error");
         }
       }),

@@ -3,7 +3,14 @@
 // with textContent, never innerHTML.
 import MiniSearch from "minisearch";
 import { fixed, significant } from "../format/numbers.ts";
-import { parseSpectralPosition, positionToWavenumber, unitLabels, windowToWavenumber, type PositionUnit, type SpectralPosition } from "../core/spectralPosition.ts";
+import {
+  parseSpectralPosition,
+  positionToWavenumber,
+  unitLabels,
+  windowToWavenumber,
+  type PositionUnit,
+  type SpectralPosition,
+} from "../core/spectralPosition.ts";
 import { decodeLineIndex, type DecodedLineIndex, type LineIndexFile } from "../shared/lineIndexCodec.ts";
 import { nameIndexOptions, nameSearchOptions } from "../shared/nameSearchOptions.ts";
 import { searchWavenumber } from "./wavenumberSearch.ts";
@@ -88,14 +95,21 @@ function setupWavenumberSearch(form: HTMLFormElement) {
     if (!(minRelative < 1)) return fail("The minimum relative intensity must be below 1.");
     try {
       const index = await load(token);
-      if (minRelative < index.minRelative) return fail(`The site's index holds lines down to ${index.minRelative} of their band's strongest line; for weaker lines use \`bandatlas find --min-relative\`.`);
+      if (minRelative < index.minRelative)
+        return fail(
+          `The site's index holds lines down to ${index.minRelative} of their band's strongest line; for weaker lines use \`bandatlas find --min-relative\`.`,
+        );
       const matches = searchWavenumber(index, wavenumber, windowCm, minRelative);
       const given = position.unit === "cm-1" ? "" : ` (${position.value} ${unitLabels[position.unit]}, ${position.medium})`;
-      const head = el("p", `Lines within ±${significant(windowCm, 4)} cm⁻¹ of ${position.unit === "cm-1" ? wavenumber : fixed(wavenumber, 4)} cm⁻¹${given} at ${index.temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}`);
+      const head = el(
+        "p",
+        `Lines within ±${significant(windowCm, 4)} cm⁻¹ of ${position.unit === "cm-1" ? wavenumber : fixed(wavenumber, 4)} cm⁻¹${given} at ${index.temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}`,
+      );
       if (!matches.length) return show(output, head);
       const table = el("table", undefined, { class: "lines compact" });
       const headRow = el("tr");
-      for (const h of ["molecule", "species", "band", "line", "wavenumber / cm⁻¹", "offset / cm⁻¹", "rel. intensity"]) headRow.append(el("th", h, { scope: "col" }));
+      for (const h of ["molecule", "species", "band", "line", "wavenumber / cm⁻¹", "offset / cm⁻¹", "rel. intensity"])
+        headRow.append(el("th", h, { scope: "col" }));
       table.append(el("thead"), el("tbody"));
       table.tHead!.append(headRow);
       for (const m of matches) {
@@ -103,7 +117,15 @@ function setupWavenumberSearch(form: HTMLFormElement) {
         const link = el("a", m.label, { href: `${root}${m.page}#${lineRowId(m.band, m.label)}` });
         const lineCell = el("td");
         lineCell.append(link);
-        row.append(el("td", m.molecule), el("td", m.species), el("td", m.band), lineCell, el("td", fixed(m.wavenumber, 4), { class: "num" }), el("td", (m.offset >= 0 ? "+" : "") + fixed(m.offset, 4), { class: "num" }), el("td", significant(m.relativeIntensity, 3), { class: "num" }));
+        row.append(
+          el("td", m.molecule),
+          el("td", m.species),
+          el("td", m.band),
+          lineCell,
+          el("td", fixed(m.wavenumber, 4), { class: "num" }),
+          el("td", (m.offset >= 0 ? "+" : "") + fixed(m.offset, 4), { class: "num" }),
+          el("td", significant(m.relativeIntensity, 3), { class: "num" }),
+        );
         table.tBodies[0].append(row);
       }
       show(output, head, table);

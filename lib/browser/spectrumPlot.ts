@@ -80,14 +80,21 @@ export function drawSpectrumPlot(container: HTMLElement, series: PlotSeries, opt
     root.append(svg("line", { x1: left - 5, x2: left, y1: y, y2: y, class: "tick" }));
     root.append(svg("text", { x: left - 8, y: y + 4, "text-anchor": "end", class: "tick-label" }, t.toFixed(yt.decimals)));
   }
-  root.append(svg("text", { x: 16, y: top + plotH / 2, "text-anchor": "middle", transform: `rotate(-90 16 ${top + plotH / 2})`, class: "axis-label" }, `${options.yLabel} ${options.yUnit}`.trim()));
+  root.append(
+    svg(
+      "text",
+      { x: 16, y: top + plotH / 2, "text-anchor": "middle", transform: `rotate(-90 16 ${top + plotH / 2})`, class: "axis-label" },
+      `${options.yLabel} ${options.yUnit}`.trim(),
+    ),
+  );
 
   // One vertical stroke per pixel column, from the smallest to the largest sample under it.
   const columns = Math.round(plotW);
   const perColumn = (series.last - series.first + 1) / columns;
   let d = "";
   if (perColumn <= 2) {
-    for (let i = series.first; i <= series.last; i++) d += `${i === series.first ? "M" : "L"}${sx(series.startCm + i * series.stepCm).toFixed(1)},${sy(series.values[i]).toFixed(1)}`;
+    for (let i = series.first; i <= series.last; i++)
+      d += `${i === series.first ? "M" : "L"}${sx(series.startCm + i * series.stepCm).toFixed(1)},${sy(series.values[i]).toFixed(1)}`;
   } else {
     for (let c = 0; c < columns; c++) {
       const a = series.first + Math.floor(c * perColumn);
@@ -115,7 +122,13 @@ export function drawSpectrumPlot(container: HTMLElement, series: PlotSeries, opt
     marks.append(tri);
   }
   root.append(marks);
-  root.append(svg("text", { x: left, y: 14, class: "mark-legend" }, options.marks.length ? "▼ calibration-grade line (listed below)" : "no calibration-grade line in this range"));
+  root.append(
+    svg(
+      "text",
+      { x: left, y: 14, class: "mark-legend" },
+      options.marks.length ? "▼ calibration-grade line (listed below)" : "no calibration-grade line in this range",
+    ),
+  );
 
   const cursor = svg("line", { x1: 0, x2: 0, y1: top, y2: top + plotH, class: "cursor", visibility: "hidden" });
   const readout = svg("text", { x: left + plotW, y: 14, "text-anchor": "end", class: "readout" });

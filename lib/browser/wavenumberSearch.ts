@@ -18,7 +18,8 @@ function lowerBound(values: Float64Array, value: number): number {
  * core's nearbyLines (the function behind `bandatlas find`) makes the decision and the order.
  */
 export function searchWavenumber(index: DecodedLineIndex, wavenumber: number, windowCm: number, minRelative: number): Array<NearbyLine & { page: string }> {
-  if (minRelative < index.minRelative) throw new RangeError(`the index holds lines down to ${index.minRelative} of their band's strongest; choose at least that`);
+  if (minRelative < index.minRelative)
+    throw new RangeError(`the index holds lines down to ${index.minRelative} of their band's strongest; choose at least that`);
   const margin = windowCm * 1e-9 + 1e-9;
   const start = lowerBound(index.wavenumbers, wavenumber - windowCm - margin);
   const candidates: IndexedLine[] = [];

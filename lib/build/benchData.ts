@@ -17,7 +17,10 @@ export interface MoleculeBenchData {
 
 export function moleculeBenchData(molecule: Molecule): MoleculeBenchData {
   const model = cellModel(molecule);
-  const range = calibrationRange(cellLineSet(molecule, defaultCellConditions), benchDefaultResolutionCm, { ...defaultCalibrationCriteria, strongFraction: 0.01 });
+  const range = calibrationRange(cellLineSet(molecule, defaultCellConditions), benchDefaultResolutionCm, {
+    ...defaultCalibrationCriteria,
+    strongFraction: 0.01,
+  });
   return {
     moleculeId: molecule.id,
     marks: calibrationMarks(molecule),

@@ -105,7 +105,12 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   const cache = options.cache;
   const perMolecule = <T>(kind: string, molecule: Molecule, compute: () => T): T => (cache ? cache.forMolecule(kind, molecule, compute) : compute());
   const entriesOf = new Map(
-    molecules.map((molecule) => [molecule.id, perMolecule("entries", molecule, () => molecule.species.flatMap((species) => standardTemperaturesK.map((temperatureK) => atlasEntry(molecule, species, temperatureK))))]),
+    molecules.map((molecule) => [
+      molecule.id,
+      perMolecule("entries", molecule, () =>
+        molecule.species.flatMap((species) => standardTemperaturesK.map((temperatureK) => atlasEntry(molecule, species, temperatureK))),
+      ),
+    ]),
   );
   const entries: AtlasEntry[] = [...entriesOf.values()].flat();
   const entriesMs = lap();
@@ -130,7 +135,12 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       const moleculeEntries = entriesOf.get(molecule.id)!;
       const moleculePlots = await perMolecule("plots", molecule, async () => {
         const made: EntryPlots[] = [];
-        for (const entry of moleculeEntries) made.push({ linearSvg: await bandOverviewSvg(entry, "linear"), logSvg: await bandOverviewSvg(entry, "log"), description: bandOverviewDescription(entry, "linear") });
+        for (const entry of moleculeEntries)
+          made.push({
+            linearSvg: await bandOverviewSvg(entry, "linear"),
+            logSvg: await bandOverviewSvg(entry, "log"),
+            description: bandOverviewDescription(entry, "linear"),
+          });
         return made;
       });
       moleculeEntries.forEach((entry, i) => plots.set(entry, moleculePlots[i]));
@@ -155,14 +165,19 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       lineIndexPaths.push({ temperatureK, path });
       lineIndexReport.push({ temperatureK, lines: file.count, bytes: Buffer.byteLength(text) });
     }
-    log(`search index: ${lineIndexReport.map((r) => `${r.lines} lines at ${r.temperatureK} K`).join(", ")} (${lineIndexBytesPerLine} bytes a line before base64)`);
+    log(
+      `search index: ${lineIndexReport.map((r) => `${r.lines} lines at ${r.temperatureK} K`).join(", ")} (${lineIndexBytesPerLine} bytes a line before base64)`,
+    );
 
     for (const molecule of molecules) {
       const downloads = perMolecule("downloads", molecule, () =>
         entriesOf.get(molecule.id)!.flatMap((entry) =>
           entry.bands.flatMap((band) => [
             [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"), linesCsv(band.lines, molecule.limitations)],
-            [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"), JSON.stringify(linesDocument(entry.moleculeId, band.lines, molecule.limitations), null, 2) + "\n"],
+            [
+              downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"),
+              JSON.stringify(linesDocument(entry.moleculeId, band.lines, molecule.limitations), null, 2) + "\n",
+            ],
           ]),
         ),
       );
@@ -198,19 +213,32 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     const sheetsMs = sheetRun ? lap() : 0;
     const links = checkInternalLinks(work);
     if (links.broken.length) {
-      const sample = links.broken.slice(0, 10).map((b) => `  ${b.page}: ${b.href} (${b.reason})`).join("\n");
-      throw new BuildError(`${links.broken.length} broken internal link${links.broken.length === 1 ? "" : "s"}; the previous site is left in place:\n${sample}`);
+      const sample = links.broken
+        .slice(0, 10)
+        .map((b) => `  ${b.page}: ${b.href} (${b.reason})`)
+        .join("\n");
+      throw new BuildError(
+        `${links.broken.length} broken internal link${links.broken.length === 1 ? "" : "s"}; the previous site is left in place:\n${sample}`,
+      );
     }
 
     swapDirectory(work, outDir);
     cache?.endBuild();
     const finishMs = lap();
     const timings = { loadingMs, physicsMs, plotsMs, filesMs, pagesMs, sheetsMs, finishMs, totalMs: performance.now() - started };
-    return { outDir, molecules: molecules.length, pages: links.pages, entries: entries.length, sheets: sheets.length, lineIndex: lineIndexReport, build, timings };
+    return {
+      outDir,
+      molecules: molecules.length,
+      pages: links.pages,
+      entries: entries.length,
+      sheets: sheets.length,
+      lineIndex: lineIndexReport,
+      build,
+      timings,
+    };
   } catch (error) {
     await Promise.all([sheetRun?.cancel(), benchRun?.cancel()]);
     rmSync(work, { recursive: true, force: true });
     throw error;
   }
 }
-

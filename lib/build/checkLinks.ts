@@ -17,7 +17,13 @@ function htmlFiles(dir: string): string[] {
   return out;
 }
 
-const decodeEntities = (s: string) => s.replace(/&amp;/g, "&").replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&lt;/g, "<").replace(/&gt;/g, ">");
+const decodeEntities = (s: string) =>
+  s
+    .replace(/&amp;/g, "&")
+    .replace(/&quot;/g, '"')
+    .replace(/&#39;/g, "'")
+    .replace(/&lt;/g, "<")
+    .replace(/&gt;/g, ">");
 
 /**
  * Every internal href/src of every built page: the file must exist inside the site and a
@@ -55,7 +61,8 @@ export function checkInternalLinks(siteDir: string): { pages: number; links: num
         broken.push({ page: rel, href, reason: "no such file" });
         continue;
       }
-      if (fragment && target.endsWith(".html") && !ids(target).has(decodeURIComponent(fragment))) broken.push({ page: rel, href, reason: `no id "${fragment}" on the target page` });
+      if (fragment && target.endsWith(".html") && !ids(target).has(decodeURIComponent(fragment)))
+        broken.push({ page: rel, href, reason: `no id "${fragment}" on the target page` });
     }
   }
   return { pages: pages.length, links, broken };

@@ -40,7 +40,13 @@ export function joinUnitWords(args: string[]): string[] {
   const unitWord = /^[a-zA-Z]+$/;
   for (let i = 0; i < args.length; i++) {
     const a = args[i];
-    if (["--pressure", "--path", "--temperature"].includes(a) && i + 2 < args.length + 1 && args[i + 2] !== undefined && unitWord.test(args[i + 2]) && /^[-+\d.]/.test(args[i + 1])) {
+    if (
+      ["--pressure", "--path", "--temperature"].includes(a) &&
+      i + 2 < args.length + 1 &&
+      args[i + 2] !== undefined &&
+      unitWord.test(args[i + 2]) &&
+      /^[-+\d.]/.test(args[i + 1])
+    ) {
       out.push(a, `${args[i + 1]} ${args[i + 2]}`);
       i += 2;
     } else out.push(a);
@@ -53,7 +59,12 @@ function quantity(name: string, text: string, units: Record<string, number>, exa
   if (!match) throw new UsageError(`--${name} "${text}": give a number and a unit, e.g. ${example} (units: ${Object.keys(units).join(", ")})`);
   const unit = match[2].toLowerCase();
   const factor = units[unit];
-  if (factor === undefined) throw new UsageError(`--${name} "${text}": unknown unit "${match[2]}"; use one of: ${Object.keys(units).map((u) => (u === "torr" ? "Torr" : u === "kpa" ? "kPa" : u === "hpa" ? "hPa" : u === "pa" ? "Pa" : u)).join(", ")}`);
+  if (factor === undefined)
+    throw new UsageError(
+      `--${name} "${text}": unknown unit "${match[2]}"; use one of: ${Object.keys(units)
+        .map((u) => (u === "torr" ? "Torr" : u === "kpa" ? "kPa" : u === "hpa" ? "hPa" : u === "pa" ? "Pa" : u))
+        .join(", ")}`,
+    );
   const value = Number(match[1]) * factor;
   if (!(value > 0) || !Number.isFinite(value)) throw new UsageError(`--${name} "${text}": must be above 0`);
   return value;
@@ -93,7 +104,8 @@ export function instrumentFromOptions(values: Record<string, string | boolean | 
   }
   if (kind !== "ft") throw new UsageError(`--instrument ${kind}: use ft or grating`);
   const apodization = ((values.apodization as string | undefined) ?? "triangular").toLowerCase();
-  if (!(apodizations as readonly string[]).includes(apodization)) throw new UsageError(`--apodization ${values.apodization}: use one of ${apodizations.join(", ")}`);
+  if (!(apodizations as readonly string[]).includes(apodization))
+    throw new UsageError(`--apodization ${values.apodization}: use one of ${apodizations.join(", ")}`);
   return { kind: "fourier-transform", resolutionCm, apodization: apodization as Apodization };
 }
 
@@ -106,6 +118,11 @@ export function rangeFromOptions(values: Record<string, string | boolean | undef
 }
 
 export function describeConditions(c: CellConditions, instrument: Instrument): string {
-  const inst = instrument.kind === "grating" ? `grating, Gaussian slit FWHM ${instrument.resolutionCm} cm⁻¹` : instrument.kind === "fourier-transform" ? `FT, resolution ${instrument.resolutionCm} cm⁻¹ (max. OPD ${(1 / instrument.resolutionCm).toPrecision(4)} cm), ${instrument.apodization} apodization` : "monochromatic";
+  const inst =
+    instrument.kind === "grating"
+      ? `grating, Gaussian slit FWHM ${instrument.resolutionCm} cm⁻¹`
+      : instrument.kind === "fourier-transform"
+        ? `FT, resolution ${instrument.resolutionCm} cm⁻¹ (max. OPD ${(1 / instrument.resolutionCm).toPrecision(4)} cm), ${instrument.apodization} apodization`
+        : "monochromatic";
   return `${c.pathCm} cm cell, ${c.temperatureK} K, ${(c.pressurePa / 100).toPrecision(5)} mbar (${((c.pressurePa * 760) / standardAtmospherePa).toPrecision(5)} Torr) total, mole fraction ${c.moleFraction} in air; ${inst}`;
 }

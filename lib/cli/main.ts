@@ -31,7 +31,9 @@ export async function runCli(argv: string[]): Promise<{ stdout: string; stderr: 
   }
   try {
     const result = await command.run(rest);
-    return typeof result === "string" ? { stdout: result, stderr: "", exitCode: 0 } : { stdout: result.exitCode === 0 ? result.output : "", stderr: result.exitCode === 0 ? "" : result.output, exitCode: result.exitCode };
+    return typeof result === "string"
+      ? { stdout: result, stderr: "", exitCode: 0 }
+      : { stdout: result.exitCode === 0 ? result.output : "", stderr: result.exitCode === 0 ? "" : result.output, exitCode: result.exitCode };
   } catch (error) {
     if (error instanceof MoleculeFileError) return { stdout: "", stderr: error.problems.map(formatProblem).join("\n") + "\n", exitCode: 1 };
     if (error instanceof UsageError || error instanceof CoreInputError || error instanceof AtlasLookupError) {
@@ -39,6 +41,10 @@ export async function runCli(argv: string[]): Promise<{ stdout: string; stderr: 
     }
     const message = error instanceof Error ? error.message : String(error);
     const detail = process.env.BANDATLAS_DEBUG && error instanceof Error ? `\n${error.stack}` : "";
-    return { stdout: "", stderr: `bandatlas ${name}: internal error: ${message}${detail}\n(this is a bug; please report it with the command you ran)\n`, exitCode: 3 };
+    return {
+      stdout: "",
+      stderr: `bandatlas ${name}: internal error: ${message}${detail}\n(this is a bug; please report it with the command you ran)\n`,
+      exitCode: 3,
+    };
   }
 }

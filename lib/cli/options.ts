@@ -22,7 +22,12 @@ export function parseCommandLine(command: string, args: string[], options: Optio
     } else joined.push(args[i]);
   }
   try {
-    parsed = parseArgs({ args: joined, options: { ...options, help: { type: "boolean", short: "h" } }, allowPositionals: true, strict: true }) as ParsedCommandLine;
+    parsed = parseArgs({
+      args: joined,
+      options: { ...options, help: { type: "boolean", short: "h" } },
+      allowPositionals: true,
+      strict: true,
+    }) as ParsedCommandLine;
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     const unknown = /Unknown option '([^']+)'/.exec(message);
@@ -32,7 +37,9 @@ export function parseCommandLine(command: string, args: string[], options: Optio
     throw new UsageError(`${message.replace(/\. To specify.*$/, "")} (see bandatlas ${command} --help)`);
   }
   if (parsed.positionals.length > maxPositionals) {
-    throw new UsageError(`too many arguments for \`bandatlas ${command}\`: ${parsed.positionals.slice(maxPositionals).join(" ")} (see bandatlas ${command} --help)`);
+    throw new UsageError(
+      `too many arguments for \`bandatlas ${command}\`: ${parsed.positionals.slice(maxPositionals).join(" ")} (see bandatlas ${command} --help)`,
+    );
   }
   return parsed;
 }

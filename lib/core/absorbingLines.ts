@@ -30,7 +30,8 @@ export interface AbsorbingLine {
 }
 
 export function checkCellConditions(c: CellConditions): void {
-  if (!(Number.isFinite(c.temperatureK) && c.temperatureK > 0)) throw new CoreInputError(`temperature ${c.temperatureK} K is not possible: it must be above 0 K`);
+  if (!(Number.isFinite(c.temperatureK) && c.temperatureK > 0))
+    throw new CoreInputError(`temperature ${c.temperatureK} K is not possible: it must be above 0 K`);
   if (!(Number.isFinite(c.pressurePa) && c.pressurePa > 0)) throw new CoreInputError(`pressure ${c.pressurePa} Pa is not possible: it must be above 0`);
   if (!(Number.isFinite(c.moleFraction) && c.moleFraction > 0 && c.moleFraction <= 1)) {
     throw new CoreInputError(`mole fraction ${c.moleFraction} is not possible: it must be above 0 and at most 1`);
@@ -66,7 +67,13 @@ export function absorbingLines(
       positionStatus: line.positionStatus,
       intensity,
       dopplerHwhmCm: dopplerHwhmCm(line.wavenumber, conditions.temperatureK, mass),
-      lorentzHwhmCm: lorentzHwhmCm(broadening, Math.abs(runningM(line.branch, line.jLower)), conditions.pressurePa, conditions.moleFraction, conditions.temperatureK),
+      lorentzHwhmCm: lorentzHwhmCm(
+        broadening,
+        Math.abs(runningM(line.branch, line.jLower)),
+        conditions.pressurePa,
+        conditions.moleFraction,
+        conditions.temperatureK,
+      ),
     });
   }
   return out;

@@ -12,9 +12,7 @@ export function parseBand(text: string): Band {
   if (!match) throw new CoreInputError(`band "${text}" is not of the form v'-v'' (for example 1-0, 2-0 or 2-1)`);
   const band = { vUpper: Number(match[1]), vLower: Number(match[2]) };
   if (band.vUpper <= band.vLower) {
-    throw new CoreInputError(
-      `band "${text}": the upper level v' must be above the lower level v'' (absorption from v'' to v'), for example 1-0`,
-    );
+    throw new CoreInputError(`band "${text}": the upper level v' must be above the lower level v'' (absorption from v'' to v'), for example 1-0`);
   }
   return band;
 }

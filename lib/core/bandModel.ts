@@ -205,7 +205,9 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
       jLower,
       jUpper: isR[i] ? jLower + 1 : jLower - 1,
       wavenumber,
-      wavenumberUncertainty: isR[i] ? uncertaintyOf((jLower + 1) * (jLower + 2), jLower * (jLower + 1), jLower + 1) : uncertaintyOf((jLower - 1) * jLower, jLower * (jLower + 1), jLower),
+      wavenumberUncertainty: isR[i]
+        ? uncertaintyOf((jLower + 1) * (jLower + 2), jLower * (jLower + 1), jLower + 1)
+        : uncertaintyOf((jLower - 1) * jLower, jLower * (jLower + 1), jLower),
       wavelengthVacuumUm: 1e4 / wavenumber,
       wavelengthAirNm: 1e7 / wavenumber / airRefractiveIndexEdlen(wavenumber),
       frequencyThz: wavenumber * speedOfLightMs * 1e-10,

@@ -21,7 +21,12 @@ export interface CalibrationCriteria {
 }
 
 /** Defaults of our own choosing (common practice, no source), stated on every output. */
-export const defaultCalibrationCriteria: CalibrationCriteria = { strongFraction: 0.1, isolationMultiple: 1, neighbourFraction: 0.01, maxUncertaintyFraction: 0.02 };
+export const defaultCalibrationCriteria: CalibrationCriteria = {
+  strongFraction: 0.1,
+  isolationMultiple: 1,
+  neighbourFraction: 0.01,
+  maxUncertaintyFraction: 0.02,
+};
 
 export interface CalibrationLine {
   species: string;
@@ -41,9 +46,11 @@ export interface CalibrationLine {
 
 export function checkCalibrationCriteria(c: CalibrationCriteria): void {
   if (!(c.strongFraction > 0 && c.strongFraction <= 1)) throw new CoreInputError(`strong fraction ${c.strongFraction} must be above 0 and at most 1`);
-  if (!(c.isolationMultiple >= 0 && Number.isFinite(c.isolationMultiple))) throw new CoreInputError(`isolation multiple ${c.isolationMultiple} must be a number ≥ 0`);
+  if (!(c.isolationMultiple >= 0 && Number.isFinite(c.isolationMultiple)))
+    throw new CoreInputError(`isolation multiple ${c.isolationMultiple} must be a number ≥ 0`);
   if (!(c.neighbourFraction >= 0 && c.neighbourFraction <= 1)) throw new CoreInputError(`neighbour fraction ${c.neighbourFraction} must be between 0 and 1`);
-  if (!(c.maxUncertaintyFraction > 0 && Number.isFinite(c.maxUncertaintyFraction))) throw new CoreInputError(`uncertainty fraction ${c.maxUncertaintyFraction} must be a number above 0`);
+  if (!(c.maxUncertaintyFraction > 0 && Number.isFinite(c.maxUncertaintyFraction)))
+    throw new CoreInputError(`uncertainty fraction ${c.maxUncertaintyFraction} must be a number above 0`);
 }
 
 /**
@@ -96,7 +103,10 @@ export function calibrationLines(
     const floor = criteria.neighbourFraction * line.intensity;
     let nearest: number | null = null;
     for (let j = i - 1; j >= 0; j--) {
-      if (sorted[j].intensity >= floor) { nearest = line.wavenumber - sorted[j].wavenumber; break; }
+      if (sorted[j].intensity >= floor) {
+        nearest = line.wavenumber - sorted[j].wavenumber;
+        break;
+      }
     }
     for (let j = i + 1; j < sorted.length; j++) {
       if (sorted[j].intensity >= floor) {

@@ -70,7 +70,9 @@ export function cellSpectrum(request: CellSpectrumRequest): CellSpectrum {
   if (!(fromCm > 0)) throw new CoreInputError(`the range must start above 0 cm⁻¹ (got ${fromCm})`);
   const step = request.stepCm ?? defaultGridStepCm(request.lines);
   if (instrument.kind !== "monochromatic" && instrument.resolutionCm < 4 * step) {
-    throw new CoreInputError(`resolution ${instrument.resolutionCm} cm⁻¹ is finer than the computation can show at a ${step} cm⁻¹ step; use a resolution of at least ${4 * step} cm⁻¹`);
+    throw new CoreInputError(
+      `resolution ${instrument.resolutionCm} cm⁻¹ is finer than the computation can show at a ${step} cm⁻¹ step; use a resolution of at least ${4 * step} cm⁻¹`,
+    );
   }
   const margin = instrumentReachCm(instrument);
   const start = Math.max(step, fromCm - margin);
@@ -83,7 +85,9 @@ export function cellSpectrum(request: CellSpectrumRequest): CellSpectrum {
   if (request.intensityScale === "relative-thin") {
     return {
       intensityScale: "relative-thin",
-      grid, windowFirst, windowLast,
+      grid,
+      windowFirst,
+      windowLast,
       columnDensityPerCm2: column,
       opticalDepth: tau,
       transmittance: null,
@@ -102,7 +106,9 @@ export function cellSpectrum(request: CellSpectrumRequest): CellSpectrum {
   for (let i = 0; i < grid.count; i++) observedTransmittance[i] = 1 - observedAbsorptance[i];
   return {
     intensityScale: "absolute",
-    grid, windowFirst, windowLast,
+    grid,
+    windowFirst,
+    windowLast,
     columnDensityPerCm2: column,
     opticalDepth: tau,
     transmittance,

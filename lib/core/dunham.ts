@@ -20,10 +20,7 @@ const equilibriumToDunhamMap: Array<[keyof EquilibriumConstants, number, number,
 
 export const equilibriumConstantNames = equilibriumToDunhamMap.map(([name]) => name);
 
-export function equilibriumToDunham(
-  constants: EquilibriumConstants,
-  uncertainties: EquilibriumUncertainties = {},
-): DunhamCoefficient[] {
+export function equilibriumToDunham(constants: EquilibriumConstants, uncertainties: EquilibriumUncertainties = {}): DunhamCoefficient[] {
   const table: DunhamCoefficient[] = [];
   for (const [name, k, l, sign] of equilibriumToDunhamMap) {
     const value = constants[name];

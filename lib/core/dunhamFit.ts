@@ -124,9 +124,26 @@ export function speciesDunhamFromFit(
 
 /** The order in which Dunham terms usually become significant (by size for a light hydride or CO). */
 export const dunhamTermOrder: ReadonlyArray<{ k: number; l: number }> = [
-  { k: 1, l: 0 }, { k: 0, l: 1 }, { k: 2, l: 0 }, { k: 1, l: 1 }, { k: 0, l: 2 }, { k: 3, l: 0 }, { k: 2, l: 1 },
-  { k: 1, l: 2 }, { k: 0, l: 3 }, { k: 4, l: 0 }, { k: 3, l: 1 }, { k: 2, l: 2 }, { k: 1, l: 3 }, { k: 0, l: 4 },
-  { k: 5, l: 0 }, { k: 4, l: 1 }, { k: 3, l: 2 }, { k: 2, l: 3 }, { k: 1, l: 4 }, { k: 0, l: 5 },
+  { k: 1, l: 0 },
+  { k: 0, l: 1 },
+  { k: 2, l: 0 },
+  { k: 1, l: 1 },
+  { k: 0, l: 2 },
+  { k: 3, l: 0 },
+  { k: 2, l: 1 },
+  { k: 1, l: 2 },
+  { k: 0, l: 3 },
+  { k: 4, l: 0 },
+  { k: 3, l: 1 },
+  { k: 2, l: 2 },
+  { k: 1, l: 3 },
+  { k: 0, l: 4 },
+  { k: 5, l: 0 },
+  { k: 4, l: 1 },
+  { k: 3, l: 2 },
+  { k: 2, l: 3 },
+  { k: 1, l: 4 },
+  { k: 0, l: 5 },
 ];
 
 export interface TermSupport {

@@ -90,7 +90,7 @@ export function instrumentLineShape(instrument: Instrument, offsetCm: Wavenumber
   if (instrument.kind === "monochromatic") throw new CoreInputError("a monochromatic instrument has no line shape");
   if (instrument.kind === "grating") {
     const f = instrument.resolutionCm;
-    return (2 * Math.sqrt(Math.LN2 / Math.PI)) / f * Math.exp((-4 * Math.LN2 * offsetCm * offsetCm) / (f * f));
+    return ((2 * Math.sqrt(Math.LN2 / Math.PI)) / f) * Math.exp((-4 * Math.LN2 * offsetCm * offsetCm) / (f * f));
   }
   const L = 1 / instrument.resolutionCm;
   const panels = Math.max(16, Math.ceil(4 * Math.abs(offsetCm) * L) + 16);

@@ -8,11 +8,7 @@ export function reducedMassU(massA: MassU, massB: MassU): MassU {
 // Dunham's isotope relation, Y_kl ∝ μ^−(k/2 + l): J. L. Dunham, Phys. Rev. 41, 721 (1932).
 // Born–Oppenheimer breakdown corrections are neglected, which is why a species' own cited
 // constants take precedence over scaled ones.
-export function scaleDunhamToIsotopologue(
-  reference: DunhamCoefficient[],
-  referenceReducedMassU: MassU,
-  targetReducedMassU: MassU,
-): DunhamCoefficient[] {
+export function scaleDunhamToIsotopologue(reference: DunhamCoefficient[], referenceReducedMassU: MassU, targetReducedMassU: MassU): DunhamCoefficient[] {
   const rho = referenceReducedMassU / targetReducedMassU;
   return reference.map((c) => {
     const factor = Math.pow(rho, c.k / 2 + c.l);

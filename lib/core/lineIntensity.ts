@@ -19,10 +19,7 @@ export function intensityShape(
 ): number {
   const c2OverT = secondRadiationConstantCmK / temperatureK;
   const stimulatedEmission = -Math.expm1(-c2OverT * wavenumber);
-  return (
-    (wavenumber * Math.exp(-c2OverT * lowerStateEnergy) * stimulatedEmission * hoenlLondonFactor * hermanWallisFactor) /
-    partitionFunction
-  );
+  return (wavenumber * Math.exp(-c2OverT * lowerStateEnergy) * stimulatedEmission * hoenlLondonFactor * hermanWallisFactor) / partitionFunction;
 }
 
 /** The same, with the Boltzmann factor e^(−c2E''/T) already computed (it is shared by P(J'') and R(J'')). */

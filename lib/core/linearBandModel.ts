@@ -35,9 +35,14 @@ function linearPositionUncertainty(upper: LinearState, lower: LinearState): Posi
 }
 
 /** Position uncertainty from correlated error components over the states' coefficients (a fit's). */
-function componentPositionUncertainty(components: NonNullable<LinearSpeciesData["positionErrors"]>, upperIndex: number, lowerIndex: number): PositionUncertainty {
+function componentPositionUncertainty(
+  components: NonNullable<LinearSpeciesData["positionErrors"]>,
+  upperIndex: number,
+  lowerIndex: number,
+): PositionUncertainty {
   const keys: Array<{ stateIndex: number; l: number }> = [];
-  for (const c of components) for (const d of c.deltas) if (!keys.some((k) => k.stateIndex === d.stateIndex && k.l === d.l)) keys.push({ stateIndex: d.stateIndex, l: d.l });
+  for (const c of components)
+    for (const d of c.deltas) if (!keys.some((k) => k.stateIndex === d.stateIndex && k.l === d.l)) keys.push({ stateIndex: d.stateIndex, l: d.l });
   return {
     terms: keys.map((k) => ({ l: k.l, upperWeight: k.stateIndex === upperIndex ? 1 : 0, lowerWeight: k.stateIndex === lowerIndex ? 1 : 0 })),
     rows: components.map((c) => keys.map((k) => c.deltas.filter((d) => d.stateIndex === k.stateIndex && d.l === k.l).reduce((sum, d) => sum + d.valueCm, 0))),
@@ -45,11 +50,7 @@ function componentPositionUncertainty(components: NonNullable<LinearSpeciesData[
 }
 
 /** The band model of one Σ–Σ band of a linear molecule, from the two states' own constants. */
-export function linearBandModel(
-  species: SpeciesModel,
-  band: Band,
-  options: { temperatureK: TemperatureK; partitionFunction?: number },
-): BandModel {
+export function linearBandModel(species: SpeciesModel, band: Band, options: { temperatureK: TemperatureK; partitionFunction?: number }): BandModel {
   const linear = species.linear!;
   const entry = linear.bands.find((b) => sameBand(b.band, band));
   if (!entry) {

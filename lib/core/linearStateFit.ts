@@ -39,7 +39,10 @@ export interface LinearStateFitResult {
 }
 
 /** ∂ν/∂c_l of one state: x'^l where it is the upper state, −x''^l where it is the lower. */
-export function stateCoefficientPartial(key: StateCoefficientKey, o: Pick<LinearFitObservation, "upperStateIndex" | "lowerStateIndex" | "jUpper" | "jLower">): number {
+export function stateCoefficientPartial(
+  key: StateCoefficientKey,
+  o: Pick<LinearFitObservation, "upperStateIndex" | "lowerStateIndex" | "jUpper" | "jLower">,
+): number {
   let d = 0;
   if (key.stateIndex === o.upperStateIndex) d += Math.pow(o.jUpper * (o.jUpper + 1), key.l);
   if (key.stateIndex === o.lowerStateIndex) d -= Math.pow(o.jLower * (o.jLower + 1), key.l);

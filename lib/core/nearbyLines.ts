@@ -15,12 +15,7 @@ export interface NearbyLine extends LocatedLine {
 }
 
 /** Lines within ±window of a wavenumber and at least minRelative strong, nearest first. */
-export function nearbyLines(
-  candidates: Iterable<LocatedLine>,
-  queryWavenumber: WavenumberCm,
-  windowCm: WavenumberCm,
-  minRelative: number,
-): NearbyLine[] {
+export function nearbyLines(candidates: Iterable<LocatedLine>, queryWavenumber: WavenumberCm, windowCm: WavenumberCm, minRelative: number): NearbyLine[] {
   const matches: NearbyLine[] = [];
   for (const line of candidates) {
     const offset = line.wavenumber - queryWavenumber;

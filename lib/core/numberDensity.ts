@@ -6,5 +6,5 @@ import type { TemperatureK } from "./types.ts";
 export function numberDensityPerCm3(pressurePa: number, temperatureK: TemperatureK): number {
   if (!(pressurePa >= 0) || !Number.isFinite(pressurePa)) throw new CoreInputError(`pressure ${pressurePa} Pa is not possible: it must be a finite number ≥ 0`);
   if (!(temperatureK > 0)) throw new CoreInputError(`temperature ${temperatureK} K is not possible: it must be above 0 K`);
-  return pressurePa / (boltzmannJK * temperatureK) * 1e-6;
+  return (pressurePa / (boltzmannJK * temperatureK)) * 1e-6;
 }

@@ -25,7 +25,12 @@ export const defaultNegligibleOpticalDepth = 1e-6;
  * e.g. Bernath, Spectra of Atoms and Molecules, ch. 1). Every line whose reach touches the grid
  * counts, wherever its centre lies.
  */
-export function opticalDepth(lines: readonly AbsorbingLine[], grid: SpectralGrid, columnDensityPerCm2: number, options: OpticalDepthOptions = {}): Float64Array {
+export function opticalDepth(
+  lines: readonly AbsorbingLine[],
+  grid: SpectralGrid,
+  columnDensityPerCm2: number,
+  options: OpticalDepthOptions = {},
+): Float64Array {
   const cutoff = options.wingCutoffCm ?? defaultWingCutoffCm;
   const negligible = options.negligibleOpticalDepth ?? defaultNegligibleOpticalDepth;
   const tau = new Float64Array(grid.count);

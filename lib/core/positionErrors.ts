@@ -95,7 +95,10 @@ export function omittedTermComponents(terms: readonly OmittedTerm[], massRatio =
   const scale = (k: number, l: number) => Math.pow(massRatio, k / 2 + l);
   return terms.map((t) => ({
     kind: "omitted-term",
-    deltas: [{ k: t.k, l: t.l, valueCm: t.sizeCm * scale(t.k, t.l) }, ...t.absorbed.map((a) => ({ k: a.k, l: a.l, valueCm: -a.fraction * t.sizeCm * scale(a.k, a.l) }))],
+    deltas: [
+      { k: t.k, l: t.l, valueCm: t.sizeCm * scale(t.k, t.l) },
+      ...t.absorbed.map((a) => ({ k: a.k, l: a.l, valueCm: -a.fraction * t.sizeCm * scale(a.k, a.l) })),
+    ],
   }));
 }
 

@@ -18,9 +18,7 @@ export function spectralGrid(fromCm: WavenumberCm, toCm: WavenumberCm, stepCm: W
   if (!(stepCm > 0)) throw new CoreInputError(`grid step ${stepCm} cm⁻¹ must be above 0`);
   const count = Math.floor((toCm - fromCm) / stepCm + 1e-9) + 1;
   if (count > maxGridPoints) {
-    throw new CoreInputError(
-      `${fromCm} to ${toCm} cm⁻¹ at a ${stepCm} cm⁻¹ step is ${count} points, more than the ${maxGridPoints} allowed; narrow the range`,
-    );
+    throw new CoreInputError(`${fromCm} to ${toCm} cm⁻¹ at a ${stepCm} cm⁻¹ step is ${count} points, more than the ${maxGridPoints} allowed; narrow the range`);
   }
   return { startCm: fromCm, stepCm, count };
 }

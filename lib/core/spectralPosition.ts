@@ -11,7 +11,18 @@ export interface SpectralPosition {
   medium: Medium;
 }
 
-const unitWords: Record<string, PositionUnit> = { "cm-1": "cm-1", "cm^-1": "cm-1", "cm⁻¹": "cm-1", "1/cm": "cm-1", nm: "nm", um: "um", "µm": "um", "μm": "um", micron: "um", microns: "um" };
+const unitWords: Record<string, PositionUnit> = {
+  "cm-1": "cm-1",
+  "cm^-1": "cm-1",
+  "cm⁻¹": "cm-1",
+  "1/cm": "cm-1",
+  nm: "nm",
+  um: "um",
+  µm: "um",
+  μm: "um",
+  micron: "um",
+  microns: "um",
+};
 
 /**
  * "2143.3", "2143.3 cm-1", "1532.83 nm", "1.53283um": the number and its unit (a unit word after

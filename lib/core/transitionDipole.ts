@@ -23,11 +23,7 @@ export function bandIntensityDataFor(intensities: BandIntensityData[], band: Ban
 // Isotopologue transition dipole, first order in the dipole derivative: for a Δv = n band
 // |μ|² ∝ (ħ/2μω)^n ∝ μ_red^(−n/2), since ω ∝ μ_red^(−1/2). Mechanical anharmonicity is neglected,
 // so the result is labelled "isotope-scaled" and a species' own cited value wins.
-export function scaleTransitionDipoleToIsotopologue(
-  data: BandIntensityData,
-  referenceReducedMassU: MassU,
-  targetReducedMassU: MassU,
-): BandIntensityData {
+export function scaleTransitionDipoleToIsotopologue(data: BandIntensityData, referenceReducedMassU: MassU, targetReducedMassU: MassU): BandIntensityData {
   const deltaV = data.band.vUpper - data.band.vLower;
   const factor = Math.pow(referenceReducedMassU / targetReducedMassU, deltaV / 4);
   return {

@@ -19,9 +19,7 @@ export function transitionDipoleFromBandStrength(
   const probe: SpeciesModel = {
     ...species,
     abundance: 1,
-    intensities: [
-      { band, transitionDipoleDebye: 1, transitionDipoleUncertaintyDebye: 0, hermanWallis, origin: "cited", sourceKey: "" },
-    ],
+    intensities: [{ band, transitionDipoleDebye: 1, transitionDipoleUncertaintyDebye: 0, hermanWallis, origin: "cited", sourceKey: "" }],
   };
   const result = bandLines(probe, band, { temperatureK, minRelative: 0 });
   let sumPerDebyeSquared = 0;

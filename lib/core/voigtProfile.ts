@@ -13,7 +13,7 @@ const sqrtLn2OverPi = Math.sqrt(Math.LN2 / Math.PI);
 export function voigtProfile(offsetCm: WavenumberCm, dopplerHwhmCm: WavenumberCm, lorentzHwhmCm: WavenumberCm): number {
   if (dopplerHwhmCm <= 0) return lorentzHwhmCm / Math.PI / (offsetCm * offsetCm + lorentzHwhmCm * lorentzHwhmCm);
   const scale = sqrtLn2 / dopplerHwhmCm;
-  return sqrtLn2OverPi / dopplerHwhmCm * voigtFunction(offsetCm * scale, lorentzHwhmCm * scale);
+  return (sqrtLn2OverPi / dopplerHwhmCm) * voigtFunction(offsetCm * scale, lorentzHwhmCm * scale);
 }
 
 /**

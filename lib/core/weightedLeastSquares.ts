@@ -52,7 +52,9 @@ export function weightedLeastSquares(design: number[][], observed: number[], sig
   const smallest = Math.min(...singular);
   // Relative to double precision and the problem size: below this the columns are dependent.
   if (!(smallest > largest * 1e-13 * Math.max(n, p))) {
-    throw new CoreInputError("the parameters are not independent for these observations (the design matrix is singular): drop a term or add lines that separate them");
+    throw new CoreInputError(
+      "the parameters are not independent for these observations (the design matrix is singular): drop a term or add lines that separate them",
+    );
   }
   const scaled = svd.solve(rhs).to1DArray();
   const parameters = scaled.map((v, j) => v / columnNorms[j]);
@@ -72,5 +74,15 @@ export function weightedLeastSquares(design: number[][], observed: number[], sig
   }
   const uncertainties = covariance.map((row, j) => Math.sqrt(row[j]));
   const correlation = covariance.map((row, a) => row.map((c, b) => c / (uncertainties[a] * uncertainties[b])));
-  return { parameters, covariance, uncertainties, correlation, residuals, chiSquared, degreesOfFreedom, reducedChiSquared, conditionNumber: largest / smallest };
+  return {
+    parameters,
+    covariance,
+    uncertainties,
+    correlation,
+    residuals,
+    chiSquared,
+    degreesOfFreedom,
+    reducedChiSquared,
+    conditionNumber: largest / smallest,
+  };
 }

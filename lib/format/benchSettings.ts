@@ -35,7 +35,9 @@ export interface BenchSettings {
 export const benchLimits = { maxRangeCm: 1000, maxResolutionCm: 100 };
 
 export function instrumentOf(s: BenchSettings): Instrument {
-  return s.lineShape === gratingLineShape ? { kind: "grating", resolutionCm: s.resolutionCm } : { kind: "fourier-transform", resolutionCm: s.resolutionCm, apodization: s.lineShape as Apodization };
+  return s.lineShape === gratingLineShape
+    ? { kind: "grating", resolutionCm: s.resolutionCm }
+    : { kind: "fourier-transform", resolutionCm: s.resolutionCm, apodization: s.lineShape as Apodization };
 }
 
 export function benchQuery(s: BenchSettings): URLSearchParams {
@@ -74,14 +76,22 @@ export function readBenchSettings(query: URLSearchParams, defaults: BenchSetting
     path: number("path", "Path length", (v) => v > 0, "must be above 0"),
     pathUnit: choice("pathUnit", "Path unit", Object.keys(lengthUnitsCm)),
     moleFraction: number("moleFraction", "Mole fraction", (v) => v > 0 && v <= 1, "must be above 0 and at most 1"),
-    resolutionCm: number("resolutionCm", "Resolution", (v) => v > 0 && v <= benchLimits.maxResolutionCm, `must be above 0 and at most ${benchLimits.maxResolutionCm} cm⁻¹`),
+    resolutionCm: number(
+      "resolutionCm",
+      "Resolution",
+      (v) => v > 0 && v <= benchLimits.maxResolutionCm,
+      `must be above 0 and at most ${benchLimits.maxResolutionCm} cm⁻¹`,
+    ),
     lineShape: choice("lineShape", "Line shape", [...apodizations, gratingLineShape]),
     fromCm: number("fromCm", "From", (v) => v > 0, "must be above 0 cm⁻¹"),
     toCm: number("toCm", "To", (v) => v > 0, "must be above 0 cm⁻¹"),
     at: query.get("at")?.trim() ? number("at", "Read-off wavenumber", (v) => v > 0, "must be above 0 cm⁻¹") : null,
   };
   if (!(settings.toCm > settings.fromCm)) problems.push(`The range ${settings.fromCm} to ${settings.toCm} cm⁻¹ is empty: “to” must be above “from”.`);
-  else if (settings.toCm - settings.fromCm > benchLimits.maxRangeCm) problems.push(`The range ${settings.fromCm} to ${settings.toCm} cm⁻¹ is wider than ${benchLimits.maxRangeCm} cm⁻¹: narrow it (the CLI's bandatlas spectrum takes up to 2000 cm⁻¹).`);
+  else if (settings.toCm - settings.fromCm > benchLimits.maxRangeCm)
+    problems.push(
+      `The range ${settings.fromCm} to ${settings.toCm} cm⁻¹ is wider than ${benchLimits.maxRangeCm} cm⁻¹: narrow it (the CLI's bandatlas spectrum takes up to 2000 cm⁻¹).`,
+    );
   return { settings, problems };
 }
 

@@ -8,7 +8,18 @@ export interface FitReport {
   file: string;
   parameters: Array<{ name: string; value: number; uncertainty: number; significance: number; supported: boolean }>;
   correlation: number[][];
-  lines: Array<{ species: string; band: string; label: string; measured: number; uncertainty: number; calculated: number; residual: number; normalized: number; heldOut: boolean; source: string }>;
+  lines: Array<{
+    species: string;
+    band: string;
+    label: string;
+    measured: number;
+    uncertainty: number;
+    calculated: number;
+    residual: number;
+    normalized: number;
+    heldOut: boolean;
+    source: string;
+  }>;
   fittedCount: number;
   heldOutCount: number;
   degreesOfFreedom: number;
@@ -31,7 +42,13 @@ export function fitReportText(r: FitReport): string {
   ];
   const params = textTable(
     ["parameter", "value / cm⁻¹", "± / cm⁻¹", "|value|/σ", "supported"],
-    r.parameters.map((p) => [p.name, p.value.toFixed(fitDecimals(p.uncertainty)), significant(p.uncertainty, 3), significant(p.significance, 3), p.supported ? "yes" : "NO"]),
+    r.parameters.map((p) => [
+      p.name,
+      p.value.toFixed(fitDecimals(p.uncertainty)),
+      significant(p.uncertainty, 3),
+      significant(p.significance, 3),
+      p.supported ? "yes" : "NO",
+    ]),
     [false, true, true, true, false],
   );
   const next = r.nextTerms.length
@@ -45,7 +62,18 @@ export function fitReportText(r: FitReport): string {
   );
   const lines = textTable(
     ["species", "band", "line", "measured / cm⁻¹", "± / cm⁻¹", "calculated / cm⁻¹", "obs − calc / cm⁻¹", "(obs − calc)/σ", "use", "source"],
-    r.lines.map((l) => [l.species, l.band, l.label, String(l.measured), significant(l.uncertainty, 2), l.calculated.toFixed(7), signedSignificant(l.residual, 2), signedSignificant(l.normalized, 2), l.heldOut ? "held out" : "fitted", l.source]),
+    r.lines.map((l) => [
+      l.species,
+      l.band,
+      l.label,
+      String(l.measured),
+      significant(l.uncertainty, 2),
+      l.calculated.toFixed(7),
+      signedSignificant(l.residual, 2),
+      signedSignificant(l.normalized, 2),
+      l.heldOut ? "held out" : "fitted",
+      l.source,
+    ]),
     [false, false, false, true, true, true, true, true, false, false],
   );
   return `${header.join("\n")}${params}\n${next}\n${correlation}\n\n${lines}\n`;

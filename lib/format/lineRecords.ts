@@ -16,7 +16,22 @@ export interface LinesDocument {
   /** Known limitations of the molecule's constants, from its file. */
   limitations: string[];
   lines: Array<
-    Pick<Line, "label" | "branch" | "jLower" | "jUpper" | "wavenumber" | "wavenumberUncertainty" | "wavelengthVacuumUm" | "wavelengthAirNm" | "lowerStateEnergy" | "relativeIntensity" | "lineIntensity" | "populationFraction" | "positionStatus">
+    Pick<
+      Line,
+      | "label"
+      | "branch"
+      | "jLower"
+      | "jUpper"
+      | "wavenumber"
+      | "wavenumberUncertainty"
+      | "wavelengthVacuumUm"
+      | "wavelengthAirNm"
+      | "lowerStateEnergy"
+      | "relativeIntensity"
+      | "lineIntensity"
+      | "populationFraction"
+      | "positionStatus"
+    >
   >;
 }
 
@@ -92,9 +107,19 @@ export function linesCsv(result: BandLines, limitations: readonly string[] = [])
     const c = lineCells(l);
     rows.push(
       csvRow([
-        l.label, l.branch, l.jLower, l.jUpper,
-        numeric(c.wavenumber), numeric(c.wavenumberUncertainty), numeric(c.wavelengthVacuumUm), numeric(c.wavelengthAirNm),
-        numeric(c.lowerStateEnergy), numeric(c.relativeIntensity), numeric(c.lineIntensity), numeric(c.populationFraction), l.positionStatus,
+        l.label,
+        l.branch,
+        l.jLower,
+        l.jUpper,
+        numeric(c.wavenumber),
+        numeric(c.wavenumberUncertainty),
+        numeric(c.wavelengthVacuumUm),
+        numeric(c.wavelengthAirNm),
+        numeric(c.lowerStateEnergy),
+        numeric(c.relativeIntensity),
+        numeric(c.lineIntensity),
+        numeric(c.populationFraction),
+        l.positionStatus,
       ]),
     );
   }

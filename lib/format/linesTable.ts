@@ -13,7 +13,11 @@ export const intensityOriginWords: Record<NonNullable<BandLines["intensityOrigin
 
 export function textTable(headings: string[], rows: string[][], rightAligned: boolean[]): string {
   const widths = headings.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i].length)));
-  const pad = (cells: string[]) => cells.map((c, i) => (rightAligned[i] ? c.padStart(widths[i]) : c.padEnd(widths[i]))).join("  ").trimEnd();
+  const pad = (cells: string[]) =>
+    cells
+      .map((c, i) => (rightAligned[i] ? c.padStart(widths[i]) : c.padEnd(widths[i])))
+      .join("  ")
+      .trimEnd();
   return [pad(headings), widths.map((w) => "-".repeat(w)).join("  "), ...rows.map(pad)].join("\n");
 }
 
@@ -42,7 +46,18 @@ export function linesTable(result: BandLines, context: LinesTableContext): strin
   ];
   const rows = result.lines.map((l) => {
     const c = lineCells(l);
-    return [l.label, c.wavenumber, c.wavenumberUncertainty, positionStatusWords[l.positionStatus], c.wavelengthVacuumUm, c.wavelengthAirNm, c.lowerStateEnergy, c.relativeIntensity, c.lineIntensity || "—", c.populationFraction];
+    return [
+      l.label,
+      c.wavenumber,
+      c.wavenumberUncertainty,
+      positionStatusWords[l.positionStatus],
+      c.wavelengthVacuumUm,
+      c.wavelengthAirNm,
+      c.lowerStateEnergy,
+      c.relativeIntensity,
+      c.lineIntensity || "—",
+      c.populationFraction,
+    ];
   });
   const headings = ["line", "ν̃ / cm⁻¹", "± / cm⁻¹", "position", "λ vac / µm", "λ air / nm", "E'' / cm⁻¹", "rel. int.", "S / cm·molecule⁻¹", "pop. fraction"];
   return header.join("\n") + textTable(headings, rows, [false, true, true, false, true, true, true, true, true, true]) + "\n";

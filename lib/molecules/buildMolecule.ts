@@ -120,7 +120,14 @@ export function buildMolecule(file: MoleculeFile, fileName: string, fileFit: Fil
     const dipole = transitionDipoleFromBandStrength(info.model, band, perSpecies, entry.bandStrength!.temperatureK, hermanWallis);
     // |μ| ∝ √S, so the relative uncertainty halves.
     const relative = strength.uncertainty === null ? 0 : strength.uncertainty / strength.value / 2;
-    return { band, transitionDipoleDebye: dipole, transitionDipoleUncertaintyDebye: dipole * relative, hermanWallis, origin: "from-band-strength", sourceKey: entry.source };
+    return {
+      band,
+      transitionDipoleDebye: dipole,
+      transitionDipoleUncertaintyDebye: dipole * relative,
+      hermanWallis,
+      origin: "from-band-strength",
+      sourceKey: entry.source,
+    };
   };
 
   const referenceInfo = models[0];
@@ -140,7 +147,14 @@ export function buildMolecule(file: MoleculeFile, fileName: string, fileFit: Fil
     const [vUpper, vLower] = group.band.split("-").map(Number);
     const band = { vUpper, vLower };
     for (const line of group.lines) {
-      info.model.referenceLines.push({ band, label: line.label, wavenumber: line.wavenumber, uncertainty: line.uncertainty ?? null, sourceKey: group.source, heldOut: line.heldOut === true });
+      info.model.referenceLines.push({
+        band,
+        label: line.label,
+        wavenumber: line.wavenumber,
+        uncertainty: line.uncertainty ?? null,
+        sourceKey: group.source,
+        heldOut: line.heldOut === true,
+      });
     }
   }
   const validations = moleculeValidation(

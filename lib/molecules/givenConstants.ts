@@ -53,7 +53,8 @@ export function dunhamFromBlock(block: Pick<ConstantsBlock, "equilibrium" | "dun
   const given: GivenConstant[] = [];
   const table: DunhamCoefficient[] = [];
   // A mass-independent set's U_kl are shown as given; its per-species table is made elsewhere.
-  if (block.massIndependent) return { table, given: Object.entries(block.massIndependent.coefficients).map(([name, raw]) => constantOf(name, raw)), form: "dunham" };
+  if (block.massIndependent)
+    return { table, given: Object.entries(block.massIndependent.coefficients).map(([name, raw]) => constantOf(name, raw)), form: "dunham" };
   for (const [name, raw] of Object.entries(block.dunham ?? {})) {
     const constant = constantOf(name, raw);
     given.push(constant);
@@ -61,4 +62,3 @@ export function dunhamFromBlock(block: Pick<ConstantsBlock, "equilibrium" | "dun
   }
   return { table, given, form: "dunham" };
 }
-

@@ -94,21 +94,31 @@ export function linearFitProblems(file: LinearMoleculeFile): Array<{ path: Path;
   file.species.forEach((entry, i) => {
     const marked = entry.states.some((s) => fields.some(([field]) => s[field] === "fit"));
     if (!entry.fit) {
-      if (marked) out.push({ path: ["species", i, "states"], message: "a constant is marked `fit` but the species has no `fit` block naming the measured lines to fit" });
+      if (marked)
+        out.push({ path: ["species", i, "states"], message: "a constant is marked `fit` but the species has no `fit` block naming the measured lines to fit" });
       return;
     }
     if (!marked) out.push({ path: ["species", i, "fit"], message: "the species has a `fit` block but no state constant is marked `fit`" });
     entry.states.forEach((s, k) => {
-      if (s.termEnergy === "fit" && entry.states.every((o) => o === s || o.termEnergy !== 0)) out.push({ path: ["species", i, "states", k, "termEnergy"], message: "the ground state's term energy is 0 by definition; give termEnergy: 0 for it" });
+      if (s.termEnergy === "fit" && entry.states.every((o) => o === s || o.termEnergy !== 0))
+        out.push({ path: ["species", i, "states", k, "termEnergy"], message: "the ground state's term energy is 0 by definition; give termEnergy: 0 for it" });
     });
     const groups = new Set((entry.referenceLines ?? []).map((g) => g.source));
     entry.fit.lines.forEach((key, j) => {
-      if (!groups.has(key)) out.push({ path: ["species", i, "fit", "lines", j], message: `no \`referenceLines\` group of this species has source "${key}" (groups: ${[...groups].join(", ") || "none"})` });
+      if (!groups.has(key))
+        out.push({
+          path: ["species", i, "fit", "lines", j],
+          message: `no \`referenceLines\` group of this species has source "${key}" (groups: ${[...groups].join(", ") || "none"})`,
+        });
     });
     (entry.referenceLines ?? []).forEach((group, g) => {
       if (!entry.fit!.lines.includes(group.source)) return;
       group.lines.forEach((line, j) => {
-        if (!(line.uncertainty! > 0)) out.push({ path: ["species", i, "referenceLines", g, "lines", j, "uncertainty"], message: "a line that enters the fit needs its measured uncertainty (above 0 cm⁻¹) to be weighted" });
+        if (!(line.uncertainty! > 0))
+          out.push({
+            path: ["species", i, "referenceLines", g, "lines", j, "uncertainty"],
+            message: "a line that enters the fit needs its measured uncertainty (above 0 cm⁻¹) to be weighted",
+          });
       });
     });
   });
@@ -146,10 +156,14 @@ export function linearFitResultProblems(file: LinearMoleculeFile, fit: LinearFil
     const sigma = given === undefined || typeof given === "number" ? null : given.uncertainty;
     const u = fit.uncertainties[i];
     if (value === null || sigma === null || Math.abs(value - fit.values[i]) > 0.01 * u || Math.abs(sigma - u) > 0.01 * u) {
-      out.push({ path: [...base, "result", ...(given === undefined ? [] : [name])], message: `${name}: the file says ${value ?? "nothing"}${sigma === null ? "" : ` ± ${sigma}`} but the fit to the cited lines gives ${fit.values[i]} ± ${u.toPrecision(3)}; ${rerun}` });
+      out.push({
+        path: [...base, "result", ...(given === undefined ? [] : [name])],
+        message: `${name}: the file says ${value ?? "nothing"}${sigma === null ? "" : ` ± ${sigma}`} but the fit to the cited lines gives ${fit.values[i]} ± ${u.toPrecision(3)}; ${rerun}`,
+      });
     }
   });
-  for (const name of Object.keys(written)) if (!fit.names.includes(name)) out.push({ path: [...base, "result", name], message: `${name} is not a fitted constant; ${rerun}` });
+  for (const name of Object.keys(written))
+    if (!fit.names.includes(name)) out.push({ path: [...base, "result", name], message: `${name} is not a fitted constant; ${rerun}` });
   return out;
 }
 

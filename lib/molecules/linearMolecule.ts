@@ -1,4 +1,11 @@
-import { moleculeValidation, transitionDipoleFromBandStrength, type LinearSpeciesData, type LinearState, type LinearStateSymmetry, type SpeciesModel } from "../core/index.ts";
+import {
+  moleculeValidation,
+  transitionDipoleFromBandStrength,
+  type LinearSpeciesData,
+  type LinearState,
+  type LinearStateSymmetry,
+  type SpeciesModel,
+} from "../core/index.ts";
 import { moleculeIdentity, type Molecule, type SpeciesInfo } from "./buildMolecule.ts";
 import { impliedUncertainty, type GivenConstant } from "./givenConstants.ts";
 import { isotope, stableMassNumbers } from "./isotopes.ts";
@@ -50,18 +57,29 @@ export function linearSemanticProblems(file: LinearMoleculeFile): Found[] {
   if (!linearElectronicState.test(file.electronicState.trim())) {
     add(["electronicState"], `electronic state "${file.electronicState}" is not modelled: only ¹Σ⁺ ground states (written "X 1Σ+" or "X 1Σg+") are`);
   }
-  if (file.atoms.length < 3) add(["atoms"], `a linear polyatomic molecule has at least 3 atoms, got ${file.atoms.length}; a diatomic uses the first form of molecule file (no \`structure\` field)`);
+  if (file.atoms.length < 3)
+    add(
+      ["atoms"],
+      `a linear polyatomic molecule has at least 3 atoms, got ${file.atoms.length}; a diatomic uses the first form of molecule file (no \`structure\` field)`,
+    );
   const references = file.species.filter((s) => s.reference === true).length;
   if (references !== 1) add(["species"], `exactly one species must have \`reference: true\`, found ${references}`);
   const seenSpecies = new Set<string>();
 
   file.species.forEach((s, i) => {
     const path = ["species", i];
-    if (s.massNumbers.length !== file.atoms.length) add([...path, "massNumbers"], `expected ${file.atoms.length} mass numbers (one per atom: ${file.atoms.join(", ")}), got ${s.massNumbers.length}`);
+    if (s.massNumbers.length !== file.atoms.length)
+      add([...path, "massNumbers"], `expected ${file.atoms.length} mass numbers (one per atom: ${file.atoms.join(", ")}), got ${s.massNumbers.length}`);
     else
       s.massNumbers.forEach((a, k) => {
         const found = isotope(file.atoms[k], a);
-        if (!found || found.abundance === null) add([...path, "massNumbers", k], `${a}${file.atoms[k]} is not a stable isotope (stable ones: ${stableMassNumbers(file.atoms[k]).map((n) => `${n}${file.atoms[k]}`).join(", ")})`);
+        if (!found || found.abundance === null)
+          add(
+            [...path, "massNumbers", k],
+            `${a}${file.atoms[k]} is not a stable isotope (stable ones: ${stableMassNumbers(file.atoms[k])
+              .map((n) => `${n}${file.atoms[k]}`)
+              .join(", ")})`,
+          );
       });
     const key = s.massNumbers.join(",");
     if (seenSpecies.has(key)) add([...path, "massNumbers"], `species ${s.massNumbers.join("/")} is listed twice`);
@@ -72,16 +90,22 @@ export function linearSemanticProblems(file: LinearMoleculeFile): Found[] {
     const modes = s.vibrationalModes?.modes ?? [];
     if (s.vibrationalModes) checkSource([...path, "vibrationalModes", "source"], s.vibrationalModes.source);
     const dof = modes.reduce((sum, m) => sum + m.degeneracy, 0);
-    if (s.vibrationalModes && dof !== 3 * file.atoms.length - 5) add([...path, "vibrationalModes", "modes"], `the modes' degeneracies add up to ${dof}, but a linear molecule of ${file.atoms.length} atoms has 3N−5 = ${3 * file.atoms.length - 5} vibrational degrees of freedom (bending modes count twice)`);
+    if (s.vibrationalModes && dof !== 3 * file.atoms.length - 5)
+      add(
+        [...path, "vibrationalModes", "modes"],
+        `the modes' degeneracies add up to ${dof}, but a linear molecule of ${file.atoms.length} atoms has 3N−5 = ${3 * file.atoms.length - 5} vibrational degrees of freedom (bending modes count twice)`,
+      );
     modes.forEach((m, k) => {
       if (!(m.wavenumber > 0)) add([...path, "vibrationalModes", "modes", k, "wavenumber"], "a mode's wavenumber must be above 0 cm⁻¹");
-      if (m.degeneracy !== 1 && m.degeneracy !== 2) add([...path, "vibrationalModes", "modes", k, "degeneracy"], "a linear molecule's modes are single (stretches, 1) or doubly degenerate (bends, 2)");
+      if (m.degeneracy !== 1 && m.degeneracy !== 2)
+        add([...path, "vibrationalModes", "modes", k, "degeneracy"], "a linear molecule's modes are single (stretches, 1) or doubly degenerate (bends, 2)");
     });
 
     const weights = s.nuclearSpinWeights;
     if (weights) {
       checkSource([...path, "nuclearSpinWeights", "source"], weights.source);
-      if (!(weights.evenJ >= 0 && weights.oddJ >= 0) || weights.evenJ + weights.oddJ === 0) add([...path, "nuclearSpinWeights"], "nuclear-spin weights are at least 0 and not both 0");
+      if (!(weights.evenJ >= 0 && weights.oddJ >= 0) || weights.evenJ + weights.oddJ === 0)
+        add([...path, "nuclearSpinWeights"], "nuclear-spin weights are at least 0 and not both 0");
     }
 
     const ids = new Map<string, number>();
@@ -93,11 +117,19 @@ export function linearSemanticProblems(file: LinearMoleculeFile): Found[] {
       ids.set(state.id, k);
       const symmetry = parseSymmetry(state.symmetry);
       if (symmetry === null) {
-        add([...sp, "symmetry"], unmodelledSymmetry.test(state.symmetry.trim())
-          ? `state symmetry "${state.symmetry}" is not modelled: only Σ+ states and the parallel Σ–Σ bands between them are; Π states (perpendicular bands, with a Q branch and l-type doubling) are not yet`
-          : `state symmetry "${state.symmetry}" is not one of Σ+, Σg+, Σu+`);
-      } else if (weights && symmetry === "Σ+") add([...sp, "symmetry"], "this species has nuclear-spin weights (a centre of symmetry), so its states are Σg+ or Σu+");
-      else if (!weights && symmetry !== "Σ+") add([...sp, "symmetry"], `a ${symmetry} state needs \`nuclearSpinWeights\` on the species (a molecule with a centre of symmetry); without one write Σ+`);
+        add(
+          [...sp, "symmetry"],
+          unmodelledSymmetry.test(state.symmetry.trim())
+            ? `state symmetry "${state.symmetry}" is not modelled: only Σ+ states and the parallel Σ–Σ bands between them are; Π states (perpendicular bands, with a Q branch and l-type doubling) are not yet`
+            : `state symmetry "${state.symmetry}" is not one of Σ+, Σg+, Σu+`,
+        );
+      } else if (weights && symmetry === "Σ+")
+        add([...sp, "symmetry"], "this species has nuclear-spin weights (a centre of symmetry), so its states are Σg+ or Σu+");
+      else if (!weights && symmetry !== "Σ+")
+        add(
+          [...sp, "symmetry"],
+          `a ${symmetry} state needs \`nuclearSpinWeights\` on the species (a molecule with a centre of symmetry); without one write Σ+`,
+        );
       const g = valueOf(state.termEnergy);
       const b = valueOf(state.b);
       const d = valueOf(state.d);
@@ -126,13 +158,21 @@ export function linearSemanticProblems(file: LinearMoleculeFile): Found[] {
       if (!(gap > 0)) add(bp, `the upper state ${band.upper} must lie above the lower state ${band.lower} (absorption from lower to upper)`);
       const su = parseSymmetry(upper.symmetry);
       const sl = parseSymmetry(lower.symmetry);
-      if (su && sl && su !== "Σ+" && su === sl) add(bp, `${su} ← ${sl} is forbidden for an electric-dipole transition (g ↔ u only); a parallel band of a centrosymmetric molecule joins a Σg+ and a Σu+ state`);
+      if (su && sl && su !== "Σ+" && su === sl)
+        add(
+          bp,
+          `${su} ← ${sl} is forbidden for an electric-dipole transition (g ↔ u only); a parallel band of a centrosymmetric molecule joins a Σg+ and a Σu+ state`,
+        );
       if (band.bandOrigin !== undefined) {
         const origin = withUncertainty(band.bandOrigin);
         const tu = withUncertainty(upper.termEnergy);
         const tl = withUncertainty(lower.termEnergy);
         const allowed = Math.max(1e-4, 3 * Math.hypot(origin.uncertaintyCm, tu.uncertaintyCm, tl.uncertaintyCm));
-        if (Math.abs(gap - origin.valueCm) > allowed) add([...bp, "bandOrigin"], `band origin ${origin.valueCm} cm⁻¹ disagrees with the states' term energies (${gap.toFixed(6)} cm⁻¹) by more than ${allowed.toPrecision(2)} cm⁻¹`);
+        if (Math.abs(gap - origin.valueCm) > allowed)
+          add(
+            [...bp, "bandOrigin"],
+            `band origin ${origin.valueCm} cm⁻¹ disagrees with the states' term energies (${gap.toFixed(6)} cm⁻¹) by more than ${allowed.toPrecision(2)} cm⁻¹`,
+          );
       }
       if (band.bandStrength) {
         checkSource([...bp, "bandStrength", "source"], band.bandStrength.source);
@@ -187,7 +227,14 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string):
       bands: entry.bands.map((b) => {
         const upperStateIndex = indexOf.get(b.upper)!;
         const lowerStateIndex = indexOf.get(b.lower)!;
-        return { band: { vUpper: upperStateIndex, vLower: lowerStateIndex, label: `${b.upper}-${b.lower}` }, upperStateIndex, lowerStateIndex, name: b.name, kind: b.kind, sourceKey: b.source };
+        return {
+          band: { vUpper: upperStateIndex, vLower: lowerStateIndex, label: `${b.upper}-${b.lower}` },
+          upperStateIndex,
+          lowerStateIndex,
+          name: b.name,
+          kind: b.kind,
+          sourceKey: b.source,
+        };
       }),
     };
     const atoms = entry.massNumbers.map((a, i) => isotope(file.atoms[i], a)!);
@@ -212,14 +259,34 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string):
       const s = withUncertainty(b.bandStrength.cmPerMolecule);
       const dipole = transitionDipoleFromBandStrength(model, band, s.valueCm, b.bandStrength.temperatureK, null);
       const relative = s.implied ? 0 : s.uncertaintyCm / s.valueCm / 2;
-      model.intensities.push({ band, transitionDipoleDebye: dipole, transitionDipoleUncertaintyDebye: dipole * relative, hermanWallis: null, origin: "from-band-strength", sourceKey: b.bandStrength.source });
+      model.intensities.push({
+        band,
+        transitionDipoleDebye: dipole,
+        transitionDipoleUncertaintyDebye: dipole * relative,
+        hermanWallis: null,
+        origin: "from-band-strength",
+        sourceKey: b.bandStrength.source,
+      });
     }
     for (const group of entry.referenceLines ?? []) {
       const band = linear.bands.find((x) => x.band.label === group.band)!.band;
-      for (const line of group.lines) model.referenceLines.push({ band, label: line.label, wavenumber: line.wavenumber, uncertainty: line.uncertainty ?? null, sourceKey: group.source, heldOut: line.heldOut === true });
+      for (const line of group.lines)
+        model.referenceLines.push({
+          band,
+          label: line.label,
+          wavenumber: line.wavenumber,
+          uncertainty: line.uncertainty ?? null,
+          sourceKey: group.source,
+          heldOut: line.heldOut === true,
+        });
     }
     const spellings = new Set([...speciesSpellings(file.atoms, entry.massNumbers), label.toLowerCase()]);
-    return { model, spellings: [...spellings], isReference: index === 0, given: { sourceKey: entry.states[0].source, form: "states", values: built.flatMap((b) => b.given) } };
+    return {
+      model,
+      spellings: [...spellings],
+      isReference: index === 0,
+      given: { sourceKey: entry.states[0].source, form: "states", values: built.flatMap((b) => b.given) },
+    };
   });
   const validations = moleculeValidation(
     species.map((s) => s.model),

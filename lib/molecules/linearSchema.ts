@@ -57,15 +57,27 @@ const linearSpeciesSchema = mapping(
     massNumbers,
     label: text("the species label (e.g. 12C16O2)").optional(),
     reference: z.boolean({ error: (i) => `expected true or false, got ${describeInput(i.input)}` }).optional(),
-    nuclearSpinWeights: mapping({ evenJ: numberIn("(a statistical weight)"), oddJ: numberIn("(a statistical weight)"), source: sourceKey }, "nuclear-spin weights of the ground state's even and odd J").optional(),
-    vibrationalModes: mapping({ source: sourceKey, modes: listOf(modeSchema, "vibrational modes").min(1, { error: "give every normal mode" }) }, "the vibrational modes").optional(),
+    nuclearSpinWeights: mapping(
+      { evenJ: numberIn("(a statistical weight)"), oddJ: numberIn("(a statistical weight)"), source: sourceKey },
+      "nuclear-spin weights of the ground state's even and odd J",
+    ).optional(),
+    vibrationalModes: mapping(
+      { source: sourceKey, modes: listOf(modeSchema, "vibrational modes").min(1, { error: "give every normal mode" }) },
+      "the vibrational modes",
+    ).optional(),
     fit: mapping(
       {
-        lines: listOf(sourceKey, "source keys of this species' `referenceLines` groups to fit").min(1, { error: "name at least one group of measured lines to fit" }),
+        lines: listOf(sourceKey, "source keys of this species' `referenceLines` groups to fit").min(1, {
+          error: "name at least one group of measured lines to fit",
+        }),
         result: z
-          .record(z.string().regex(/^[^.\s]+\.[GBDH]$/, { error: "a fitted constant is named state.G, state.B, state.D or state.H (e.g. 10100.B)" }), measuredIn(cm), {
-            error: (issue) => `expected the fitted values as { "10100.B": { value, uncertainty }, … }, got ${describeInput(issue.input)}`,
-          })
+          .record(
+            z.string().regex(/^[^.\s]+\.[GBDH]$/, { error: "a fitted constant is named state.G, state.B, state.D or state.H (e.g. 10100.B)" }),
+            measuredIn(cm),
+            {
+              error: (issue) => `expected the fitted values as { "10100.B": { value, uncertainty }, … }, got ${describeInput(issue.input)}`,
+            },
+          )
           .optional(),
       },
       "a fit block",
@@ -73,7 +85,10 @@ const linearSpeciesSchema = mapping(
     states: listOf(stateSchema, "vibrational states").min(2, { error: "give at least the ground state and one upper state" }),
     bands: listOf(bandSchema, "bands").min(1, { error: "give at least one band" }),
     referenceLines: listOf(
-      mapping({ source: sourceKey, band: text("the band as upper-lower state ids"), lines: listOf(referenceLineSchema, "reference lines").min(1) }, "a group of reference lines"),
+      mapping(
+        { source: sourceKey, band: text("the band as upper-lower state ids"), lines: listOf(referenceLineSchema, "reference lines").min(1) },
+        "a group of reference lines",
+      ),
       "groups of reference lines",
     ).optional(),
   },

@@ -44,7 +44,13 @@ export function loadMoleculeFiles(paths: string[]): LoadResult {
     try {
       const size = statSync(path).size;
       if (size > maxMoleculeFileBytes) {
-        problems.push({ file: shown, line: null, column: null, path: "", message: `the file is ${size} bytes; molecule files are limited to ${maxMoleculeFileBytes} bytes` });
+        problems.push({
+          file: shown,
+          line: null,
+          column: null,
+          path: "",
+          message: `the file is ${size} bytes; molecule files are limited to ${maxMoleculeFileBytes} bytes`,
+        });
         continue;
       }
       bytes = readFileSync(path);
@@ -59,10 +65,20 @@ export function loadMoleculeFiles(paths: string[]): LoadResult {
   // Identity across files: ids and CAS numbers name one molecule each.
   const seen = new Map<string, string>();
   for (const m of molecules) {
-    for (const [kind, value] of [["id", m.id], ["casNumber", m.casNumber]] as const) {
+    for (const [kind, value] of [
+      ["id", m.id],
+      ["casNumber", m.casNumber],
+    ] as const) {
       const key = `${kind}:${value}`;
       const other = seen.get(key);
-      if (other) problems.push({ file: m.file, line: null, column: null, path: kind, message: `${kind === "id" ? "id" : "CAS number"} "${value}" is already used by ${other}` });
+      if (other)
+        problems.push({
+          file: m.file,
+          line: null,
+          column: null,
+          path: kind,
+          message: `${kind === "id" ? "id" : "CAS number"} "${value}" is already used by ${other}`,
+        });
       else seen.set(key, m.file);
     }
   }

@@ -64,7 +64,10 @@ export function parseLinearMolecule(raw: unknown, file: string, expectedId: stri
  * Runs every species' fit (the build and the check re-run them, so the constants cannot drift from
  * their lines), compares it with the written result, and gives the data with the fitted values in.
  */
-function fitLinearFile(data: LinearMoleculeFile, options: ParseOptions): { data: LinearMoleculeFile; fits: LinearFileFit[] } | { problems: Array<{ path: Array<string | number>; message: string }> } {
+function fitLinearFile(
+  data: LinearMoleculeFile,
+  options: ParseOptions,
+): { data: LinearMoleculeFile; fits: LinearFileFit[] } | { problems: Array<{ path: Array<string | number>; message: string }> } {
   const problems = linearFitProblems(data);
   if (problems.length) return { problems };
   const fits: LinearFileFit[] = [];

@@ -81,7 +81,10 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
     if (sum % 10 !== Number(digits.at(-1))) add(["casNumber"], `CAS number "${file.casNumber}" fails its check digit (expected ${sum % 10} at the end)`);
   }
   if (!modelledStates.test(file.electronicState.trim())) {
-    add(["electronicState"], `electronic state "${file.electronicState}" is not modelled: only ¹Σ⁺ states (written "X 1Σ+") are; other states need spin and Λ-doubling terms and a Q branch that the model does not have yet`);
+    add(
+      ["electronicState"],
+      `electronic state "${file.electronicState}" is not modelled: only ¹Σ⁺ states (written "X 1Σ+") are; other states need spin and Λ-doubling terms and a Q branch that the model does not have yet`,
+    );
   }
   if (file.atoms.length !== 2) add(["atoms"], `expected 2 atoms for a diatomic molecule, got ${file.atoms.length}`);
   file.atoms.forEach((symbol, i) => {
@@ -92,8 +95,10 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
   });
 
   for (const [key, source] of Object.entries(file.sources)) {
-    if (source.url !== undefined && !/^https?:\/\/[^\s<>"']+$/i.test(source.url)) add(["sources", key, "url"], `a source address must be an https: or http: link, got "${source.url}"`);
-    if (source.doi !== undefined && !/^10\.\d{4,9}\/[^\s<>"']+$/.test(source.doi)) add(["sources", key, "doi"], `a DOI looks like 10.1016/0022-2852(79)90117-0, got "${source.doi}"`);
+    if (source.url !== undefined && !/^https?:\/\/[^\s<>"']+$/i.test(source.url))
+      add(["sources", key, "url"], `a source address must be an https: or http: link, got "${source.url}"`);
+    if (source.doi !== undefined && !/^10\.\d{4,9}\/[^\s<>"']+$/.test(source.doi))
+      add(["sources", key, "doi"], `a DOI looks like 10.1016/0022-2852(79)90117-0, got "${source.doi}"`);
   }
 
   const speciesKeys = new Set<string>();
@@ -108,7 +113,12 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
       if (!isKnownElement(symbol)) return;
       const found = isotope(symbol, a);
       if (!found) {
-        add([...path, i], `${a}${symbol} is not a known isotope (stable ones: ${stableMassNumbers(symbol).map((n) => `${n}${symbol}`).join(", ")})`);
+        add(
+          [...path, i],
+          `${a}${symbol} is not a known isotope (stable ones: ${stableMassNumbers(symbol)
+            .map((n) => `${n}${symbol}`)
+            .join(", ")})`,
+        );
         ok = false;
       } else if (found.abundance === null) {
         add([...path, i], `${a}${symbol} has no natural abundance in the isotope library (it is not a stable isotope); only stable isotopes are modelled`);
@@ -132,7 +142,10 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
     checkSource([...path, "constants", "source"], c.source);
     const forms = [c.equilibrium, c.dunham, c.massIndependent, c.fit].filter((f) => f !== undefined).length;
     if (forms !== 1) {
-      add([...path, "constants"], "give exactly one of `equilibrium` (ωe, ωexe, Be, …), `dunham` (Y10, Y01, …), `massIndependent` (U10, U01, …) or `fit` (constants fitted to the file's measured lines)");
+      add(
+        [...path, "constants"],
+        "give exactly one of `equilibrium` (ωe, ωexe, Be, …), `dunham` (Y10, Y01, …), `massIndependent` (U10, U01, …) or `fit` (constants fitted to the file's measured lines)",
+      );
       return;
     }
     if (c.crossCheck) {
@@ -142,29 +155,38 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
     }
     if (c.massIndependent) {
       for (const atom of Object.keys(c.massIndependent.breakdown ?? {})) {
-        if (!file.atoms.includes(atom)) add([...path, "constants", "massIndependent", "breakdown", atom], `atom ${atom} is not among this molecule's atoms (${file.atoms.join(", ")})`);
+        if (!file.atoms.includes(atom))
+          add([...path, "constants", "massIndependent", "breakdown", atom], `atom ${atom} is not among this molecule's atoms (${file.atoms.join(", ")})`);
       }
     }
     if (c.fit) {
-      if (s.reference !== true) add([...path, "constants", "fit"], "only the reference species carries a fit; the fit takes the measured lines of every species and the others follow from it by the isotope relations");
+      if (s.reference !== true)
+        add(
+          [...path, "constants", "fit"],
+          "only the reference species carries a fit; the fit takes the measured lines of every species and the others follow from it by the isotope relations",
+        );
       const groups = new Set((file.referenceLines ?? []).map((g) => g.source));
       (file.referenceLines ?? []).forEach((group, g) => {
         if (!c.fit!.lines.includes(group.source)) return;
         group.lines.forEach((line, j) => {
-          if (line.uncertainty === undefined || line.uncertainty === 0) add(["referenceLines", g, "lines", j, "uncertainty"], "a line that enters the fit needs its measured uncertainty (above 0 cm⁻¹) to be weighted");
+          if (line.uncertainty === undefined || line.uncertainty === 0)
+            add(["referenceLines", g, "lines", j, "uncertainty"], "a line that enters the fit needs its measured uncertainty (above 0 cm⁻¹) to be weighted");
         });
       });
       c.fit.lines.forEach((key, j) => {
-        if (!groups.has(key)) add([...path, "constants", "fit", "lines", j], `no \`referenceLines\` group has source "${key}" (groups: ${[...groups].join(", ") || "none"})`);
+        if (!groups.has(key))
+          add([...path, "constants", "fit", "lines", j], `no \`referenceLines\` group has source "${key}" (groups: ${[...groups].join(", ") || "none"})`);
       });
       c.fit.terms.forEach((name, j) => {
         if (c.fit!.terms.indexOf(name) !== j) add([...path, "constants", "fit", "terms", j], `${name} is listed twice`);
         if (name === "Y00") add([...path, "constants", "fit", "terms", j], "Y00 shifts every level alike and cannot be fitted to line positions");
       });
       for (const [atom, names] of Object.entries(c.fit.massCorrections ?? {})) {
-        if (!file.atoms.includes(atom)) add([...path, "constants", "fit", "massCorrections", atom], `atom ${atom} is not among this molecule's atoms (${file.atoms.join(", ")})`);
+        if (!file.atoms.includes(atom))
+          add([...path, "constants", "fit", "massCorrections", atom], `atom ${atom} is not among this molecule's atoms (${file.atoms.join(", ")})`);
         names.forEach((name, j) => {
-          if (!c.fit!.terms.includes(name)) add([...path, "constants", "fit", "massCorrections", atom, j], `${name} has a mass correction but is not among the fitted terms`);
+          if (!c.fit!.terms.includes(name))
+            add([...path, "constants", "fit", "massCorrections", atom, j], `${name} has a mass correction but is not among the fitted terms`);
         });
       }
       return;
@@ -178,10 +200,14 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
       const wexe = e.omegaExe === undefined ? null : cmPerNumber(e.omegaExe)!;
       // ωexe/ωe is below 0.03 for every known diatomic (H2 ≈ 0.028); a much larger ratio is a typo or a unit slip.
       if (wexe !== null && we > 0 && (wexe < 0 || wexe > 0.1 * we)) {
-        add([...path, "constants", "equilibrium", "omegaExe"], `ωexe = ${wexe} cm⁻¹ does not make sense for ωe = ${we} cm⁻¹ (expected 0 ≤ ωexe ≤ 0.1·ωe; real molecules have under 0.03·ωe)`);
+        add(
+          [...path, "constants", "equilibrium", "omegaExe"],
+          `ωexe = ${wexe} cm⁻¹ does not make sense for ωe = ${we} cm⁻¹ (expected 0 ≤ ωexe ≤ 0.1·ωe; real molecules have under 0.03·ωe)`,
+        );
       }
       const de = e.dE === undefined ? null : cmPerNumber(e.dE)!;
-      if (de !== null && be > 0 && (de < 0 || de > 1e-2 * be)) add([...path, "constants", "equilibrium", "dE"], `De = ${de} cm⁻¹ does not make sense for Be = ${be} cm⁻¹ (expected 0 ≤ De ≤ 0.01·Be)`);
+      if (de !== null && be > 0 && (de < 0 || de > 1e-2 * be))
+        add([...path, "constants", "equilibrium", "dE"], `De = ${de} cm⁻¹ does not make sense for Be = ${be} cm⁻¹ (expected 0 ≤ De ≤ 0.01·Be)`);
     } else if (c.dunham) {
       const d = c.dunham;
       const y10 = d.Y10 === undefined ? null : cmPerNumber(d.Y10);
@@ -213,7 +239,8 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
     if ((entry.transitionDipoleDebye === undefined) === (entry.bandStrength === undefined)) {
       add(path, "give either `transitionDipoleDebye` or `bandStrength`, exactly one of them");
     }
-    if (entry.transitionDipoleDebye !== undefined && !(cmPerNumber(entry.transitionDipoleDebye)! > 0)) add([...path, "transitionDipoleDebye"], "a transition dipole must be above 0 debye");
+    if (entry.transitionDipoleDebye !== undefined && !(cmPerNumber(entry.transitionDipoleDebye)! > 0))
+      add([...path, "transitionDipoleDebye"], "a transition dipole must be above 0 debye");
     if (entry.bandStrength) {
       if (!(cmPerNumber(entry.bandStrength.cmPerMolecule)! > 0)) add([...path, "bandStrength", "cmPerMolecule"], "a band strength must be above 0 cm/molecule");
       if (!(entry.bandStrength.temperatureK > 0)) add([...path, "bandStrength", "temperatureK"], "the band strength's temperature must be above 0 K");
@@ -271,7 +298,15 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
     const pos = doc.contents?.range ? counter.linePos(doc.contents.range[0]) : null;
     return {
       ok: false,
-      problems: [{ file, line: pos?.line ?? 1, column: pos?.col ?? 1, path: "", message: "the file must be a mapping of fields (id: …, name: …), not a single value or a list" }],
+      problems: [
+        {
+          file,
+          line: pos?.line ?? 1,
+          column: pos?.col ?? 1,
+          path: "",
+          message: "the file must be a mapping of fields (id: …, name: …), not a single value or a list",
+        },
+      ],
     };
   }
   let raw: unknown;
@@ -279,7 +314,18 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
     raw = doc.toJS({ maxAliasCount: maxYamlAliases });
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
-    return { ok: false, problems: [{ file, line: null, column: null, path: "", message: `YAML aliases expand too far (${message}); write the values out, at most ${maxYamlAliases} aliases per file` }] };
+    return {
+      ok: false,
+      problems: [
+        {
+          file,
+          line: null,
+          column: null,
+          path: "",
+          message: `YAML aliases expand too far (${message}); write the values out, at most ${maxYamlAliases} aliases per file`,
+        },
+      ],
+    };
   }
   const located = (path: Path, message: string): Problem => {
     const pos = locate(doc, counter, path);
@@ -288,7 +334,16 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
   const structure = (raw as { structure?: unknown }).structure;
   if (structure === "linear") return parseLinearMolecule(raw, file, expectedId, located, options);
   if (structure === "diatomic") delete (raw as { structure?: unknown }).structure;
-  else if (structure !== undefined) return { ok: false, problems: [located(["structure"], `structure ${JSON.stringify(structure)} is not known: leave it out (or write diatomic) for a diatomic, write linear for a linear polyatomic molecule`)] };
+  else if (structure !== undefined)
+    return {
+      ok: false,
+      problems: [
+        located(
+          ["structure"],
+          `structure ${JSON.stringify(structure)} is not known: leave it out (or write diatomic) for a diatomic, write linear for a linear polyatomic molecule`,
+        ),
+      ],
+    };
   const parsed = moleculeFileSchema.safeParse(raw);
   if (!parsed.success) {
     for (const issue of expandUnions(parsed.error.issues, raw)) {
@@ -336,7 +391,12 @@ function expandUnions(issues: ReadonlyArray<unknown>, raw: unknown): Issue[] {
     const input = valueAt(raw, item.path);
     if (item.code === "invalid_union" && item.errors && input && typeof input === "object" && !Array.isArray(input)) {
       const branch = item.errors[item.errors.length - 1];
-      out.push(...expandUnions(branch.map((e) => ({ ...e, path: [...item.path, ...e.path] })), raw));
+      out.push(
+        ...expandUnions(
+          branch.map((e) => ({ ...e, path: [...item.path, ...e.path] })),
+          raw,
+        ),
+      );
     } else out.push(item);
   }
   return out;

@@ -40,7 +40,13 @@ export function listOf<T extends z.ZodType>(item: T, what: string) {
 /** A constant: a plain number, or { value, uncertainty } with one standard uncertainty. */
 export function measuredIn(unit: string) {
   return z.union(
-    [numberIn(unit), mapping({ value: numberIn(unit), uncertainty: numberIn(unit).nonnegative({ error: "an uncertainty cannot be negative" }) }, "a value with its uncertainty")],
+    [
+      numberIn(unit),
+      mapping(
+        { value: numberIn(unit), uncertainty: numberIn(unit).nonnegative({ error: "an uncertainty cannot be negative" }) },
+        "a value with its uncertainty",
+      ),
+    ],
     { error: (issue) => `expected a number in ${unit} or { value, uncertainty }, got ${describeInput(issue.input)}` },
   );
 }
@@ -50,7 +56,10 @@ const bandText = z
   .string({ error: (issue) => `expected a band like "1-0" (v'-v''), got ${describeInput(issue.input)}` })
   .regex(/^\d{1,2}-\d{1,2}$/, { error: `expected a band like "1-0" (v'-v'')` });
 export const massNumbers = listOf(
-  z.number({ error: (i) => `expected a mass number (a whole number), got ${describeInput(i.input)}` }).int({ error: "a mass number is a whole number" }).positive({ error: "a mass number is positive" }),
+  z
+    .number({ error: (i) => `expected a mass number (a whole number), got ${describeInput(i.input)}` })
+    .int({ error: "a mass number is a whole number" })
+    .positive({ error: "a mass number is positive" }),
   "mass numbers, one per atom",
 );
 
@@ -76,7 +85,9 @@ export const dunhamSchema = z.record(dunhamKey, measuredIn(cm), {
   error: (issue) => `expected Dunham coefficients (Y10: …, Y01: …), got ${describeInput(issue.input)}`,
 });
 
-const termName = z.string({ error: (i) => `expected a Dunham term name like Y10, got ${describeInput(i.input)}` }).regex(/^Y\d\d$/, { error: "a Dunham term is named Y followed by k and l, e.g. Y10, Y01, Y21" });
+const termName = z
+  .string({ error: (i) => `expected a Dunham term name like Y10, got ${describeInput(i.input)}` })
+  .regex(/^Y\d\d$/, { error: "a Dunham term is named Y followed by k and l, e.g. Y10, Y01, Y21" });
 const fitResultKey = z.string().regex(/^Y\d\d(?:_[A-Z][a-z]?)?$/, { error: "a fitted parameter is named like Y10, or Y01_H for a mass correction of atom H" });
 
 /** Constants fitted by `bandatlas fit` to the cited measured lines of this file (see DEVELOPERS.md). */
@@ -85,12 +96,18 @@ export const fitSchema = mapping(
     lines: listOf(sourceKey, "source keys of the `referenceLines` groups to fit").min(1, { error: "name at least one group of measured lines to fit" }),
     terms: listOf(termName, "Dunham terms to fit").min(1, { error: "name at least one Dunham term to fit" }),
     massCorrections: z
-      .record(z.string().regex(/^[A-Z][a-z]?$/, { error: "an atom is named by its element symbol" }), listOf(termName, "Dunham terms with a mass correction for this atom"), {
-        error: (issue) => `expected mass corrections as { H: [Y10, Y01] }, got ${describeInput(issue.input)}`,
-      })
+      .record(
+        z.string().regex(/^[A-Z][a-z]?$/, { error: "an atom is named by its element symbol" }),
+        listOf(termName, "Dunham terms with a mass correction for this atom"),
+        {
+          error: (issue) => `expected mass corrections as { H: [Y10, Y01] }, got ${describeInput(issue.input)}`,
+        },
+      )
       .optional(),
     result: z
-      .record(fitResultKey, measuredIn(cm), { error: (issue) => `expected the fitted values as { Y10: { value, uncertainty }, … }, got ${describeInput(issue.input)}` })
+      .record(fitResultKey, measuredIn(cm), {
+        error: (issue) => `expected the fitted values as { Y10: { value, uncertainty }, … }, got ${describeInput(issue.input)}`,
+      })
       .optional(),
   },
   "a fit block",
@@ -98,21 +115,30 @@ export const fitSchema = mapping(
 
 const breakdownSchema = z.record(
   z.string().regex(/^[A-Z][a-z]?$/, { error: "an atom is named by its element symbol" }),
-  z.record(z.string().regex(/^D\d\d$/, { error: "a Born–Oppenheimer breakdown coefficient is named D followed by k and l, e.g. D10, D01" }), numberIn("(dimensionless)")),
+  z.record(
+    z.string().regex(/^D\d\d$/, { error: "a Born–Oppenheimer breakdown coefficient is named D followed by k and l, e.g. D10, D01" }),
+    numberIn("(dimensionless)"),
+  ),
   { error: (issue) => `expected breakdown coefficients as { C: { D10: …, D01: … } }, got ${describeInput(issue.input)}` },
 );
 
 /** A mass-independent Dunham set: U_kl in cm⁻¹ u^(k/2+l), with optional breakdown terms Δ_kl per atom. */
 export const massIndependentSchema = mapping(
   {
-    coefficients: z.record(z.string().regex(/^U\d\d$/, { error: "mass-independent coefficients are named U followed by k and l, e.g. U10, U01" }), measuredIn("cm⁻¹·u^(k/2+l)"), {
-      error: (issue) => `expected mass-independent coefficients (U10: …, U01: …), got ${describeInput(issue.input)}`,
-    }),
+    coefficients: z.record(
+      z.string().regex(/^U\d\d$/, { error: "mass-independent coefficients are named U followed by k and l, e.g. U10, U01" }),
+      measuredIn("cm⁻¹·u^(k/2+l)"),
+      {
+        error: (issue) => `expected mass-independent coefficients (U10: …, U01: …), got ${describeInput(issue.input)}`,
+      },
+    ),
     breakdown: breakdownSchema.optional(),
     /** Electron mass the source used in (1 + m_e Δ/M), in u. */
     electronMassU: numberIn("u").positive().optional(),
     /** Atomic masses the source fitted with, by isotope ("12C": 12); others from the isotope library. */
-    atomMassesU: z.record(z.string().regex(/^\d{1,3}[A-Z][a-z]?$/, { error: "an isotope is written mass number then symbol, e.g. 12C, 16O" }), numberIn("u").positive()).optional(),
+    atomMassesU: z
+      .record(z.string().regex(/^\d{1,3}[A-Z][a-z]?$/, { error: "an isotope is written mass number then symbol, e.g. 12C, 16O" }), numberIn("u").positive())
+      .optional(),
     /** The unit the source prints U_kl in (times u^(k/2+l)); MHz is converted with the exact c. */
     unit: z.enum(["cm-1", "MHz"], { error: () => `expected the unit cm-1 or MHz` }).optional(),
   },
@@ -138,7 +164,11 @@ export const constantsSchema = mapping(
 );
 
 const speciesSchema = mapping(
-  { massNumbers, reference: z.boolean({ error: (i) => `expected true or false, got ${describeInput(i.input)}` }).optional(), constants: constantsSchema.optional() },
+  {
+    massNumbers,
+    reference: z.boolean({ error: (i) => `expected true or false, got ${describeInput(i.input)}` }).optional(),
+    constants: constantsSchema.optional(),
+  },
   "a species",
 );
 
@@ -178,7 +208,13 @@ const broadeningCoefficientSchema = mapping(
     hwhmCmPerAtm: numberIn("cm⁻¹/atm (HWHM at 296 K)").positive({ error: "a broadening coefficient is above 0" }),
     temperatureExponent: numberIn("the exponent n of (296/T)^n (dimensionless)"),
     byAbsM: listOf(
-      mapping({ absM: numberIn("|m| (m = J''+1 in R, −J'' in P)").int({ error: "|m| is a whole number" }).positive({ error: "|m| is at least 1" }), hwhmCmPerAtm: numberIn("cm⁻¹/atm (HWHM at 296 K)").positive({ error: "a broadening coefficient is above 0" }) }, "a J-dependent broadening value"),
+      mapping(
+        {
+          absM: numberIn("|m| (m = J''+1 in R, −J'' in P)").int({ error: "|m| is a whole number" }).positive({ error: "|m| is at least 1" }),
+          hwhmCmPerAtm: numberIn("cm⁻¹/atm (HWHM at 296 K)").positive({ error: "a broadening coefficient is above 0" }),
+        },
+        "a J-dependent broadening value",
+      ),
       "J-dependent values by |m|, in increasing |m|",
     ).optional(),
   },
@@ -208,12 +244,14 @@ export const moleculeFileSchema = mapping(
     casNumber: text("the CAS registry number"),
     aliases: listOf(text("an alias"), "other names").default([]),
     limitations: listOf(text("a known limitation of these constants"), "known limitations").default([]),
-    electronicState: text("the electronic state, e.g. \"X 1Σ+\""),
+    electronicState: text('the electronic state, e.g. "X 1Σ+"'),
     atoms: listOf(text("an element symbol"), "element symbols"),
     hazard: mapping(
       {
         ghsPictograms: listOf(
-          z.string({ error: (i) => `expected a GHS pictogram code like GHS06, got ${describeInput(i.input)}` }).regex(/^GHS0[1-9]$/, { error: "expected a GHS pictogram code GHS01 to GHS09" }),
+          z
+            .string({ error: (i) => `expected a GHS pictogram code like GHS06, got ${describeInput(i.input)}` })
+            .regex(/^GHS0[1-9]$/, { error: "expected a GHS pictogram code GHS01 to GHS09" }),
           "GHS pictogram codes",
         ),
         sentences: listOf(text("a hazard sentence"), "hazard sentences").min(1, { error: "give at least one plain hazard sentence" }),

@@ -91,7 +91,17 @@ export function speciesConstants(
         ...(inFit ? [] : isotopeScalingComponents(dunham, unscaledShifts)),
       ],
       origin: "fitted",
-      given: own ? { form: "fit", values: fileFit.names.map((name, i) => ({ name, valueCm: fileFit.fit.solution.parameters[i], uncertaintyCm: fileFit.fit.solution.uncertainties[i], uncertaintyImplied: false })) } : null,
+      given: own
+        ? {
+            form: "fit",
+            values: fileFit.names.map((name, i) => ({
+              name,
+              valueCm: fileFit.fit.solution.parameters[i],
+              uncertaintyCm: fileFit.fit.solution.uncertainties[i],
+              uncertaintyImplied: false,
+            })),
+          }
+        : null,
     };
   }
   if (block.massIndependent) {
@@ -105,7 +115,12 @@ export function speciesConstants(
   }
   const { table, given, form } = dunhamFromBlock(block);
   if (own) {
-    return { dunham: table, positionErrors: [...componentsFromUncertainties(table), ...omittedTermComponents(omittedTerms(table, null)), ...crossCheck(table)], origin: "cited", given: { form, values: given } };
+    return {
+      dunham: table,
+      positionErrors: [...componentsFromUncertainties(table), ...omittedTermComponents(omittedTerms(table, null)), ...crossCheck(table)],
+      origin: "cited",
+      given: { form, values: given },
+    };
   }
   const scaled = scaleDunhamToIsotopologue(table, masses.reducedMassU * masses.massRatio, masses.reducedMassU);
   return {

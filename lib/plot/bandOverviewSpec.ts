@@ -47,35 +47,79 @@ export function bandOverviewSpec(entry: AtlasEntry, scale: IntensityScale, size 
   const branchNames = [branchStyle.P.name, branchStyle.R.name];
   const y =
     scale === "log"
-      ? { field: "intensity", type: "quantitative", title: "relative intensity (log scale)", scale: { type: "log", domain: [logFloor, 1] }, axis: { values: [1e-4, 1e-3, 1e-2, 1e-1, 1], format: "~g", grid: true } }
+      ? {
+          field: "intensity",
+          type: "quantitative",
+          title: "relative intensity (log scale)",
+          scale: { type: "log", domain: [logFloor, 1] },
+          axis: { values: [1e-4, 1e-3, 1e-2, 1e-1, 1], format: "~g", grid: true },
+        }
       : { field: "intensity", type: "quantitative", title: "relative intensity", scale: { domain: [0, 1] }, axis: { grid: true } };
   const y2 = scale === "log" ? { datum: logFloor } : { datum: 0 };
   const x = { field: "wavenumber", type: "quantitative", title: "wavenumber / cm⁻¹", scale: { zero: false, nice: false }, axis: { format: "d", grid: false } };
-  const branchColour = { field: "branch", type: "nominal", title: null, scale: { domain: branchNames, range: [branchStyle.P.colour, branchStyle.R.colour] }, legend: { orient: "top", direction: "horizontal" } };
-  const opacity = bands.length > 1 ? { field: "band", type: "ordinal", sort: bands, title: null, scale: { domain: bands, range: bands.map((b, i) => (i === 0 ? 1 : 0.45)) }, legend: { orient: "top", direction: "horizontal" } } : { value: 1 };
+  const branchColour = {
+    field: "branch",
+    type: "nominal",
+    title: null,
+    scale: { domain: branchNames, range: [branchStyle.P.colour, branchStyle.R.colour] },
+    legend: { orient: "top", direction: "horizontal" },
+  };
+  const opacity =
+    bands.length > 1
+      ? {
+          field: "band",
+          type: "ordinal",
+          sort: bands,
+          title: null,
+          scale: { domain: bands, range: bands.map((b, i) => (i === 0 ? 1 : 0.45)) },
+          legend: { orient: "top", direction: "horizontal" },
+        }
+      : { value: 1 };
   return {
     $schema: "https://vega.github.io/schema/vega-lite/v6.json",
     width: size.width,
     height: size.height,
     background: "white",
     padding: 8,
-    config: { aria: false, font: "sans-serif", axis: { labelFontSize: 11, titleFontSize: 12, titleFontWeight: "normal" }, legend: { labelFontSize: 11, symbolStrokeWidth: 2 }, view: { stroke: "#999" } },
+    config: {
+      aria: false,
+      font: "sans-serif",
+      axis: { labelFontSize: 11, titleFontSize: 12, titleFontWeight: "normal" },
+      legend: { labelFontSize: 11, symbolStrokeWidth: 2 },
+      view: { stroke: "#999" },
+    },
     layer: [
       {
         data: { values: points },
         mark: { type: "rule", strokeWidth: 1.5, clip: false },
-        encoding: { x, y, y2, color: branchColour, opacity, strokeDash: { field: "branch", type: "nominal", scale: { domain: branchNames, range: [branchStyle.P.dash, branchStyle.R.dash] }, title: null } },
+        encoding: {
+          x,
+          y,
+          y2,
+          color: branchColour,
+          opacity,
+          strokeDash: { field: "branch", type: "nominal", scale: { domain: branchNames, range: [branchStyle.P.dash, branchStyle.R.dash] }, title: null },
+        },
       },
       {
         data: { values: points },
         mark: { type: "point", filled: true, size: 16, clip: false },
-        encoding: { x, y, color: branchColour, opacity, shape: { field: "branch", type: "nominal", title: null, scale: { domain: branchNames, range: [branchStyle.P.shape, branchStyle.R.shape] } } },
+        encoding: {
+          x,
+          y,
+          color: branchColour,
+          opacity,
+          shape: { field: "branch", type: "nominal", title: null, scale: { domain: branchNames, range: [branchStyle.P.shape, branchStyle.R.shape] } },
+        },
       },
       {
         data: { values: [{ origin: fundamental.lines.bandOrigin, text: `band origin ${fixed(fundamental.lines.bandOrigin, 2)} cm⁻¹` }] },
         layer: [
           { mark: { type: "rule", strokeDash: [1, 3], strokeWidth: 1.5, color: bandOriginColour }, encoding: { x: { field: "origin", type: "quantitative" } } },
-          { mark: { type: "text", align: "center", baseline: "bottom", dy: -4, fontSize: 11, color: bandOriginColour }, encoding: { x: { field: "origin", type: "quantitative" }, y: { value: 0 }, text: { field: "text" } } },
+          {
+            mark: { type: "text", align: "center", baseline: "bottom", dy: -4, fontSize: 11, color: bandOriginColour },
+            encoding: { x: { field: "origin", type: "quantitative" }, y: { value: 0 }, text: { field: "text" } },
+          },
         ],
       },
     ],
@@ -88,7 +132,9 @@ export function bandOverviewDescription(entry: AtlasEntry, scale: IntensityScale
   const lines = fundamental.lines.lines;
   const hot = entry.bands.filter((b) => b.kind === "hot" && b.shownWithFundamental).map((b) => b.label);
   const strongest = lines.reduce((best, l) => (l.relativeIntensity > best.relativeIntensity ? l : best), lines[0]);
-  const range = lines.length ? `${lines.length} lines from ${fixed(lines[0].wavenumber, 1)} to ${fixed(lines[lines.length - 1].wavenumber, 1)} cm⁻¹` : "no lines";
+  const range = lines.length
+    ? `${lines.length} lines from ${fixed(lines[0].wavenumber, 1)} to ${fixed(lines[lines.length - 1].wavenumber, 1)} cm⁻¹`
+    : "no lines";
   return (
     `Stick spectrum of the ${fundamental.label} band of ${entry.species} at ${entry.temperatureK} K, intensity on a ${scale === "log" ? "logarithmic" : "linear"} scale: ` +
     `${range}, P branch (triangles, dashed) below and R branch (circles, solid) above the band origin at ${fixed(fundamental.lines.bandOrigin, 2)} cm⁻¹` +

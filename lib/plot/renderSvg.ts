@@ -14,7 +14,13 @@ function splitData(spec: unknown, values: Map<string, unknown[]>): unknown {
   if (spec === null || typeof spec !== "object") return spec;
   const out: Record<string, unknown> = {};
   for (const [key, value] of Object.entries(spec)) {
-    if (key === "data" && value !== null && typeof value === "object" && Array.isArray((value as { values?: unknown }).values) && Object.keys(value).length === 1) {
+    if (
+      key === "data" &&
+      value !== null &&
+      typeof value === "object" &&
+      Array.isArray((value as { values?: unknown }).values) &&
+      Object.keys(value).length === 1
+    ) {
       const name = `inline${values.size}`;
       values.set(name, (value as { values: unknown[] }).values);
       out.data = { name };
@@ -58,8 +64,9 @@ export async function renderSpecToSvg(spec: Record<string, unknown>, description
   }
   // Vega writes full double precision; a hundredth of a pixel is far below what any screen or
   // printer resolves, and rounding halves the page weight.
-  const svg = raw.replace(/ (transform|d|x|y|x1|x2|y1|y2|width|height)="([^"]*)"/g, (_, name: string, value: string) =>
-    ` ${name}="${value.replace(/-?\d+\.\d{3,}/g, (n) => String(Math.round(Number(n) * 100) / 100))}"`,
+  const svg = raw.replace(
+    / (transform|d|x|y|x1|x2|y1|y2|width|height)="([^"]*)"/g,
+    (_, name: string, value: string) => ` ${name}="${value.replace(/-?\d+\.\d{3,}/g, (n) => String(Math.round(Number(n) * 100) / 100))}"`,
   );
   const label = escapeXml(description);
   return svg.replace(/^<svg /, `<svg role="img" aria-label="${label}" `).replace(/^(<svg[^>]*>)/, `$1<title>${label}</title>`);

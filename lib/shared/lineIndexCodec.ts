@@ -89,7 +89,11 @@ function undoDeltaBits(deltas: Uint32Array): void {
 }
 
 const compareLines = (a: LocatedLine, b: LocatedLine) =>
-  a.wavenumber - b.wavenumber || a.molecule.localeCompare(b.molecule) || a.species.localeCompare(b.species) || a.band.localeCompare(b.band) || a.label.localeCompare(b.label);
+  a.wavenumber - b.wavenumber ||
+  a.molecule.localeCompare(b.molecule) ||
+  a.species.localeCompare(b.species) ||
+  a.band.localeCompare(b.band) ||
+  a.label.localeCompare(b.label);
 
 export function encodeLineIndex(lines: LocatedLine[], pageOf: (line: LocatedLine) => string, temperatureK: number, minRelative: number): LineIndexFile {
   const sorted = [...lines].sort(compareLines);

@@ -49,7 +49,11 @@ export function drawTableHead(doc: Doc, x: number, y: number, width: number): vo
     const b = c.branch[branch];
     const style = branchStyle[branch];
     drawMarker(doc, branch, b.start + 9, y + 8, 2.6);
-    doc.font(sheetFonts.bold).fontSize(9.5).fillColor(ink).text(`${branch}(J″)  ${style.name}, ${style.rule}`, b.start + 17, y + 3, { lineBreak: false });
+    doc
+      .font(sheetFonts.bold)
+      .fontSize(9.5)
+      .fillColor(ink)
+      .text(`${branch}(J″)  ${style.name}, ${style.rule}`, b.start + 17, y + 3, { lineBreak: false });
     doc.font(sheetFonts.regular).fontSize(8.5);
     rightText(doc, "ν̃ / cm⁻¹", b.wavenumber, y + 18);
     rightText(doc, "λ vac / µm", b.wavelength, y + 18);
@@ -57,7 +61,14 @@ export function drawTableHead(doc: Doc, x: number, y: number, width: number): vo
   }
   doc.font(sheetFonts.bold).fontSize(9.5);
   rightText(doc, "J″", c.j[1] - 6, y + 18);
-  doc.save().lineWidth(0.8).strokeColor(ink).moveTo(x, y + tableHeadHeightPt).lineTo(x + width, y + tableHeadHeightPt).stroke().restore();
+  doc
+    .save()
+    .lineWidth(0.8)
+    .strokeColor(ink)
+    .moveTo(x, y + tableHeadHeightPt)
+    .lineTo(x + width, y + tableHeadHeightPt)
+    .stroke()
+    .restore();
 }
 
 function drawCell(doc: Doc, cell: SheetLineCell | null, b: Columns["branch"]["P"], y: number): void {
@@ -66,7 +77,10 @@ function drawCell(doc: Doc, cell: SheetLineCell | null, b: Columns["branch"]["P"
     rightText(doc, "—", b.wavenumber, y);
     return;
   }
-  doc.font(cell.strong ? sheetFonts.bold : sheetFonts.regular).fontSize(10).fillColor(ink);
+  doc
+    .font(cell.strong ? sheetFonts.bold : sheetFonts.regular)
+    .fontSize(10)
+    .fillColor(ink);
   if (cell.strong) doc.text(strongMark, b.start + 4, y - 0.5, { lineBreak: false });
   rightText(doc, cell.wavenumber, b.wavenumber, y);
   rightText(doc, cell.wavelengthVacuumUm, b.wavelength, y);
@@ -87,7 +101,14 @@ export function drawTableRows(doc: Doc, rows: SheetTableRow[], x: number, y: num
   });
   const bottom = y + rows.length * tableRowHeightPt;
   doc.save().lineWidth(0.8).strokeColor(ink);
-  for (const sx of [c.j[1], c.branch.R.start]) doc.moveTo(sx, y - tableHeadHeightPt).lineTo(sx, bottom).stroke();
-  doc.moveTo(x, bottom).lineTo(x + width, bottom).stroke();
+  for (const sx of [c.j[1], c.branch.R.start])
+    doc
+      .moveTo(sx, y - tableHeadHeightPt)
+      .lineTo(sx, bottom)
+      .stroke();
+  doc
+    .moveTo(x, bottom)
+    .lineTo(x + width, bottom)
+    .stroke();
   doc.restore();
 }

@@ -6,11 +6,20 @@ type Doc = PDFKit.PDFDocument;
 /** The branch's marker at (x, y), as on the website plot: a downward triangle for P, a disc for R. */
 export function drawMarker(doc: Doc, branch: Branch, x: number, y: number, size: number): void {
   const style = branchStyle[branch];
-  doc.save().undash().lineWidth(Math.max(0.6, size * 0.35));
+  doc
+    .save()
+    .undash()
+    .lineWidth(Math.max(0.6, size * 0.35));
   if (style.marker === "disc") {
-    doc.circle(x, y, size * 0.8).fillColor(style.colour).fill();
+    doc
+      .circle(x, y, size * 0.8)
+      .fillColor(style.colour)
+      .fill();
   } else {
-    doc.polygon([x - size, y - size * 0.6], [x + size, y - size * 0.6], [x, y + size * 0.9]).fillColor(style.colour).fill();
+    doc
+      .polygon([x - size, y - size * 0.6], [x + size, y - size * 0.6], [x, y + size * 0.9])
+      .fillColor(style.colour)
+      .fill();
   }
   doc.restore();
 }

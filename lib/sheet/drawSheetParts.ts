@@ -28,7 +28,9 @@ export function drawSheetHeader(doc: Doc, content: SheetContent, x: number, y: n
 }
 
 function pictogramLine(content: SheetContent): string {
-  return content.caution.pictograms.length ? `GHS pictograms: ${content.caution.pictograms.map(ghsPictogramText).join(" · ")}` : "GHS pictograms: none listed in the molecule file";
+  return content.caution.pictograms.length
+    ? `GHS pictograms: ${content.caution.pictograms.map(ghsPictogramText).join(" · ")}`
+    : "GHS pictograms: none listed in the molecule file";
 }
 
 /** The hazard caution box near the top of the first page; returns the y below it. */
@@ -49,13 +51,26 @@ export function drawCautionBox(doc: Doc, content: SheetContent, x: number, y: nu
   const height = pad + hHeading + 2 + hPictograms + 2 + hSentences + 3 + hDeferral + pad - 2;
   doc.save().lineWidth(1.8).strokeColor(ink).rect(x, y, width, height).stroke().restore();
   let cy = y + pad - 1;
-  doc.font(sheetFonts.bold).fontSize(10.5).fillColor(ink).text(heading, x + pad, cy, { width: inner });
+  doc
+    .font(sheetFonts.bold)
+    .fontSize(10.5)
+    .fillColor(ink)
+    .text(heading, x + pad, cy, { width: inner });
   cy += hHeading + 2;
-  doc.font(sheetFonts.bold).fontSize(9).text(pictograms, x + pad, cy, { width: inner });
+  doc
+    .font(sheetFonts.bold)
+    .fontSize(9)
+    .text(pictograms, x + pad, cy, { width: inner });
   cy += hPictograms + 2;
-  doc.font(sheetFonts.regular).fontSize(9.5).text(sentences, x + pad, cy, { width: inner });
+  doc
+    .font(sheetFonts.regular)
+    .fontSize(9.5)
+    .text(sentences, x + pad, cy, { width: inner });
   cy += hSentences + 3;
-  doc.font(sheetFonts.bold).fontSize(8.5).text(content.caution.deferral, x + pad, cy, { width: inner });
+  doc
+    .font(sheetFonts.bold)
+    .fontSize(8.5)
+    .text(content.caution.deferral, x + pad, cy, { width: inner });
   return y + height + 8;
 }
 
@@ -69,7 +84,13 @@ export function drawContinuationHeader(doc: Doc, content: SheetContent, x: numbe
   const caution = `⚠ ${content.caution.pictograms.join(" ") || "hazard"}: see the hazard caution on page 1. Follow the supplier's safety data sheet, local codes and your lab's safety officer.`;
   doc.font(sheetFonts.bold).fontSize(8.5);
   const hc = doc.heightOfString(caution, { width: width - 10 });
-  doc.save().lineWidth(1.4).strokeColor(ink).rect(x, y, width, hc + 8).stroke().restore();
+  doc
+    .save()
+    .lineWidth(1.4)
+    .strokeColor(ink)
+    .rect(x, y, width, hc + 8)
+    .stroke()
+    .restore();
   doc.text(caution, x + 5, y + 4, { width: width - 10 });
   return y + hc + 8 + 8;
 }
@@ -111,12 +132,23 @@ export function footerHeight(doc: Doc, content: SheetContent, width: number): nu
 /** Footer of every page: sources, model, accuracy, build and "page n of m". */
 export function drawSheetFooter(doc: Doc, content: SheetContent, x: number, bottom: number, width: number, page: number, pages: number): void {
   let y = bottom - footerHeight(doc, content, width);
-  doc.save().lineWidth(0.6).strokeColor(rule).moveTo(x, y).lineTo(x + width, y).stroke().restore();
+  doc
+    .save()
+    .lineWidth(0.6)
+    .strokeColor(rule)
+    .moveTo(x, y)
+    .lineTo(x + width, y)
+    .stroke()
+    .restore();
   y += 5;
   const textX = x + labelWidth;
   const textWidth = width - labelWidth;
   for (const block of footerBlocks(content)) {
-    doc.font(sheetFonts.bold).fontSize(footerSize).fillColor(ink).text(block.label, x, y, { width: labelWidth - 4 });
+    doc
+      .font(sheetFonts.bold)
+      .fontSize(footerSize)
+      .fillColor(ink)
+      .text(block.label, x, y, { width: labelWidth - 4 });
     doc.font(sheetFonts.regular);
     const hText = doc.heightOfString(block.text, { width: textWidth });
     doc.text(block.text, textX, y, { width: textWidth });

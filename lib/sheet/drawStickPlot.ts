@@ -70,13 +70,27 @@ export function drawStickPlot(doc: Doc, box: Box, content: SheetContent): void {
   for (const v of xTicks.values) {
     if (v < low || v > high) continue;
     const x = sx(v);
-    doc.save().lineWidth(0.8).strokeColor(ink).moveTo(x, bottom).lineTo(x, bottom + 3).stroke().restore();
+    doc
+      .save()
+      .lineWidth(0.8)
+      .strokeColor(ink)
+      .moveTo(x, bottom)
+      .lineTo(x, bottom + 3)
+      .stroke()
+      .restore();
     const label = v.toFixed(xTicks.decimals);
     doc.text(label, x - doc.widthOfString(label) / 2, bottom + 4.5, { lineBreak: false });
   }
   for (const r of [0, 0.25, 0.5, 0.75, 1]) {
     const y = sy(r);
-    doc.save().lineWidth(0.8).strokeColor(ink).moveTo(left - 3, y).lineTo(left, y).stroke().restore();
+    doc
+      .save()
+      .lineWidth(0.8)
+      .strokeColor(ink)
+      .moveTo(left - 3, y)
+      .lineTo(left, y)
+      .stroke()
+      .restore();
     const label = r === 0 ? "0" : r.toFixed(2);
     doc.text(label, left - 5 - doc.widthOfString(label), y - 4, { lineBreak: false });
   }

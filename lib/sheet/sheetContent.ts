@@ -1,6 +1,15 @@
 import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { sameBand, type Band, type BandLines, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
-import { accuracyText, calibrationConditionsText, intensityOriginWords, criteriaPhrase, fixed, lineCells, peakShiftDigits, significant } from "../format/index.ts";
+import {
+  accuracyText,
+  calibrationConditionsText,
+  intensityOriginWords,
+  criteriaPhrase,
+  fixed,
+  lineCells,
+  peakShiftDigits,
+  significant,
+} from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./sheetInput.ts";
 import { describeBuild } from "../shared/buildIdentity.ts";
@@ -89,7 +98,10 @@ function calibrationMarksNote(marks: CalibrationMarks, entry: AtlasEntry, band: 
     return `at ${r.resolutionCm} cm⁻¹${range}: ${lines.map((l) => displayText(l.label)).join(", ")}`;
   });
   const k = marks.criteria;
-  const flags = [marks.broadeningTypical ? " Line widths use a typical (not measured) pressure-broadening coefficient." : "", marks.intensityScale !== "absolute" ? " No cited band intensity: an optically thin cell is assumed." : ""].join("");
+  const flags = [
+    marks.broadeningTypical ? " Line widths use a typical (not measured) pressure-broadening coefficient." : "",
+    marks.intensityScale !== "absolute" ? " No cited band intensity: an optically thin cell is assumed." : "",
+  ].join("");
   return (
     `Recommended for calibration (${criteriaPhrase(k)}) for ${calibrationConditionsText(marks)}; ` +
     `${parts.join("; ")}.${flags} Each line's shift: bandatlas calibration-lines.`
@@ -101,7 +113,13 @@ export const cautionDeferral =
 
 function cellOf(line: Line): SheetLineCell {
   const c = lineCells(line);
-  return { label: line.label, wavenumber: c.wavenumber, wavelengthVacuumUm: c.wavelengthVacuumUm, relativeIntensity: c.relativeIntensity, strong: line.relativeIntensity >= strongLineFraction };
+  return {
+    label: line.label,
+    wavenumber: c.wavenumber,
+    wavelengthVacuumUm: c.wavelengthVacuumUm,
+    relativeIntensity: c.relativeIntensity,
+    strong: line.relativeIntensity >= strongLineFraction,
+  };
 }
 
 export function tableRows(lines: Line[]): SheetTableRow[] {
@@ -135,7 +153,7 @@ function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number, 
       key: displayText(key),
       roles: list,
       citation: source ? displayText(source.citation) : `(source "${displayText(key)}" is not listed in the molecule file)`,
-      link: source?.doi ? safeLink(`https://doi.org/${source.doi.trim()}`) ?? link : link,
+      link: source?.doi ? (safeLink(`https://doi.org/${source.doi.trim()}`) ?? link) : link,
       address,
     };
   });
@@ -143,14 +161,19 @@ function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number, 
 
 function accuracyOf(result: BandLines): string {
   const sigmas = result.lines.map((l) => l.wavenumberUncertainty);
-  const range = sigmas.length ? ` Position ± in this table: ${significant(Math.min(...sigmas), 2)} to ${significant(Math.max(...sigmas), 2)} cm⁻¹ (constants' uncertainties, the terms they leave out, never below the measured residuals).` : "";
+  const range = sigmas.length
+    ? ` Position ± in this table: ${significant(Math.min(...sigmas), 2)} to ${significant(Math.max(...sigmas), 2)} cm⁻¹ (constants' uncertainties, the terms they leave out, never below the measured residuals).`
+    : "";
   return `Accuracy: ${displayText(accuracyText(result.accuracy))}.${range}`;
 }
 
 function otherBandsNoteOf(entry: AtlasEntry): string | null {
   const shown = entry.bands.filter((b: AtlasBand, i) => i > 0 && b.shownWithFundamental);
   if (!shown.length) return null;
-  const parts = shown.map((b) => `${b.label}${b.strengthRelativeToFundamental !== null ? ` (strongest line ${significant(b.strengthRelativeToFundamental, 2)} of the fundamental's)` : ""}`);
+  const parts = shown.map(
+    (b) =>
+      `${b.label}${b.strengthRelativeToFundamental !== null ? ` (strongest line ${significant(b.strengthRelativeToFundamental, 2)} of the fundamental's)` : ""}`,
+  );
   return `At ${entry.temperatureK} K the hot band${shown.length === 1 ? "" : "s"} ${parts.join(", ")} also show${shown.length === 1 ? "s" : ""} in a spectrum; only the fundamental is drawn and listed here.`;
 }
 
@@ -158,7 +181,9 @@ function otherBandsNoteOf(entry: AtlasEntry): string | null {
 function termModel(model: SpeciesModel): string {
   const linear = model.linear;
   if (!linear) return "Dunham expansion of the term values E(v, J) in (v + ½) and J(J + 1); ¹Σ⁺–¹Σ⁺ selection rule ΔJ\u00a0=\u00a0±1";
-  const spin = linear.nuclearSpinWeights ? `; nuclear-spin weights even J : odd J = ${linear.nuclearSpinWeights.evenJ} : ${linear.nuclearSpinWeights.oddJ} in Σg⁺ states (swapped in Σu⁺)` : "";
+  const spin = linear.nuclearSpinWeights
+    ? `; nuclear-spin weights even J : odd J = ${linear.nuclearSpinWeights.evenJ} : ${linear.nuclearSpinWeights.oddJ} in Σg⁺ states (swapped in Σu⁺)`
+    : "";
   return `Each vibrational state's levels G + B·J(J + 1) − D·[J(J + 1)]² + H·[J(J + 1)]³ from the file's state constants; parallel (Σ–Σ) band, ΔJ\u00a0=\u00a0±1${spin}`;
 }
 
@@ -168,24 +193,33 @@ export function sheetContent(input: SheetContentInput): SheetContent {
   if (speciesIndex < 0) throw new SheetInputError(`${displayText(molecule.name)} has no species "${entry.species}"`);
   // The principal band: a diatomic's fundamental, a linear molecule's first listed band.
   const fundamental = entry.bands[0];
-  if (!fundamental || fundamental.lines.lines.length === 0) throw new SheetInputError(`${displayText(molecule.name)} ${entry.species}: the atlas entry has no lines in its principal band`);
+  if (!fundamental || fundamental.lines.lines.length === 0)
+    throw new SheetInputError(`${displayText(molecule.name)} ${entry.species}: the atlas entry has no lines in its principal band`);
   const bandLines = fundamental.lines;
   const model = molecule.species[speciesIndex].model;
-  const constants = model.constantsOrigin === "cited" ? `constants cited for ${model.label}` : `constants scaled from ${molecule.species[0].model.label} by Dunham's isotope relations`;
+  const constants =
+    model.constantsOrigin === "cited"
+      ? `constants cited for ${model.label}`
+      : `constants scaled from ${molecule.species[0].model.label} by Dunham's isotope relations`;
   const intensity =
-    bandLines.intensityOrigin === null ? "relative intensities only (no cited band strength or dipole)" : `absolute intensities ${intensityOriginWords[bandLines.intensityOrigin]}`;
+    bandLines.intensityOrigin === null
+      ? "relative intensities only (no cited band strength or dipole)"
+      : `absolute intensities ${intensityOriginWords[bandLines.intensityOrigin]}`;
   const title = displayText(molecule.name);
   const temperatureText = `T = ${entry.temperatureK} K (${fixed(entry.temperatureK - 273.15, 2).replace(/\.?0+$/, "")} °C)`;
   const calibration = input.calibration
     ? calibrationMarksNote(input.calibration, entry, fundamental)
     : input.calibrationLineLabels?.length
-    ? `Recommended for calibration (calibration-grade flags of the molecule file): ${input.calibrationLineLabels.map(displayText).join(", ")}.`
-    : null;
+      ? `Recommended for calibration (calibration-grade flags of the molecule file): ${input.calibrationLineLabels.map(displayText).join(", ")}.`
+      : null;
   return {
     title,
     formula: displayText(molecule.formula),
     species: entry.species,
-    bandText: fundamental.name && fundamental.name !== fundamental.label ? `band ${displayText(fundamental.name)} (${displayText(fundamental.label)})` : `band ${fundamental.label} (fundamental)`,
+    bandText:
+      fundamental.name && fundamental.name !== fundamental.label
+        ? `band ${displayText(fundamental.name)} (${displayText(fundamental.label)})`
+        : `band ${fundamental.label} (fundamental)`,
     temperatureText,
     bandOriginText: `${fixed(bandLines.bandOrigin, 4)} cm⁻¹`,
     summaryText: `${bandLines.lines.length} lines down to ${significant(Math.min(...bandLines.lines.map((l) => l.relativeIntensity)), 1)} of the strongest; partition function Q = ${significant(entry.partitionFunction, 5)}`,

@@ -44,7 +44,10 @@ function withSharedShaping(font: FontkitFont): unknown {
     let run = shaped.get(text);
     if (!run) {
       const fresh = font.layout(text);
-      run = { glyphs: fresh.glyphs, positions: fresh.positions.map((p) => ({ xAdvance: p.xAdvance, yAdvance: p.yAdvance, xOffset: p.xOffset, yOffset: p.yOffset })) };
+      run = {
+        glyphs: fresh.glyphs,
+        positions: fresh.positions.map((p) => ({ xAdvance: p.xAdvance, yAdvance: p.yAdvance, xOffset: p.xOffset, yOffset: p.yOffset })),
+      };
       if (shaped.size >= maxShapedTexts) shaped.clear();
       shaped.set(text, run);
     }

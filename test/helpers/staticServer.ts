@@ -3,7 +3,15 @@ import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { extname, join, normalize, sep } from "node:path";
 
-const types: Record<string, string> = { ".html": "text/html; charset=utf-8", ".css": "text/css", ".js": "text/javascript", ".json": "application/json", ".svg": "image/svg+xml", ".csv": "text/csv; charset=utf-8", ".pdf": "application/pdf" };
+const types: Record<string, string> = {
+  ".html": "text/html; charset=utf-8",
+  ".css": "text/css",
+  ".js": "text/javascript",
+  ".json": "application/json",
+  ".svg": "image/svg+xml",
+  ".csv": "text/csv; charset=utf-8",
+  ".pdf": "application/pdf",
+};
 
 /** Serves a built site folder on 127.0.0.1 (a random port) for browser tests. */
 export async function serveFolder(site: string): Promise<{ base: string; close: () => Promise<void> }> {

@@ -1,7 +1,15 @@
 import { defaultCalibrationCriteria, type CalibrationCriteria } from "../../core/index.ts";
 import { moleculeCalibrationLines } from "../../atlas/index.ts";
 import { calibrationWavenumberDigits, criteriaPhrase, csvRow, numeric, peakShiftDigits, significant, textTable } from "../../format/index.ts";
-import { cellConditionsFromOptions, cellOptionSpec, cellOptionsHelp, describeConditions, instrumentFromOptions, joinUnitWords, rangeFromOptions } from "../cellOptions.ts";
+import {
+  cellConditionsFromOptions,
+  cellOptionSpec,
+  cellOptionsHelp,
+  describeConditions,
+  instrumentFromOptions,
+  joinUnitWords,
+  rangeFromOptions,
+} from "../cellOptions.ts";
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine } from "../options.ts";
 import { UsageError } from "../usageError.ts";
@@ -31,7 +39,8 @@ export function runCalibrationLines(args: string[]): string {
     1,
   );
   if (values.help) return calibrationLinesHelp + "\n";
-  if (positionals.length === 0) throw new UsageError("which molecule? e.g. `bandatlas calibration-lines co --resolution 1` (see bandatlas calibration-lines --help)");
+  if (positionals.length === 0)
+    throw new UsageError("which molecule? e.g. `bandatlas calibration-lines co --resolution 1` (see bandatlas calibration-lines --help)");
   const format = formatOption(values.format as string | undefined, ["table", "csv", "json"]);
   const conditions = cellConditionsFromOptions(values);
   const instrument = instrumentFromOptions(values, 1);
@@ -46,7 +55,10 @@ export function runCalibrationLines(args: string[]): string {
   const result = moleculeCalibrationLines(molecule, { conditions, instrument, ...range }, criteria);
   const resolution = result.resolutionCm;
   const criteriaText = criteriaPhrase(criteria, `${resolution} cm⁻¹`);
-  const basis = result.set.intensityScale === "absolute" ? "peak shifts from the predicted transmittance at these cell conditions" : "peak shifts from the relative optically thin spectrum (no cited band intensity)";
+  const basis =
+    result.set.intensityScale === "absolute"
+      ? "peak shifts from the predicted transmittance at these cell conditions"
+      : "peak shifts from the relative optically thin spectrum (no cited band intensity)";
   if (format === "json") {
     return (
       JSON.stringify(
@@ -77,9 +89,31 @@ export function runCalibrationLines(args: string[]): string {
     );
   }
   if (format === "csv") {
-    const rows = [csvRow(["species", "band", "line", "wavenumber_cm-1", "wavenumber_uncertainty_cm-1", "relative_to_strongest", "nearest_neighbour_cm-1", "peak_shift_cm-1"])];
+    const rows = [
+      csvRow([
+        "species",
+        "band",
+        "line",
+        "wavenumber_cm-1",
+        "wavenumber_uncertainty_cm-1",
+        "relative_to_strongest",
+        "nearest_neighbour_cm-1",
+        "peak_shift_cm-1",
+      ]),
+    ];
     for (const l of result.lines) {
-      rows.push(csvRow([l.species, l.band, l.label, numeric(calibrationWavenumberDigits(l.wavenumber)), numeric(significant(l.wavenumberUncertainty, 2)), numeric(significant(l.relativeToStrongest, 3)), l.nearestNeighbourCm === null ? null : numeric(calibrationWavenumberDigits(l.nearestNeighbourCm)), numeric(peakShiftDigits(l.peakShiftCm))]));
+      rows.push(
+        csvRow([
+          l.species,
+          l.band,
+          l.label,
+          numeric(calibrationWavenumberDigits(l.wavenumber)),
+          numeric(significant(l.wavenumberUncertainty, 2)),
+          numeric(significant(l.relativeToStrongest, 3)),
+          l.nearestNeighbourCm === null ? null : numeric(calibrationWavenumberDigits(l.nearestNeighbourCm)),
+          numeric(peakShiftDigits(l.peakShiftCm)),
+        ]),
+      );
     }
     return rows.join("\n") + "\n";
   }
@@ -95,7 +129,16 @@ export function runCalibrationLines(args: string[]): string {
   if (result.lines.length === 0) return header.join("\n") + "no line meets all three criteria at this resolution.\n";
   const table = textTable(
     ["species", "band", "line", "ν̃ / cm⁻¹", "± / cm⁻¹", "rel. to strongest", "nearest / cm⁻¹", "peak shift / cm⁻¹"],
-    result.lines.map((l) => [l.species, l.band, l.label, calibrationWavenumberDigits(l.wavenumber), significant(l.wavenumberUncertainty, 2), significant(l.relativeToStrongest, 3), l.nearestNeighbourCm === null ? "none" : calibrationWavenumberDigits(l.nearestNeighbourCm), peakShiftDigits(l.peakShiftCm) || "no peak"]),
+    result.lines.map((l) => [
+      l.species,
+      l.band,
+      l.label,
+      calibrationWavenumberDigits(l.wavenumber),
+      significant(l.wavenumberUncertainty, 2),
+      significant(l.relativeToStrongest, 3),
+      l.nearestNeighbourCm === null ? "none" : calibrationWavenumberDigits(l.nearestNeighbourCm),
+      peakShiftDigits(l.peakShiftCm) || "no peak",
+    ]),
     [false, false, false, true, true, true, true, true],
   );
   return header.join("\n") + table + "\n";

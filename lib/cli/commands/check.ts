@@ -16,7 +16,12 @@ export function runCheck(args: string[]): { output: string; exitCode: number } {
   const files = positionals.length ? positionals : moleculeFilesIn(moleculesDir(values.molecules as string | undefined));
   const { molecules, problems } = loadMoleculeFiles(files);
   if (problems.length) {
-    return { output: problems.map(formatProblem).join("\n") + `\n${problems.length} problem${problems.length === 1 ? "" : "s"} in ${new Set(problems.map((p) => p.file)).size} of ${files.length} file${files.length === 1 ? "" : "s"}\n`, exitCode: 1 };
+    return {
+      output:
+        problems.map(formatProblem).join("\n") +
+        `\n${problems.length} problem${problems.length === 1 ? "" : "s"} in ${new Set(problems.map((p) => p.file)).size} of ${files.length} file${files.length === 1 ? "" : "s"}\n`,
+      exitCode: 1,
+    };
   }
   return { output: `${molecules.length} molecule file${molecules.length === 1 ? "" : "s"} valid: ${molecules.map((m) => m.id).join(", ")}\n`, exitCode: 0 };
 }

@@ -27,7 +27,15 @@ export function runFind(args: string[]): string {
   const { values, positionals } = parseCommandLine(
     "find",
     args,
-    { window: { type: "string" }, unit: { type: "string" }, air: { type: "boolean" }, temperature: { type: "string" }, "min-relative": { type: "string" }, format: { type: "string" }, molecules: { type: "string" } },
+    {
+      window: { type: "string" },
+      unit: { type: "string" },
+      air: { type: "boolean" },
+      temperature: { type: "string" },
+      "min-relative": { type: "string" },
+      format: { type: "string" },
+      molecules: { type: "string" },
+    },
     2,
   );
   if (values.help) return findHelp + "\n";
@@ -38,7 +46,8 @@ export function runFind(args: string[]): string {
   const position = parseSpectralPosition(positionals.join(" "), (unitText ?? "cm-1") as PositionUnit, values.air ? "air" : "vacuum");
   const wavenumber = positionToWavenumber(position);
   const windowGiven = values.window === undefined ? null : numberOption("window", values.window as string, NaN);
-  if (windowGiven !== null && !(windowGiven > 0)) throw new UsageError(`--window ${values.window}: the half-width must be above 0 (a number in the position's unit)`);
+  if (windowGiven !== null && !(windowGiven > 0))
+    throw new UsageError(`--window ${values.window}: the half-width must be above 0 (a number in the position's unit)`);
   const windowCm = windowGiven === null ? defaultFindWindowCm : windowToWavenumber(position, windowGiven);
   if (windowCm > 500) throw new UsageError(`--window ${values.window}: the half-width must be at most 500 cm⁻¹ (${windowCm.toPrecision(3)} cm⁻¹ given)`);
   const temperatureK = temperatureOption(values.temperature as string | undefined, defaultTemperatureK);
@@ -47,11 +56,30 @@ export function runFind(args: string[]): string {
   const format = formatOption(values.format as string | undefined, ["table", "json"]);
   const matches = findInAtlas(loadMoleculesOrThrow(moleculesDir(values.molecules as string | undefined)), wavenumber, windowCm, temperatureK, minRelative);
   if (format === "json") {
-    return JSON.stringify({ query: { wavenumber, window: windowCm, temperatureK, minRelative, position: position.value, unit: position.unit, medium: position.medium }, matches }, null, 2) + "\n";
+    return (
+      JSON.stringify(
+        { query: { wavenumber, window: windowCm, temperatureK, minRelative, position: position.value, unit: position.unit, medium: position.medium }, matches },
+        null,
+        2,
+      ) + "\n"
+    );
   }
   const given = position.unit === "cm-1" ? "" : ` (${position.value} ${unitLabels[position.unit]}, ${position.medium})`;
   const head = `Lines within ±${significant(windowCm, 4)} cm⁻¹ of ${position.unit === "cm-1" ? wavenumber : fixed(wavenumber, 4)} cm⁻¹${given} at ${temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}\n`;
   if (!matches.length) return head;
-  const rows = matches.map((m) => [m.molecule, m.species, m.band, m.label, fixed(m.wavenumber, 4), (m.offset >= 0 ? "+" : "") + fixed(m.offset, 4), significant(m.relativeIntensity, 3)]);
-  return head + "\n" + textTable(["molecule", "species", "band", "line", "ν̃ / cm⁻¹", "offset / cm⁻¹", "rel. int."], rows, [false, false, false, false, true, true, true]) + "\n";
+  const rows = matches.map((m) => [
+    m.molecule,
+    m.species,
+    m.band,
+    m.label,
+    fixed(m.wavenumber, 4),
+    (m.offset >= 0 ? "+" : "") + fixed(m.offset, 4),
+    significant(m.relativeIntensity, 3),
+  ]);
+  return (
+    head +
+    "\n" +
+    textTable(["molecule", "species", "band", "line", "ν̃ / cm⁻¹", "offset / cm⁻¹", "rel. int."], rows, [false, false, false, false, true, true, true]) +
+    "\n"
+  );
 }

@@ -3,7 +3,15 @@ import { join } from "node:path";
 import { isMap, parseDocument } from "yaml";
 import { dunhamTermName, termSupport } from "../../core/index.ts";
 import { fitReportText, termSupportRule, type FitReport } from "../../format/index.ts";
-import { fitDecimals, MoleculeFileError, parseMoleculeBytes, type FileFit, type LinearFileFit, type LinearMoleculeFile, type MoleculeFile } from "../../molecules/index.ts";
+import {
+  fitDecimals,
+  MoleculeFileError,
+  parseMoleculeBytes,
+  type FileFit,
+  type LinearFileFit,
+  type LinearMoleculeFile,
+  type MoleculeFile,
+} from "../../molecules/index.ts";
 import { SheetInputError, writeFileAtomic } from "../../sheet/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
 import { formatOption, parseCommandLine } from "../options.ts";
@@ -34,7 +42,13 @@ export function dunhamFitReport(file: MoleculeFile, fileName: string, fileFit: F
   return {
     molecule: file.id,
     file: fileName,
-    parameters: names.map((name, i) => ({ name, value: fit.solution.parameters[i], uncertainty: fit.solution.uncertainties[i], significance: support.fitted[i].significance, supported: support.fitted[i].supported })),
+    parameters: names.map((name, i) => ({
+      name,
+      value: fit.solution.parameters[i],
+      uncertainty: fit.solution.uncertainties[i],
+      significance: support.fitted[i].significance,
+      supported: support.fitted[i].supported,
+    })),
     correlation: fit.solution.correlation,
     lines: fit.residuals.map((r) => ({
       species: r.observation.species,
@@ -98,7 +112,9 @@ export function linearFitReport(file: LinearMoleculeFile, fileName: string, fit:
 export function withFitResult(text: string, path: Array<string | number>, report: FitReport): string {
   const doc = parseDocument(text, { version: "1.2" });
   const result = doc.createNode(
-    Object.fromEntries(report.parameters.map((p) => [p.name, { value: Number(p.value.toFixed(fitDecimals(p.uncertainty))), uncertainty: Number(p.uncertainty.toPrecision(3)) }])),
+    Object.fromEntries(
+      report.parameters.map((p) => [p.name, { value: Number(p.value.toFixed(fitDecimals(p.uncertainty))), uncertainty: Number(p.uncertainty.toPrecision(3)) }]),
+    ),
   );
   if (isMap(result)) for (const item of result.items) if (isMap(item.value)) item.value.flow = true;
   doc.setIn([...path, "result"], result);
@@ -121,9 +137,15 @@ export function runFit(args: string[]): { output: string; exitCode: number } {
   const parsed = parseMoleculeBytes(bytes, path, expectedId, { checkFitResult: false });
   if (!parsed.ok) throw new MoleculeFileError(parsed.problems);
   const reports: Array<{ report: FitReport; resultPath: Array<string | number> }> = [];
-  if (parsed.fileFit) reports.push({ report: dunhamFitReport(parsed.data as MoleculeFile, path, parsed.fileFit), resultPath: ["species", parsed.fileFit.referenceIndex, "constants", "fit"] });
-  for (const fit of parsed.linearFits ?? []) reports.push({ report: linearFitReport(parsed.data as LinearMoleculeFile, path, fit), resultPath: ["species", fit.speciesIndex, "fit"] });
-  if (!reports.length) throw new UsageError(`${path} has no \`fit\` block: its constants are cited, not fitted (see DEVELOPERS.md, "Fitting constants to measured lines")`);
+  if (parsed.fileFit)
+    reports.push({
+      report: dunhamFitReport(parsed.data as MoleculeFile, path, parsed.fileFit),
+      resultPath: ["species", parsed.fileFit.referenceIndex, "constants", "fit"],
+    });
+  for (const fit of parsed.linearFits ?? [])
+    reports.push({ report: linearFitReport(parsed.data as LinearMoleculeFile, path, fit), resultPath: ["species", fit.speciesIndex, "fit"] });
+  if (!reports.length)
+    throw new UsageError(`${path} has no \`fit\` block: its constants are cited, not fitted (see DEVELOPERS.md, "Fitting constants to measured lines")`);
   let note = "";
   if (values.write) {
     let text = new TextDecoder().decode(bytes);
@@ -136,6 +158,7 @@ export function runFit(args: string[]): { output: string; exitCode: number } {
     }
     note = `\nwrote the result into ${path}\n`;
   }
-  if (format === "json") return { output: JSON.stringify(reports.length === 1 ? reports[0].report : reports.map((r) => r.report), null, 2) + "\n", exitCode: 0 };
+  if (format === "json")
+    return { output: JSON.stringify(reports.length === 1 ? reports[0].report : reports.map((r) => r.report), null, 2) + "\n", exitCode: 0 };
   return { output: reports.map((r) => fitReportText(r.report)).join("\n") + note, exitCode: 0 };
 }

@@ -24,8 +24,16 @@ export const commands: Record<string, Command> = {
   find: { summary: "lines of the whole atlas near a wavenumber", help: findHelp, run: runFind },
   sheet: { summary: "printable PDF bench sheet of one gas at one temperature", help: sheetHelp, run: runSheet },
   spectrum: { summary: "predicted gas-cell transmittance at an instrument's resolution (CSV or JSON)", help: spectrumHelp, run: runSpectrum },
-  "calibration-lines": { summary: "strong, isolated lines to calibrate against at a resolution, with their peak shifts", help: calibrationLinesHelp, run: runCalibrationLines },
-  fit: { summary: "fit a molecule file's constants to its cited measured lines (constants, uncertainties, correlations, residuals)", help: fitHelp, run: runFit },
+  "calibration-lines": {
+    summary: "strong, isolated lines to calibrate against at a resolution, with their peak shifts",
+    help: calibrationLinesHelp,
+    run: runCalibrationLines,
+  },
+  fit: {
+    summary: "fit a molecule file's constants to its cited measured lines (constants, uncertainties, correlations, residuals)",
+    help: fitHelp,
+    run: runFit,
+  },
   check: { summary: "validate molecule files (file:line:column for every problem)", help: checkHelp, run: runCheck },
   build: { summary: "build the atlas website (pages, downloads, search, sheets) into site/", help: buildHelp, run: runBuild },
   serve: { summary: "build the site and serve it on localhost, rebuilding when molecule files change", help: serveHelp, run: runServe },

@@ -26,14 +26,23 @@ export function describeConstants(molecule: Molecule, species: SpeciesInfo): str
   const source = molecule.sources.find((s) => s.key === species.model.constantsSourceKey);
   const cite = source ? source.citation : species.model.constantsSourceKey;
   if (species.model.constantsOrigin === "fitted") return `fitted by bandatlas fit to cited measured lines (${cite})`;
-  return species.model.constantsOrigin === "cited" ? `cited for ${species.model.label}: ${cite}` : `scaled from ${molecule.species[0].model.label} by Dunham's isotope relations; reference constants: ${cite}`;
+  return species.model.constantsOrigin === "cited"
+    ? `cited for ${species.model.label}: ${cite}`
+    : `scaled from ${molecule.species[0].model.label} by Dunham's isotope relations; reference constants: ${cite}`;
 }
 
 export function runLines(args: string[]): string {
   const { values, positionals } = parseCommandLine(
     "lines",
     args,
-    { species: { type: "string" }, band: { type: "string" }, temperature: { type: "string" }, "min-relative": { type: "string" }, format: { type: "string" }, molecules: { type: "string" } },
+    {
+      species: { type: "string" },
+      band: { type: "string" },
+      temperature: { type: "string" },
+      "min-relative": { type: "string" },
+      format: { type: "string" },
+      molecules: { type: "string" },
+    },
     1,
   );
   if (values.help) return linesHelp + "\n";
@@ -48,5 +57,10 @@ export function runLines(args: string[]): string {
   const result = bandOf(species, band, temperatureK, minRelative);
   if (format === "json") return JSON.stringify(linesDocument(molecule.id, result, molecule.limitations), null, 2) + "\n";
   if (format === "csv") return linesCsv(result, molecule.limitations);
-  return linesTable(result, { moleculeName: molecule.name, formula: molecule.formula, constantsNote: describeConstants(molecule, species), limitations: molecule.limitations });
+  return linesTable(result, {
+    moleculeName: molecule.name,
+    formula: molecule.formula,
+    constantsNote: describeConstants(molecule, species),
+    limitations: molecule.limitations,
+  });
 }

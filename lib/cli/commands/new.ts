@@ -27,7 +27,8 @@ export function runNew(args: string[]): string {
     // "wx" fails if the file exists, so two contributors can never overwrite each other's file.
     writeFileSync(target, template, { flag: "wx" });
   } catch (error) {
-    if ((error as NodeJS.ErrnoException).code === "EEXIST") throw new UsageError(`${relative(process.cwd(), target) || target} already exists; edit it, or choose another id`);
+    if ((error as NodeJS.ErrnoException).code === "EEXIST")
+      throw new UsageError(`${relative(process.cwd(), target) || target} already exists; edit it, or choose another id`);
     throw new UsageError(`cannot write ${target}: ${(error as Error).message}`);
   }
   const shown = relative(process.cwd(), target) || target;

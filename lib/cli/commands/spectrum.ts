@@ -1,7 +1,15 @@
 import { moleculeCellSpectrum } from "../../atlas/index.ts";
 import { csvRow, numeric, opticalDepthDigits, spectrumWavenumberDigits, transmittanceDigits } from "../../format/index.ts";
 import type { Molecule } from "../../molecules/index.ts";
-import { cellConditionsFromOptions, cellOptionSpec, cellOptionsHelp, describeConditions, instrumentFromOptions, joinUnitWords, rangeFromOptions } from "../cellOptions.ts";
+import {
+  cellConditionsFromOptions,
+  cellOptionSpec,
+  cellOptionsHelp,
+  describeConditions,
+  instrumentFromOptions,
+  joinUnitWords,
+  rangeFromOptions,
+} from "../cellOptions.ts";
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine } from "../options.ts";
 import { UsageError } from "../usageError.ts";
@@ -25,7 +33,12 @@ export function cautionFor(molecule: Molecule): string {
 }
 
 export function runSpectrum(args: string[]): string {
-  const { values, positionals } = parseCommandLine("spectrum", joinUnitWords(args), { ...cellOptionSpec, step: { type: "string" }, relative: { type: "boolean" } }, 1);
+  const { values, positionals } = parseCommandLine(
+    "spectrum",
+    joinUnitWords(args),
+    { ...cellOptionSpec, step: { type: "string" }, relative: { type: "boolean" } },
+    1,
+  );
   if (values.help) return spectrumHelp + "\n";
   if (positionals.length === 0) throw new UsageError("which molecule? e.g. `bandatlas spectrum co --from 2000 --to 2250` (see bandatlas spectrum --help)");
   const format = formatOption(values.format as string | undefined, ["csv", "json"]);
@@ -37,7 +50,9 @@ export function runSpectrum(args: string[]): string {
   const molecule = loadOneMolecule(moleculesDir(values.molecules as string | undefined), positionals[0]);
   const { set, spectrum } = moleculeCellSpectrum(molecule, { conditions, fromCm, toCm, instrument });
   if (set.intensityScale === "relative-thin" && !values.relative) {
-    throw new UsageError(`${molecule.name} has no cited band intensity, so its transmittance cannot be predicted; add a cited intensity block to ${molecule.id}.yaml, or use --relative for the relative optically thin absorbance`);
+    throw new UsageError(
+      `${molecule.name} has no cited band intensity, so its transmittance cannot be predicted; add a cited intensity block to ${molecule.id}.yaml, or use --relative for the relative optically thin absorbance`,
+    );
   }
   const gridStep = spectrum.grid.stepCm;
   const step = numberOption("step", values.step as string | undefined, instrument.kind === "monochromatic" ? gridStep : instrument.resolutionCm / 10, "cm-1");
@@ -53,9 +68,27 @@ export function runSpectrum(args: string[]): string {
     for (let i = spectrum.windowFirst; i <= spectrum.windowLast; i++) if (thin[i] > peak) peak = thin[i];
     const rel = (i: number) => (peak > 0 ? thin[i] / peak : 0);
     if (format === "json") {
-      return JSON.stringify({ molecule: molecule.id, intensityScale: set.intensityScale, settings: describeConditions(conditions, instrument), notes: set.notes, caution: cautionFor(molecule), samples: indices.map((i) => ({ wavenumber: Number(spectrumWavenumberDigits(nu(i))), relativeAbsorbance: Number(transmittanceDigits(rel(i))) })) }, null, 2) + "\n";
+      return (
+        JSON.stringify(
+          {
+            molecule: molecule.id,
+            intensityScale: set.intensityScale,
+            settings: describeConditions(conditions, instrument),
+            notes: set.notes,
+            caution: cautionFor(molecule),
+            samples: indices.map((i) => ({ wavenumber: Number(spectrumWavenumberDigits(nu(i))), relativeAbsorbance: Number(transmittanceDigits(rel(i))) })),
+          },
+          null,
+          2,
+        ) + "\n"
+      );
     }
-    return [csvRow(["wavenumber_cm-1", "relative_absorbance_optically_thin_NOT_transmittance"]), ...indices.map((i) => csvRow([numeric(spectrumWavenumberDigits(nu(i))), numeric(transmittanceDigits(rel(i)))]))].join("\n") + "\n";
+    return (
+      [
+        csvRow(["wavenumber_cm-1", "relative_absorbance_optically_thin_NOT_transmittance"]),
+        ...indices.map((i) => csvRow([numeric(spectrumWavenumberDigits(nu(i))), numeric(transmittanceDigits(rel(i)))])),
+      ].join("\n") + "\n"
+    );
   }
   const observed = spectrum.observedTransmittance!;
   const mono = spectrum.transmittance!;
@@ -87,6 +120,14 @@ export function runSpectrum(args: string[]): string {
     );
   }
   const rows = [csvRow(["wavenumber_cm-1", "transmittance_instrument", "transmittance_monochromatic", "optical_depth"])];
-  for (const i of indices) rows.push(csvRow([numeric(spectrumWavenumberDigits(nu(i))), numeric(transmittanceDigits(observed[i])), numeric(transmittanceDigits(mono[i])), numeric(opticalDepthDigits(tau[i]))]));
+  for (const i of indices)
+    rows.push(
+      csvRow([
+        numeric(spectrumWavenumberDigits(nu(i))),
+        numeric(transmittanceDigits(observed[i])),
+        numeric(transmittanceDigits(mono[i])),
+        numeric(opticalDepthDigits(tau[i])),
+      ]),
+    );
   return rows.join("\n") + "\n";
 }
