@@ -68,6 +68,8 @@ describe("page data", () => {
   it("writes species as chemists do and links relatively", () => {
     expect(speciesDisplay("12C16O")).toBe("¹²C¹⁶O");
     expect(speciesDisplay("1H35Cl")).toBe("¹H³⁵Cl");
+    expect(speciesDisplay("12C2H2")).toBe("¹²C₂H₂");
+    expect(speciesDisplay("12C16O2")).toBe("¹²C¹⁶O₂");
     // Handbook notation of the constants (Huber & Herzberg 1979, fact of the trade).
     expect(constantSymbol("omegaExe")).toBe("ωₑxₑ");
     expect(constantSymbol("Y12")).toBe("Y₁₂");

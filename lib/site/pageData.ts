@@ -261,12 +261,14 @@ export function accuracyRows(molecules: Molecule[], entries: AtlasEntry[]) {
     for (const entry of entries.filter((e) => e.moleculeId === molecule.id && e.temperatureK === defaultTemperatureK)) {
       const species = molecule.species.find((s) => s.model.label === entry.species)!;
       const path = speciesPagePath(molecule.id, entry.species, defaultTemperatureK);
-      const row = (band: string, accuracy: AtlasBand["lines"]["accuracy"], anchor: string | null) => {
+      const row = (band: string, accuracy: AtlasBand["lines"]["accuracy"], anchor: string | null, printed: number[]) => {
         const c = accuracy.check;
         return {
+          printedUncertainty: printed.length ? `${significant(Math.min(...printed), 2)} – ${significant(Math.max(...printed), 2)}` : "—",
           moleculeName: molecule.name,
           formula: molecule.formula,
           species: entry.species,
+          speciesText: speciesDisplay(entry.species),
           band,
           path,
           anchor,
@@ -278,10 +280,10 @@ export function accuracyRows(molecules: Molecule[], entries: AtlasEntry[]) {
           sources: c ? c.sourceKeys.map((key) => citationOf(molecule, key)) : [],
         };
       };
-      for (const band of entry.bands) rows.push(row(band.label, band.lines.accuracy, `band-${band.label}`));
+      for (const band of entry.bands) rows.push(row(band.label, band.lines.accuracy, `band-${band.label}`, band.lines.lines.map((l) => l.wavenumberUncertainty)));
       for (const check of species.model.validation?.checks ?? []) {
         if (check.band.vUpper !== check.band.vLower) continue;
-        rows.push(row(`${bandLabel(check.band)} (pure rotation)`, { status: "validated", check, floor: check.envelope }, null));
+        rows.push(row(`${bandLabel(check.band)} (pure rotation)`, { status: "validated", check, floor: check.envelope }, null, []));
       }
     }
   }
