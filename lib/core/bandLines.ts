@@ -7,7 +7,7 @@ import { linearBandModel } from "./linearBandModel.ts";
 import { partitionFunction as computePartitionFunction } from "./partitionFunction.ts";
 import { highestRisingV, levelExpansion, termFromExpansion } from "./termValues.ts";
 import { bandIntensityDataFor } from "./transitionDipole.ts";
-import type { Band, BandLines, SpeciesModel, TemperatureK } from "./types.ts";
+import type { Band, BandAccuracy, BandLines, SpeciesModel, TemperatureK } from "./types.ts";
 
 export interface BandLineOptions {
   temperatureK: TemperatureK;
@@ -32,6 +32,18 @@ export function dunhamPositionUncertainty(species: SpeciesModel, band: Band): Po
   };
 }
 
+const bandErrors = new WeakMap<SpeciesModel, Map<string, { uncertainty: PositionUncertainty; accuracy: BandAccuracy }>>();
+
+/** A band's position uncertainty and accuracy, made once per species and band (they do not depend on T). */
+function positionErrorsOf(species: SpeciesModel, band: Band): { uncertainty: PositionUncertainty; accuracy: BandAccuracy } {
+  let byBand = bandErrors.get(species);
+  if (!byBand) bandErrors.set(species, (byBand = new Map()));
+  const key = `${band.vUpper}-${band.vLower}`;
+  let errors = byBand.get(key);
+  if (!errors) byBand.set(key, (errors = { uncertainty: dunhamPositionUncertainty(species, band), accuracy: bandAccuracy(species, band) }));
+  return errors;
+}
+
 /** The band model of a ¹Σ⁺ diatomic's band v'←v'': both levels expanded from the Dunham table. */
 export function diatomicBandModel(species: SpeciesModel, band: Band, options: BandLineOptions): BandModel {
   const vTop = highestRisingV(species.dunham, band.vUpper + 1);
@@ -46,8 +58,7 @@ export function diatomicBandModel(species: SpeciesModel, band: Band, options: Ba
     lower: levelExpansion(species.dunham, band.vLower),
     upper: levelExpansion(species.dunham, band.vUpper),
     zeroEnergy: termFromExpansion(levelExpansion(species.dunham, 0), 0),
-    uncertainty: dunhamPositionUncertainty(species, band),
-    accuracy: bandAccuracy(species, band),
+    ...positionErrorsOf(species, band),
     partitionFunction: options.partitionFunction ?? computePartitionFunction(species.dunham, options.temperatureK),
     // Nuclear-spin degeneracy of a heteronuclear diatomic is the same for every level and cancels.
     lowerWeight: () => 1,

@@ -54,30 +54,59 @@ export interface ModelLineOptions {
 }
 
 function uncertaintyFunction({ terms, rows }: PositionUncertainty) {
-  const count = terms.length;
-  const ls = terms.map((t) => t.l);
-  const upperWeights = terms.map((t) => t.upperWeight);
-  const lowerWeights = terms.map((t) => t.lowerWeight);
-  const g = new Float64Array(count);
+  // Each row moves a line by Σ_l a_l x'^l − Σ_l b_l x''^l: with v = (x'^0…x'^L, x''^0…x''^L) the
+  // variance is vᵀMv, M = Σ_rows c cᵀ. M is made once per band, so a line costs (2L+2)² operations
+  // however many error components there are (a fit's covariance, omitted terms, cross-checks).
+  const lMax = terms.reduce((m, t) => Math.max(m, t.l), 0);
+  const size = 2 * (lMax + 1);
+  const m = new Float64Array(size * size);
+  const c = new Float64Array(size);
+  for (const row of rows) {
+    c.fill(0);
+    terms.forEach((t, i) => {
+      c[t.l] += row[i] * t.upperWeight;
+      c[lMax + 1 + t.l] -= row[i] * t.lowerWeight;
+    });
+    for (let a = 0; a < size; a++) {
+      if (c[a] === 0) continue;
+      for (let b = 0; b < size; b++) m[a * size + b] += c[a] * c[b];
+    }
+  }
+  const v = new Float64Array(size);
   return (xUpper: number, xLower: number): number => {
-    for (let i = 0; i < count; i++) {
-      // x^l by repeated multiplication: l is a small whole number (0–6) and this is the hot path.
-      let powUpper = 1;
-      let powLower = 1;
-      for (let k = ls[i]; k > 0; k--) {
-        powUpper *= xUpper;
-        powLower *= xLower;
-      }
-      g[i] = upperWeights[i] * powUpper - lowerWeights[i] * powLower;
+    let powUpper = 1;
+    let powLower = 1;
+    for (let l = 0; l <= lMax; l++) {
+      v[l] = powUpper;
+      v[lMax + 1 + l] = powLower;
+      powUpper *= xUpper;
+      powLower *= xLower;
     }
+    // M is symmetric: the upper triangle, off-diagonal terms twice.
     let variance = 0;
-    for (const row of rows) {
-      let shift = 0;
-      for (let i = 0; i < count; i++) shift += row[i] * g[i];
-      variance += shift * shift;
+    for (let a = 0; a < size; a++) {
+      const row = a * size;
+      let sum = 0.5 * m[row + a] * v[a];
+      for (let b = a + 1; b < size; b++) sum += m[row + b] * v[b];
+      variance += 2 * v[a] * sum;
     }
-    return Math.sqrt(variance);
+    return Math.sqrt(Math.max(variance, 0));
   };
+}
+
+// Both depend only on the species and band, not on the temperature: made once per band (the
+// atlas computes every band at several temperatures, and the CLI and benchmarks many times).
+const uncertaintyFunctions = new WeakMap<PositionUncertainty, ReturnType<typeof uncertaintyFunction>>();
+function cachedUncertaintyFunction(u: PositionUncertainty) {
+  let f = uncertaintyFunctions.get(u);
+  if (!f) uncertaintyFunctions.set(u, (f = uncertaintyFunction(u)));
+  return f;
+}
+const floors = new WeakMap<BandAccuracy, Float64Array>();
+function cachedFloor(accuracy: BandAccuracy): Float64Array {
+  let floor = floors.get(accuracy);
+  if (!floor) floors.set(accuracy, (floor = Float64Array.from({ length: jLimit + 3 }, (_, m) => envelopeAt(accuracy.floor, m))));
+  return floor;
 }
 
 const scratchCapacity = 2 * (jLimit + 2);
@@ -110,9 +139,9 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
   const c2OverT = secondRadiationConstantCmK / temperatureK;
   const { lower, upper } = model;
   const hw = model.intensity?.hermanWallis ?? null;
-  const propagated = uncertaintyFunction(model.uncertainty);
+  const propagated = cachedUncertaintyFunction(model.uncertainty);
   const { accuracy } = model;
-  const floorByAbsM = Float64Array.from({ length: jLimit + 3 }, (_, m) => envelopeAt(accuracy.floor, m));
+  const floorByAbsM = cachedFloor(accuracy);
   const uncertaintyOf = (xUpper: number, xLower: number, absM: number) => Math.max(propagated(xUpper, xLower), floorByAbsM[absM]);
   const check = accuracy.check;
   const statusOf = (branch: Branch, jLower: number): Line["positionStatus"] => {
