@@ -18,8 +18,6 @@ const equilibriumToDunhamMap: Array<[keyof EquilibriumConstants, number, number,
   ["hE", 0, 3, 1],
 ];
 
-export const equilibriumConstantNames = equilibriumToDunhamMap.map(([name]) => name);
-
 export function equilibriumToDunham(constants: EquilibriumConstants, uncertainties: EquilibriumUncertainties = {}): DunhamCoefficient[] {
   const table: DunhamCoefficient[] = [];
   for (const [name, k, l, sign] of equilibriumToDunhamMap) {
@@ -28,9 +26,4 @@ export function equilibriumToDunham(constants: EquilibriumConstants, uncertainti
     table.push({ k, l, valueCm: sign * value, uncertaintyCm: uncertainties[name] ?? 0 });
   }
   return table;
-}
-
-/** Looks up Y_kl, 0 when the table does not carry it. */
-export function dunhamValue(table: DunhamCoefficient[], k: number, l: number): number {
-  return table.find((c) => c.k === k && c.l === l)?.valueCm ?? 0;
 }

@@ -1,5 +1,5 @@
 import { debyeEsuCm, planckErgS, secondRadiationConstantCmK, speedOfLightCmS } from "./physicalConstants.ts";
-import type { DipoleDebye, EnergyCm, TemperatureK, WavenumberCm } from "./types.ts";
+import type { DipoleDebye, WavenumberCm } from "./types.ts";
 
 // Line intensity of an electric-dipole transition in cm/molecule (P. F. Bernath, Spectra of Atoms
 // and Molecules, Oxford University Press, ch. 5; Herzberg 1950, ch. IV):
@@ -8,21 +8,8 @@ import type { DipoleDebye, EnergyCm, TemperatureK, WavenumberCm } from "./types.
 // The lower level's degeneracy 2J''+1 cancels against the Hönl–London normalisation.
 export const intensityPrefactorCgs = (8 * Math.PI ** 3) / (3 * planckErgS * speedOfLightCmS);
 
-/** The part of the intensity that does not depend on the dipole: ν̃·e^(−c2E''/T)·(1−e^(−c2ν̃/T))·S_HL·F/Q. */
-export function intensityShape(
-  wavenumber: WavenumberCm,
-  lowerStateEnergy: EnergyCm,
-  temperatureK: TemperatureK,
-  partitionFunction: number,
-  hoenlLondonFactor: number,
-  hermanWallisFactor: number,
-): number {
-  const c2OverT = secondRadiationConstantCmK / temperatureK;
-  const stimulatedEmission = -Math.expm1(-c2OverT * wavenumber);
-  return (wavenumber * Math.exp(-c2OverT * lowerStateEnergy) * stimulatedEmission * hoenlLondonFactor * hermanWallisFactor) / partitionFunction;
-}
-
-/** The same, with the Boltzmann factor e^(−c2E''/T) already computed (it is shared by P(J'') and R(J'')). */
+/** The part of the intensity that does not depend on the dipole, ν̃·e^(−c2E''/T)·(1−e^(−c2ν̃/T))·S_HL·F/Q, with the
+ * Boltzmann factor e^(−c2E''/T) already computed (it is shared by P(J'') and R(J'')). */
 export function intensityShapeFromBoltzmann(
   wavenumber: WavenumberCm,
   boltzmannFactor: number,

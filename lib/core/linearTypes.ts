@@ -1,4 +1,4 @@
-import type { Band, EnergyCm, WavenumberCm } from "./types.ts";
+import type { Band, WavenumberCm } from "./types.ts";
 
 // Plain data for a linear polyatomic molecule's parallel (Σ–Σ) bands. Each vibrational state is
 // its own rotational series E = G + B·x − D·x² + H·x³ (x = J(J+1)), the same per-level expansion
@@ -64,6 +64,3 @@ export interface LinearSpeciesData {
    */
   positionErrors?: Array<{ deltas: Array<{ stateIndex: number; l: number; valueCm: number }> }>;
 }
-
-/** Lower-state energy zero: the J = 0 level of the ground state. */
-export type ZeroEnergyCm = EnergyCm;

@@ -16,8 +16,6 @@ export const atomicMassUnitKg = 1.6605390666e-27;
 export const speedOfLightCmS = speedOfLightMs * 100;
 /** Planck constant in erg s (cgs). */
 export const planckErgS = planckJs * 1e7;
-/** Boltzmann constant in erg/K (cgs). */
-export const boltzmannErgK = boltzmannJK * 1e7;
 /** Second radiation constant c2 = hc/k in cm K (CODATA 2018: 1.438776877... cm K). */
 export const secondRadiationConstantCmK = ((planckJs * speedOfLightMs) / boltzmannJK) * 100;
 /** One debye in esu cm (statC cm): 1 D = 1e-18 esu cm by definition. */

@@ -23,10 +23,6 @@ export function spectralGrid(fromCm: WavenumberCm, toCm: WavenumberCm, stepCm: W
   return { startCm: fromCm, stepCm, count };
 }
 
-export function gridWavenumber(grid: SpectralGrid, index: number): WavenumberCm {
-  return grid.startCm + index * grid.stepCm;
-}
-
 /** Index of the grid point nearest to ν̃ (clamped to the grid). */
 export function nearestGridIndex(grid: SpectralGrid, wavenumber: WavenumberCm): number {
   const i = Math.round((wavenumber - grid.startCm) / grid.stepCm);

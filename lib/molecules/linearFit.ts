@@ -9,7 +9,7 @@ import {
   type LinearStateFitResult,
   type StateCoefficientKey,
 } from "../core/index.ts";
-import type { LinearMoleculeFile, LinearSpeciesEntry } from "./linearSchema.ts";
+import type { LinearMoleculeFile } from "./linearSchema.ts";
 import { speciesLabel } from "./speciesNames.ts";
 
 type Path = Array<string | number>;

@@ -15,7 +15,14 @@ export interface Box {
 
 const yTop = 1.18; // headroom above the strongest line for the branch names and the origin label
 
-/** The stick plot of the band: wavenumber rising to the right, relative intensity up, vector only. */
+/**
+ * The stick plot of the band: wavenumber rising to the right, relative intensity up, vector only.
+ * Drawn with PDFKit rather than by placing the site's Vega SVG through svg-to-pdfkit: the sheet
+ * needs its embedded DejaVu subset for every label (the SVG names a generic sans-serif), hairline
+ * sticks at print resolution and one layout for A4 and Letter; it takes the same data (the atlas
+ * entry) and the same branch colours, dashes and markers (shared/branchStyle) as the site's plot,
+ * so both show the same picture. The unused svg-to-pdfkit dependency was removed.
+ */
 export function drawStickPlot(doc: Doc, box: Box, content: SheetContent): void {
   const left = box.x + 40;
   const right = box.x + box.width - 6;

@@ -90,7 +90,6 @@ export function moleculeView(molecule: Molecule, hasBench = false) {
   };
 }
 
-export type MoleculeView = ReturnType<typeof moleculeView>;
 
 const bandTitles: Record<AtlasBand["kind"], string> = { fundamental: "fundamental", hot: "hot band", overtone: "overtone", combination: "combination band" };
 
