@@ -1,4 +1,4 @@
-import { debyeEsuCm, planckErgS, secondRadiationConstantCmK, speedOfLightCmS } from "./physicalConstants.ts";
+import { debyeEsuCm, planckErgS, speedOfLightCmS } from "./physicalConstants.ts";
 import type { DipoleDebye, WavenumberCm } from "./types.ts";
 
 // Line intensity of an electric-dipole transition in cm/molecule (P. F. Bernath, Spectra of Atoms
