@@ -1,4 +1,4 @@
-import { bandLines, partitionFunction } from "../lib/core/index.ts";
+import { bandLines, partitionFunction, type DiatomicSpeciesModel } from "../lib/core/index.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 
@@ -9,7 +9,7 @@ import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 export function benchCoreLines(): { linesPerSecond: number; lines: number; seconds: number } {
   const species = loadMoleculesOrThrow(shippedMoleculesDir)
     .flatMap((m) => m.species.map((s) => s.model))
-    .filter((model) => !model.linear);
+    .filter((model): model is DiatomicSpeciesModel => model.structure === "diatomic");
   const work = species.flatMap((model) => [296, 1000].map((temperatureK) => ({ model, temperatureK, q: partitionFunction(model.dunham, temperatureK) })));
   const run = () => {
     let count = 0;

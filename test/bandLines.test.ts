@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { bandLines, equilibriumToDunham, reducedMassU, type SpeciesModel } from "../lib/core/index.ts";
-import { shippedSpecies } from "./helpers/shipped.ts";
+import { shippedDiatomic, shippedSpecies } from "./helpers/shipped.ts";
 
 const at296 = { temperatureK: 296 };
 const line = (result: ReturnType<typeof bandLines>, label: string) => {
@@ -67,6 +67,7 @@ describe("12C16O 1-0 against published values", () => {
 describe("rigid rotor and harmonic oscillator limit", () => {
   const bCm = 10;
   const rigid: SpeciesModel = {
+    structure: "diatomic",
     label: "rigid",
     massNumbers: [1, 35],
     atomMassesU: [1, 35],
@@ -116,20 +117,19 @@ describe("isotopologues", () => {
     const result = bandLines(shippedSpecies("co", "13C16O"), { vUpper: 1, vLower: 0 }, at296);
     expect(Math.abs(result.bandOrigin - 2096.07)).toBeLessThan(0.05);
   });
-  it("scales H35Cl to D35Cl within the Born–Oppenheimer breakdown of the cited D35Cl constants", () => {
-    // Huber & Herzberg (1979) give D35Cl its own constants (in molecules/hcl.yaml); Dunham scaling
-    // from H35Cl must agree with them to within a few tenths of a cm⁻¹ (mass-dependent corrections).
-    const h = shippedSpecies("hcl", "H35Cl");
-    const d = shippedSpecies("hcl", "D35Cl");
-    const scaled: SpeciesModel = {
-      ...d,
-      dunham: h.dunham.map((c) => ({ ...c, valueCm: c.valueCm * Math.pow(h.reducedMassU / d.reducedMassU, c.k / 2 + c.l) })),
-    };
-    const cited = bandLines(d, { vUpper: 1, vLower: 0 }, at296).bandOrigin;
-    const predicted = bandLines(scaled, { vUpper: 1, vLower: 0 }, at296).bandOrigin;
-    expect(Math.abs(cited - predicted)).toBeLessThan(0.5);
-    expect(cited).toBeGreaterThan(2080);
-    expect(cited).toBeLessThan(2100);
+  it("scales H35Cl to D35Cl and widens the ± by the isotope-scaling bound", () => {
+    // D35Cl carries no constants of its own (none could be cited): it is scaled from H35Cl, and its
+    // ± must include the Born–Oppenheimer bound of positionErrors.ts (2·m_e·|1/M_D − 1/M_H| of each Y_kl).
+    const d = shippedDiatomic("hcl", "D35Cl");
+    expect(d.constantsOrigin).toBe("isotope-scaled");
+    const result = bandLines(d, { vUpper: 1, vLower: 0 }, at296);
+    const r0 = result.lines.find((l) => l.label === "R(0)")!;
+    // m_e = 5.4858e-4 u (CODATA 2018); M(1H) = 1.00783 u, M(2H) = 2.01410 u (AME 2020, from memory).
+    const bound = 2 * 5.4858e-4 * Math.abs(1 / 2.0141 - 1 / 1.00783) * r0.wavenumber;
+    expect(r0.wavenumberUncertainty).toBeGreaterThan(0.5 * bound);
+    // DCl fundamental near 2091 cm⁻¹ (from memory).
+    expect(result.bandOrigin).toBeGreaterThan(2080);
+    expect(result.bandOrigin).toBeLessThan(2100);
   });
   it("gives H37Cl lines below H35Cl by about 2 cm⁻¹ near the origin", () => {
     // The chlorine isotope splitting of the HCl fundamental, ~2.0 cm⁻¹ (from memory; visible as

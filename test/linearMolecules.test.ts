@@ -8,17 +8,17 @@ import {
   speciesPartitionFunction,
   vibrationalPartitionFunction,
   type LinearSpeciesData,
-  type SpeciesModel,
+  type LinearSpeciesModel,
 } from "../lib/core/index.ts";
 import { atlasEntry, findInAtlas, resolveBand, selectMolecule, selectSpecies } from "../lib/atlas/index.ts";
 import { formatProblem, parseMoleculeText } from "../lib/molecules/index.ts";
-import { shippedMolecules, shippedSpecies } from "./helpers/shipped.ts";
+import { linearModel, shippedMolecules, shippedSpecies } from "./helpers/shipped.ts";
 
-const co2 = () => shippedSpecies("co2");
-const n2o = () => shippedSpecies("n2o");
+const co2 = () => linearModel(shippedSpecies("co2"));
+const n2o = () => linearModel(shippedSpecies("n2o"));
 
 /** A linear species with the given states, invented for these tests (numbers of the size of 12C2H2's, not its constants). */
-function inventedSpecies(weights: LinearSpeciesData["nuclearSpinWeights"], symmetries: ["Σ+" | "Σg+" | "Σu+", "Σ+" | "Σg+" | "Σu+"]): SpeciesModel {
+function inventedSpecies(weights: LinearSpeciesData["nuclearSpinWeights"], symmetries: ["Σ+" | "Σg+" | "Σu+", "Σ+" | "Σg+" | "Σu+"]): LinearSpeciesModel {
   const c = (valueCm: number) => ({ valueCm, uncertaintyCm: 0 });
   const linear: LinearSpeciesData = {
     states: [
@@ -26,7 +26,14 @@ function inventedSpecies(weights: LinearSpeciesData["nuclearSpinWeights"], symme
       { id: "u", symmetry: symmetries[1], termEnergy: c(6556), b: c(1.17), d: c(1.6e-6), h: c(0), sourceKey: "invented" },
     ],
     bands: [
-      { band: { vUpper: 1, vLower: 0, label: "u-g" }, upperStateIndex: 1, lowerStateIndex: 0, name: "invented", kind: "combination", sourceKey: "invented" },
+      {
+        band: { label: "u-g", upperStateIndex: 1, lowerStateIndex: 0 },
+        upperStateIndex: 1,
+        lowerStateIndex: 0,
+        name: "invented",
+        kind: "combination",
+        sourceKey: "invented",
+      },
     ],
     groundStateIndex: 0,
     modes: [
@@ -39,12 +46,11 @@ function inventedSpecies(weights: LinearSpeciesData["nuclearSpinWeights"], symme
     nuclearSpinWeights: weights,
   };
   return {
+    structure: "linear",
     label: "invented",
     massNumbers: [],
     atomMassesU: [],
     abundance: 1,
-    reducedMassU: Number.NaN,
-    dunham: [],
     constantsOrigin: "cited",
     constantsSourceKey: "invented",
     intensities: [],
@@ -59,8 +65,8 @@ describe("vibrational partition function", () => {
     // The sum over C(v+d−1, v)-fold levels must reproduce it to rounding (1e-12 relative).
     for (const species of [co2(), n2o()]) {
       for (const temperatureK of [200, 296, 1000, 3000]) {
-        const direct = vibrationalPartitionFunction(species.linear!.modes, temperatureK);
-        const closed = harmonicVibrationalPartitionFunction(species.linear!.modes, temperatureK);
+        const direct = vibrationalPartitionFunction(species.linear.modes, temperatureK);
+        const closed = harmonicVibrationalPartitionFunction(species.linear.modes, temperatureK);
         expect(Math.abs(direct / closed - 1), `${species.label} ${temperatureK} K`).toBeLessThan(1e-12);
       }
     }
@@ -73,7 +79,7 @@ describe("vibrational partition function", () => {
     // 12C16O2 at 296 K: the bend dominates; Q_vib ≈ 1.0841 from the closed form with the cited
     // fundamentals (1388.1847, 667.379 ×2, 2349.1433), computed by hand here as a check of the wiring.
     const x = (w: number) => 1 / (1 - Math.exp((-1.438776877 * w) / 296));
-    expect(vibrationalPartitionFunction(co2().linear!.modes, 296)).toBeCloseTo(x(1388.1847) * x(667.379) ** 2 * x(2349.1433), 9);
+    expect(vibrationalPartitionFunction(co2().linear.modes, 296)).toBeCloseTo(x(1388.1847) * x(667.379) ** 2 * x(2349.1433), 9);
   });
 });
 
@@ -81,14 +87,14 @@ describe("rotational partition function of a linear molecule", () => {
   it("12C16O2 (only even J exist) gives half of Mulholland's rigid-rotor sum: symmetry number 2", () => {
     // Mulholland, Proc. Cambridge Philos. Soc. 24, 280 (1928); σ = 2 for D∞h (Herzberg 1945, ch. V).
     // Summing only even J gives ½(kT/hcB) + 1/6 + …; centrifugal distortion adds ≈ 4·10⁻⁴ at 296 K, so 1e-3 relative.
-    const q = linearRotationalPartitionFunction(co2().linear!, 296);
+    const q = linearRotationalPartitionFunction(co2().linear, 296);
     const mulholland = rigidRotorPartitionFunctionExpansion(0.39021894, 296);
     expect(Math.abs(q / (0.5 * mulholland) - 1)).toBeLessThan(1e-3);
   });
   it("weights 1 and 3 of a 12C2H2-like ground state double the unweighted sum (average weight 2)", () => {
     // Fact of the trade (Herzberg 1945, ch. I): Σ_J g_J (2J+1) e^(…) with g = 1, 3 alternating ≈ 2 × the plain sum at kT ≫ hcB.
-    const weighted = linearRotationalPartitionFunction(inventedSpecies({ evenJ: 1, oddJ: 3 }, ["Σg+", "Σu+"]).linear!, 296);
-    const plain = linearRotationalPartitionFunction(inventedSpecies(null, ["Σ+", "Σ+"]).linear!, 296);
+    const weighted = linearRotationalPartitionFunction(inventedSpecies({ evenJ: 1, oddJ: 3 }, ["Σg+", "Σu+"]).linear, 296);
+    const plain = linearRotationalPartitionFunction(inventedSpecies(null, ["Σ+", "Σ+"]).linear, 296);
     expect(Math.abs(weighted / (2 * plain) - 1)).toBeLessThan(1e-3);
   });
   it("12C16O2 and 14N2 16O total Q(296 K) lie near the values in the literature", () => {
@@ -105,10 +111,14 @@ describe("nuclear-spin statistics", () => {
     // Fact of the trade (Herzberg 1945, ch. I.3): H has spin ½, so in 12C2H2 ortho (odd J of Σg+) : para = 3 : 1.
     const weighted = bandLines(
       inventedSpecies({ evenJ: 1, oddJ: 3 }, ["Σg+", "Σu+"]),
-      { vUpper: 1, vLower: 0, label: "u-g" },
+      { label: "u-g", upperStateIndex: 1, lowerStateIndex: 0 },
       { temperatureK: 296, minRelative: 0 },
     );
-    const plain = bandLines(inventedSpecies(null, ["Σ+", "Σ+"]), { vUpper: 1, vLower: 0, label: "u-g" }, { temperatureK: 296, minRelative: 0 });
+    const plain = bandLines(
+      inventedSpecies(null, ["Σ+", "Σ+"]),
+      { label: "u-g", upperStateIndex: 1, lowerStateIndex: 0 },
+      { temperatureK: 296, minRelative: 0 },
+    );
     const ratio = (label: string) =>
       weighted.lines.find((l) => l.label === label)!.relativeIntensity / plain.lines.find((l) => l.label === label)!.relativeIntensity;
     for (const j of [1, 3, 5, 9, 15]) {
@@ -141,7 +151,7 @@ describe("nuclear-spin statistics", () => {
   });
   it("14N2 16O ν3 (no centre of symmetry) has every J'' and no alternation", () => {
     // Fact of the trade (common practice, no source): unsymmetric linear molecules (HCN, N2O, OCS) show no alternation.
-    const result = bandLines(n2o(), n2o().linear!.bands[0].band, { temperatureK: 296, minRelative: 0 });
+    const result = bandLines(n2o(), n2o().linear.bands[0].band, { temperatureK: 296, minRelative: 0 });
     const r = (j: number) => result.lines.find((l) => l.label === `R(${j})`)!;
     for (const j of [0, 1, 2, 3, 4]) expect(r(j), `R(${j})`).toBeDefined();
     // Without alternation the envelope is smooth: each R(J) lies between its neighbours or at the maximum.
@@ -159,7 +169,7 @@ describe("line positions from the cited state constants", () => {
     // ν(m) = ν0 + (B'+B'')m + (B'−B'')m² − 2(D'+D'')m³ − (D'−D'')m⁴, m = J''+1 (R), −J'' (P): Herzberg 1950, ch. III.
     const [nu0, b1, b0, d1, d0] = [2349.1433, 0.3871414, 0.39021894, 1.33034e-7, 1.33373e-7];
     const textbook = (m: number) => nu0 + (b1 + b0) * m + (b1 - b0) * m * m - 2 * (d1 + d0) * m ** 3 - (d1 - d0) * m ** 4;
-    const result = bandLines(co2(), co2().linear!.bands[0].band, { temperatureK: 296, minRelative: 0 });
+    const result = bandLines(co2(), co2().linear.bands[0].band, { temperatureK: 296, minRelative: 0 });
     expect(result.bandOrigin).toBeCloseTo(2349.1433, 6);
     for (const [label, m] of [
       ["R(0)", 1],
@@ -172,13 +182,13 @@ describe("line positions from the cited state constants", () => {
     }
   });
   it("12C16O2 ν3 R(0) lies near 4.2555 µm, the familiar 4.3 µm band (fact of the trade)", () => {
-    const r0 = bandLines(co2(), co2().linear!.bands[0].band, { temperatureK: 296 }).lines.find((l) => l.label === "R(0)")!;
+    const r0 = bandLines(co2(), co2().linear.bands[0].band, { temperatureK: 296 }).lines.find((l) => l.label === "R(0)")!;
     expect(r0.wavelengthVacuumUm).toBeGreaterThan(4.25);
     expect(r0.wavelengthVacuumUm).toBeLessThan(4.26);
   });
   it("lines come out sorted by wavenumber through an R-branch head (B' < B'' in ν3 of 12C16O2)", () => {
     // The R branch turns back near m ≈ (B'+B'')/2(B''−B') ≈ 127 (Herzberg 1950, ch. III): at 3000 K the list reaches it.
-    const result = bandLines(co2(), co2().linear!.bands[0].band, { temperatureK: 3000, minRelative: 0 });
+    const result = bandLines(co2(), co2().linear.bands[0].band, { temperatureK: 3000, minRelative: 0 });
     for (let i = 1; i < result.lines.length; i++) expect(result.lines[i].wavenumber).toBeGreaterThanOrEqual(result.lines[i - 1].wavenumber);
     const rBranch = result.lines.filter((l) => l.branch === "R").sort((a, b) => a.jLower - b.jLower);
     const headIndex = rBranch.reduce((best, l, i) => (l.wavenumber > rBranch[best].wavenumber ? i : best), 0);

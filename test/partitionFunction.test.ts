@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { equilibriumToDunham, partitionFunction, rigidRotorPartitionFunctionExpansion, secondRadiationConstantCmK } from "../lib/core/index.ts";
-import { shippedSpecies } from "./helpers/shipped.ts";
+import { shippedDiatomic } from "./helpers/shipped.ts";
 
 describe("partition function", () => {
   it("matches Mulholland's high-temperature expansion for a rigid rotor (harmonic vibration factored out)", () => {
@@ -22,7 +22,7 @@ describe("partition function", () => {
   it("gives 12C16O at 296 K a partition function near kT/hcB", () => {
     // With distortion and vibration the sum exceeds the rigid-rotor value only slightly: kT/hcB0 + 1/3
     // with B0 = 1.9225 cm⁻¹ is 107.3; the full sum must lie within 0.5 % of it (fact of the trade).
-    const q = partitionFunction(shippedSpecies("co").dunham, 296);
+    const q = partitionFunction(shippedDiatomic("co").dunham, 296);
     const rigid = rigidRotorPartitionFunctionExpansion(1.92253, 296);
     expect(Math.abs(q / rigid - 1)).toBeLessThan(5e-3);
   });

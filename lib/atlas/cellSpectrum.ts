@@ -72,7 +72,11 @@ function unitDipoleModel(species: SpeciesInfo, reference: SpeciesInfo): SpeciesM
     origin: "cited" as const,
     sourceKey: "unit-dipole",
   };
-  const data = species === reference ? unit : scaleTransitionDipoleToIsotopologue(unit, reference.model.reducedMassU, species.model.reducedMassU);
+  // Only a diatomic's isotopologues are scaled by the reduced-mass rule; a linear species keeps the unit dipole.
+  const data =
+    species === reference || species.model.structure !== "diatomic" || reference.model.structure !== "diatomic"
+      ? unit
+      : scaleTransitionDipoleToIsotopologue(unit, reference.model.reducedMassU, species.model.reducedMassU);
   return { ...species.model, intensities: [data] };
 }
 

@@ -15,8 +15,8 @@ export interface SpeciesBand {
  * the one the others are compared with.
  */
 export function speciesBands(species: SpeciesInfo): SpeciesBand[] {
-  const linear = species.model.linear;
-  if (linear) return linear.bands.map((b) => ({ band: b.band, kind: b.kind, name: b.name }));
+  const model = species.model;
+  if (model.structure === "linear") return model.linear.bands.map((b) => ({ band: b.band, kind: b.kind, name: b.name }));
   return atlasBands.map(({ band, kind }) => ({ band, kind, name: bandLabel(band) }));
 }
 
@@ -26,12 +26,12 @@ export function speciesBands(species: SpeciesInfo): SpeciesBand[] {
  * Without a name: the first band (the fundamental of a diatomic).
  */
 export function resolveBand(molecule: Molecule, species: SpeciesInfo, text: string | undefined): Band {
+  if (species.model.structure !== "linear") return parseBand(text ?? "1-0");
   const linear = species.model.linear;
-  if (!linear) return parseBand(text ?? "1-0");
   if (text === undefined) return linear.bands[0].band;
   const wanted = text.trim().toLowerCase();
   const found = linear.bands.find(
-    (b) => b.band.label!.toLowerCase() === wanted || b.name.toLowerCase() === wanted || b.name.replace(/ν/g, "nu").toLowerCase() === wanted,
+    (b) => b.band.label.toLowerCase() === wanted || b.name.toLowerCase() === wanted || b.name.replace(/ν/g, "nu").toLowerCase() === wanted,
   );
   if (!found) {
     throw new CoreInputError(

@@ -1,5 +1,16 @@
 import { CoreInputError } from "./coreInputError.ts";
-import type { Band } from "./types.ts";
+import type { Band, StateBand, VibrationalBand } from "./types.ts";
+
+/** A linear molecule's band between two listed states (a diatomic's is v'←v''). */
+export function isStateBand(band: Band): band is StateBand {
+  return band.label !== undefined;
+}
+
+/** The band as a diatomic's v'←v'', or a clear error for a linear molecule's state band. */
+export function vibrationalBand(band: Band): VibrationalBand {
+  if (isStateBand(band)) throw new CoreInputError(`band ${band.label} is a band between a linear molecule's states, not a diatomic's v'-v''`);
+  return band;
+}
 
 export function bandLabel(band: Band): string {
   if (band.label !== undefined) return band.label;
@@ -7,7 +18,7 @@ export function bandLabel(band: Band): string {
 }
 
 /** Parses "v'-v''" (absorption: v' > v'' ≥ 0), e.g. "1-0", "2-0", "2-1". */
-export function parseBand(text: string): Band {
+export function parseBand(text: string): VibrationalBand {
   const match = /^\s*(\d{1,2})\s*-\s*(\d{1,2})\s*$/.exec(text);
   if (!match) throw new CoreInputError(`band "${text}" is not of the form v'-v'' (for example 1-0, 2-0 or 2-1)`);
   const band = { vUpper: Number(match[1]), vLower: Number(match[2]) };

@@ -1,4 +1,4 @@
-import { sameBand } from "./band.ts";
+import { sameBand, vibrationalBand } from "./band.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { runningIndex } from "./hoenlLondon.ts";
 import { linearStateExpansion } from "./linearStateTerms.ts";
@@ -18,15 +18,16 @@ export function parseLineLabel(label: string): { branch: Branch; jLower: number;
 export function referenceLinePosition(species: SpeciesModel, line: ReferenceLine): number {
   const { jLower, jUpper } = parseLineLabel(line.label);
   if (jUpper < 0) throw new CoreInputError(`line ${line.label} does not exist (J' would be below 0)`);
-  const linear = species.linear;
-  if (linear) {
+  if (species.structure === "linear") {
+    const linear = species.linear;
     const entry = linear.bands.find((b) => sameBand(b.band, line.band));
     if (!entry) throw new CoreInputError(`${species.label} has no band ${line.band.label ?? ""} for line ${line.label}`);
     const upper = linearStateExpansion(linear.states[entry.upperStateIndex]);
     const lower = linearStateExpansion(linear.states[entry.lowerStateIndex]);
     return termFromExpansion(upper, jUpper) - termFromExpansion(lower, jLower);
   }
-  return termValue(species.dunham, line.band.vUpper, jUpper) - termValue(species.dunham, line.band.vLower, jLower);
+  const band = vibrationalBand(line.band);
+  return termValue(species.dunham, band.vUpper, jUpper) - termValue(species.dunham, band.vLower, jLower);
 }
 
 export interface LineResidual {

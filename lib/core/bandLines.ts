@@ -1,4 +1,4 @@
-import { bandLabel } from "./band.ts";
+import { bandLabel, vibrationalBand } from "./band.ts";
 import { bandAccuracy } from "./bandAccuracy.ts";
 import { bandLinesFromModel, type BandModel, type PositionUncertainty } from "./bandModel.ts";
 import { componentsFromUncertainties } from "./positionErrors.ts";
@@ -7,7 +7,7 @@ import { linearBandModel } from "./linearBandModel.ts";
 import { partitionFunction as computePartitionFunction } from "./partitionFunction.ts";
 import { highestRisingV, levelExpansion, termFromExpansion } from "./termValues.ts";
 import { bandIntensityDataFor } from "./transitionDipole.ts";
-import type { Band, BandAccuracy, BandLines, SpeciesModel, TemperatureK } from "./types.ts";
+import type { Band, BandAccuracy, BandLines, DiatomicSpeciesModel, SpeciesModel, TemperatureK, VibrationalBand } from "./types.ts";
 
 export interface BandLineOptions {
   temperatureK: TemperatureK;
@@ -22,7 +22,7 @@ export interface BandLineOptions {
  * covariance, cited uncertainties, omitted terms, isotope scaling): one term per Dunham
  * coefficient named by any component, weighted (v+½)^k in each level; one row per component.
  */
-export function dunhamPositionUncertainty(species: SpeciesModel, band: Band): PositionUncertainty {
+export function dunhamPositionUncertainty(species: DiatomicSpeciesModel, band: VibrationalBand): PositionUncertainty {
   const components = species.positionErrors ?? componentsFromUncertainties(species.dunham);
   const keys: Array<{ k: number; l: number }> = [];
   for (const c of components) for (const d of c.deltas) if (!keys.some((key) => key.k === d.k && key.l === d.l)) keys.push({ k: d.k, l: d.l });
@@ -32,10 +32,10 @@ export function dunhamPositionUncertainty(species: SpeciesModel, band: Band): Po
   };
 }
 
-const bandErrors = new WeakMap<SpeciesModel, Map<string, { uncertainty: PositionUncertainty; accuracy: BandAccuracy }>>();
+const bandErrors = new WeakMap<DiatomicSpeciesModel, Map<string, { uncertainty: PositionUncertainty; accuracy: BandAccuracy }>>();
 
 /** A band's position uncertainty and accuracy, made once per species and band (they do not depend on T). */
-function positionErrorsOf(species: SpeciesModel, band: Band): { uncertainty: PositionUncertainty; accuracy: BandAccuracy } {
+function positionErrorsOf(species: DiatomicSpeciesModel, band: VibrationalBand): { uncertainty: PositionUncertainty; accuracy: BandAccuracy } {
   let byBand = bandErrors.get(species);
   if (!byBand) bandErrors.set(species, (byBand = new Map()));
   const key = `${band.vUpper}-${band.vLower}`;
@@ -45,7 +45,7 @@ function positionErrorsOf(species: SpeciesModel, band: Band): { uncertainty: Pos
 }
 
 /** The band model of a ¹Σ⁺ diatomic's band v'←v'': both levels expanded from the Dunham table. */
-export function diatomicBandModel(species: SpeciesModel, band: Band, options: BandLineOptions): BandModel {
+export function diatomicBandModel(species: DiatomicSpeciesModel, band: VibrationalBand, options: BandLineOptions): BandModel {
   const vTop = highestRisingV(species.dunham, band.vUpper + 1);
   if (vTop < band.vUpper) {
     throw new CoreInputError(
@@ -73,6 +73,6 @@ export function diatomicBandModel(species: SpeciesModel, band: Band, options: Ba
  * `bandLinesFromModel`, so lines are sorted by wavenumber and band heads come out right.
  */
 export function bandLines(species: SpeciesModel, band: Band, options: BandLineOptions): BandLines {
-  const model = species.linear ? linearBandModel(species, band, options) : diatomicBandModel(species, band, options);
+  const model = species.structure === "linear" ? linearBandModel(species, band, options) : diatomicBandModel(species, vibrationalBand(band), options);
   return bandLinesFromModel(model, options);
 }

@@ -6,7 +6,7 @@ import { linearPartitionFunction } from "./linearPartitionFunction.ts";
 import { linearStateExpansion } from "./linearStateTerms.ts";
 import type { LinearSpeciesData, LinearState } from "./linearTypes.ts";
 import { nuclearSpinWeight } from "./nuclearSpinWeights.ts";
-import type { Band, SpeciesModel, TemperatureK } from "./types.ts";
+import type { Band, LinearSpeciesModel, TemperatureK } from "./types.ts";
 
 /** c_l of each state constant (G, B, −D, H): l and the uncertainty; the sign does not matter for σ². */
 function stateUncertainties(state: LinearState): Array<{ l: number; sigma: number }> {
@@ -50,8 +50,8 @@ function componentPositionUncertainty(
 }
 
 /** The band model of one Σ–Σ band of a linear molecule, from the two states' own constants. */
-export function linearBandModel(species: SpeciesModel, band: Band, options: { temperatureK: TemperatureK; partitionFunction?: number }): BandModel {
-  const linear = species.linear!;
+export function linearBandModel(species: LinearSpeciesModel, band: Band, options: { temperatureK: TemperatureK; partitionFunction?: number }): BandModel {
+  const linear = species.linear;
   const entry = linear.bands.find((b) => sameBand(b.band, band));
   if (!entry) {
     throw new CoreInputError(

@@ -1,4 +1,4 @@
-import type { Band, WavenumberCm } from "./types.ts";
+import type { StateBand, WavenumberCm } from "./types.ts";
 
 // Plain data for a linear polyatomic molecule's parallel (Σ–Σ) bands. Each vibrational state is
 // its own rotational series E = G + B·x − D·x² + H·x³ (x = J(J+1)), the same per-level expansion
@@ -40,8 +40,7 @@ export interface NuclearSpinWeights {
 }
 
 export interface LinearBand {
-  /** vUpper / vLower hold the indices of the upper and lower state in `states`; `label` names the band. */
-  band: Band;
+  band: StateBand;
   upperStateIndex: number;
   lowerStateIndex: number;
   /** The name practitioners use, e.g. "ν3", "2ν3", "ν1+ν3". */

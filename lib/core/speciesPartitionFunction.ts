@@ -4,5 +4,5 @@ import type { SpeciesModel, TemperatureK } from "./types.ts";
 
 /** Q(T) of any species: the Dunham level sum for a diatomic, Q_vib·Q_rot for a linear molecule. */
 export function speciesPartitionFunction(species: SpeciesModel, temperatureK: TemperatureK): number {
-  return species.linear ? linearPartitionFunction(species.linear, temperatureK) : partitionFunction(species.dunham, temperatureK);
+  return species.structure === "linear" ? linearPartitionFunction(species.linear, temperatureK) : partitionFunction(species.dunham, temperatureK);
 }

@@ -1,4 +1,4 @@
-import { sameBand } from "./band.ts";
+import { isStateBand, sameBand, vibrationalBand } from "./band.ts";
 import type { Band, BandIntensityData, MassU } from "./types.ts";
 
 // For a harmonic oscillator with a linear dipole function, |⟨v+1|μ|v⟩|² = (v+1)·|⟨1|μ|0⟩|²
@@ -7,7 +7,8 @@ import type { Band, BandIntensityData, MassU } from "./types.ts";
 export function bandIntensityDataFor(intensities: BandIntensityData[], band: Band): BandIntensityData | null {
   const cited = intensities.find((d) => sameBand(d.band, band));
   if (cited) return cited;
-  if (band.vUpper - band.vLower !== 1) return null;
+  // The harmonic rule is for a diatomic's hot bands only; a linear molecule's band needs its own data.
+  if (isStateBand(band) || band.vUpper - band.vLower !== 1) return null;
   const fundamental = intensities.find((d) => d.band.vUpper === 1 && d.band.vLower === 0);
   if (!fundamental) return null;
   const scale = Math.sqrt(band.vUpper);
@@ -24,7 +25,8 @@ export function bandIntensityDataFor(intensities: BandIntensityData[], band: Ban
 // |μ|² ∝ (ħ/2μω)^n ∝ μ_red^(−n/2), since ω ∝ μ_red^(−1/2). Mechanical anharmonicity is neglected,
 // so the result is labelled "isotope-scaled" and a species' own cited value wins.
 export function scaleTransitionDipoleToIsotopologue(data: BandIntensityData, referenceReducedMassU: MassU, targetReducedMassU: MassU): BandIntensityData {
-  const deltaV = data.band.vUpper - data.band.vLower;
+  const band = vibrationalBand(data.band);
+  const deltaV = band.vUpper - band.vLower;
   const factor = Math.pow(referenceReducedMassU / targetReducedMassU, deltaV / 4);
   return {
     ...data,

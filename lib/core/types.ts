@@ -38,12 +38,23 @@ export interface EquilibriumConstants {
 }
 export type EquilibriumUncertainties = Partial<Record<keyof EquilibriumConstants, number>>;
 
-export interface Band {
+/** A diatomic's band v'←v'' (v' = v'' only for pure-rotation measured lines). */
+export interface VibrationalBand {
   vUpper: number;
   vLower: number;
-  /** A linear molecule's band name "upper-lower" from its file (then vUpper/vLower index its states). */
-  label?: string;
+  label?: undefined;
 }
+
+/** A linear molecule's band between two of its listed states, named "upper-lower" by their ids. */
+export interface StateBand {
+  label: string;
+  upperStateIndex: number;
+  lowerStateIndex: number;
+  vUpper?: undefined;
+  vLower?: undefined;
+}
+
+export type Band = VibrationalBand | StateBand;
 
 export interface HermanWallisCoefficients {
   /** F(m) = 1 + a1·m + a2·m², m = J''+1 in R, −J'' in P. */
@@ -123,29 +134,41 @@ export interface BandAccuracy {
   floor: ResidualEnvelope;
 }
 
-/** One isotopologue, ready for the physics: masses resolved, constants as one Y_kl table. */
-export interface SpeciesModel {
+/** What every species carries, whatever its structure. */
+interface SpeciesModelBase {
   /** Every atom's mass number, e.g. "12C16O", "1H35Cl". */
   label: string;
   massNumbers: number[];
   atomMassesU: MassU[];
   /** Product of the atoms' natural isotopic abundances (0–1). */
   abundance: number;
-  reducedMassU: MassU;
-  dunham: DunhamCoefficient[];
   constantsOrigin: "cited" | "isotope-scaled" | "fitted";
   constantsSourceKey: string;
   /** A second published set compared with the constants (its difference is part of every ±). */
   crossCheckSourceKey?: string;
   intensities: BandIntensityData[];
   referenceLines: ReferenceLine[];
-  /** Position error components; absent: each Dunham coefficient's own uncertainty, uncorrelated. */
-  positionErrors?: DunhamErrorComponent[];
   /** Residual checks against measured lines; absent: not validated. */
   validation?: SpeciesValidation;
-  /** Present for a linear polyatomic molecule: its states and bands replace the Dunham table. */
-  linear?: LinearSpeciesData;
 }
+
+/** One isotopologue of a ¹Σ⁺ diatomic: masses resolved, constants as one Y_kl table. */
+export interface DiatomicSpeciesModel extends SpeciesModelBase {
+  structure: "diatomic";
+  reducedMassU: MassU;
+  dunham: DunhamCoefficient[];
+  /** Position error components; absent: each Dunham coefficient's own uncertainty, uncorrelated. */
+  positionErrors?: DunhamErrorComponent[];
+}
+
+/** One isotopologue of a linear polyatomic molecule: its states and the Σ–Σ bands between them. */
+export interface LinearSpeciesModel extends SpeciesModelBase {
+  structure: "linear";
+  linear: LinearSpeciesData;
+}
+
+/** One isotopologue, ready for the physics. */
+export type SpeciesModel = DiatomicSpeciesModel | LinearSpeciesModel;
 
 export type Branch = "P" | "R";
 

@@ -5,88 +5,35 @@ import {
   parseBand,
   sameBand,
   type BandIntensityData,
-  type GasBroadening,
-  type SpeciesModel,
+  type DiatomicSpeciesModel,
 } from "../core/index.ts";
 import { runFileFit, speciesMasses, type FileFit } from "./fileFit.ts";
-import { split, type GivenConstant } from "./givenConstants.ts";
+import { split } from "./givenConstants.ts";
+import { buildLinearMolecule } from "./linearMolecule.ts";
+import type { LinearFileFit } from "./linearFit.ts";
+import type { MoleculeFile } from "./linearSchema.ts";
+import { gasBroadening, moleculeIdentity, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
 import { isotope } from "./isotopes.ts";
-import type { MoleculeFile } from "./schema.ts";
+import type { DiatomicMoleculeFile } from "./schema.ts";
 import { speciesConstants } from "./speciesConstants.ts";
 import { speciesLabel, speciesSpellings } from "./speciesNames.ts";
-
-export interface Source {
-  key: string;
-  citation: string;
-  url: string | null;
-  doi: string | null;
-}
-
-export interface SpeciesInfo {
-  model: SpeciesModel;
-  spellings: string[];
-  isReference: boolean;
-  given: { sourceKey: string; form: "equilibrium" | "dunham" | "mass-independent" | "fit" | "states"; values: GivenConstant[] } | null;
-}
-
-export interface Molecule {
-  id: string;
-  file: string;
-  name: string;
-  formula: string;
-  casNumber: string;
-  aliases: string[];
-  /** Known shortcomings of the cited constants, shown beside every prediction of this molecule. */
-  limitations: string[];
-  electronicState: string;
-  atoms: string[];
-  hazard: { ghsPictograms: string[]; sentences: string[] };
-  sources: Source[];
-  /** Reference species first, then the others in file order. */
-  species: SpeciesInfo[];
-  /** "linear": a linear polyatomic molecule whose species carry states and bands (model.linear). */
-  structure: "diatomic" | "linear";
-  /** Cited self and air broadening from the file; absent or null: none given (spectra use a flagged typical value). */
-  broadening?: GasBroadening | null;
-}
-
-type IdentityFields = "id" | "file" | "name" | "formula" | "casNumber" | "aliases" | "limitations" | "electronicState" | "atoms" | "hazard" | "sources";
-
-/** The fields every form of molecule file shares: identity, hazard note and sources. */
-export function moleculeIdentity(
-  file: Pick<MoleculeFile, "id" | "name" | "formula" | "casNumber" | "aliases" | "limitations" | "electronicState" | "atoms" | "hazard" | "sources">,
-  fileName: string,
-): Pick<Molecule, IdentityFields> {
-  return {
-    id: file.id,
-    file: fileName,
-    name: file.name,
-    formula: file.formula,
-    casNumber: file.casNumber,
-    aliases: file.aliases,
-    limitations: file.limitations,
-    electronicState: file.electronicState,
-    atoms: file.atoms,
-    hazard: file.hazard,
-    sources: Object.entries(file.sources).map(([key, s]) => ({ key, citation: s.citation, url: s.url ?? null, doi: s.doi ?? null })),
-  };
-}
 
 /**
  * Turns a file that has passed every check into the typed molecule: masses and abundances from
  * the isotope library, one Dunham table per species (cited, or scaled from the reference),
  * intensity data per species and band (cited, from a band strength, or isotope-scaled).
  */
-export function buildMolecule(file: MoleculeFile, fileName: string, fileFit: FileFit | null = runFileFit(file)): Molecule {
+export function buildDiatomicMolecule(file: DiatomicMoleculeFile, fileName: string, fileFit: FileFit | null = runFileFit(file)): Molecule {
   const referenceIndex = file.species.findIndex((s) => s.reference === true);
   const ordered = [file.species[referenceIndex], ...file.species.filter((_, i) => i !== referenceIndex)];
   const referenceBlock = ordered[0].constants!;
   const sameSpecies = (a: number[], b: number[]) => a.length === b.length && a.every((x, i) => x === b[i]);
 
-  const models: SpeciesInfo[] = ordered.map((entry, index) => {
+  const models: Array<SpeciesInfo & { model: DiatomicSpeciesModel }> = ordered.map((entry, index) => {
     const masses = speciesMasses(file.atoms, entry.massNumbers, ordered[0].massNumbers);
     const constants = speciesConstants(file, entry, masses, referenceBlock, fileFit);
-    const model: SpeciesModel = {
+    const model: DiatomicSpeciesModel = {
+      structure: "diatomic",
       label: speciesLabel(file.atoms, entry.massNumbers),
       massNumbers: entry.massNumbers,
       atomMassesU: masses.atomMassesU,
@@ -108,7 +55,7 @@ export function buildMolecule(file: MoleculeFile, fileName: string, fileFit: Fil
     };
   });
 
-  const citedIntensity = (info: SpeciesInfo, entry: NonNullable<MoleculeFile["intensity"]>[number]): BandIntensityData => {
+  const citedIntensity = (info: SpeciesInfo, entry: NonNullable<DiatomicMoleculeFile["intensity"]>[number]): BandIntensityData => {
     const band = parseBand(entry.band);
     const hermanWallis = entry.hermanWallis ?? null;
     if (entry.transitionDipoleDebye !== undefined) {
@@ -167,11 +114,15 @@ export function buildMolecule(file: MoleculeFile, fileName: string, fileFit: Fil
     ...moleculeIdentity(file, fileName),
     species: models,
     structure: "diatomic",
-    broadening: file.broadening ? { self: broadeningOf(file.broadening.self), air: broadeningOf(file.broadening.air) } : null,
+    broadening: file.broadening ? gasBroadening(file.broadening) : null,
   };
 }
 
-function broadeningOf(block: NonNullable<MoleculeFile["broadening"]>["self"]): GasBroadening["self"] {
-  const table = block.byAbsM ? [...block.byAbsM].sort((a, b) => a.absM - b.absM) : null;
-  return { hwhmCmPerAtm: block.hwhmCmPerAtm, byAbsM: table, temperatureExponent: block.temperatureExponent, sourceKey: block.source, origin: "cited" };
+/**
+ * The one builder: a molecule file of either form (checked, with its fits run) becomes the typed
+ * Molecule whose species carry a diatomic's Dunham table or a linear molecule's states.
+ */
+export function buildMolecule(file: MoleculeFile, fileName: string, fits: { fileFit?: FileFit | null; linearFits?: readonly LinearFileFit[] } = {}): Molecule {
+  if (file.structure === "linear") return buildLinearMolecule(file, fileName, fits.linearFits ?? []);
+  return buildDiatomicMolecule(file, fileName, fits.fileFit === undefined ? runFileFit(file) : fits.fileFit);
 }

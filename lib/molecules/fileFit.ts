@@ -1,6 +1,6 @@
 import { fitDunham, parseLineLabel, reducedMassU, type DunhamFitResult, type DunhamFitTerm, type FitObservation } from "../core/index.ts";
 import { isotope } from "./isotopes.ts";
-import type { MoleculeFile } from "./schema.ts";
+import type { DiatomicMoleculeFile } from "./schema.ts";
 import { speciesLabel } from "./speciesNames.ts";
 
 /** Masses of one species and its relation to the reference species. */
@@ -36,7 +36,7 @@ export interface FileFit {
   referenceIndex: number;
 }
 
-export function referenceSpeciesIndex(file: MoleculeFile): number {
+export function referenceSpeciesIndex(file: DiatomicMoleculeFile): number {
   return file.species.findIndex((s) => s.reference === true);
 }
 
@@ -44,7 +44,7 @@ export function referenceSpeciesIndex(file: MoleculeFile): number {
  * Runs the fit a file's reference species asks for: every measured line of the named groups, of
  * every species, against the named Dunham terms and mass corrections. Null when the file has no fit.
  */
-export function runFileFit(file: MoleculeFile): FileFit | null {
+export function runFileFit(file: DiatomicMoleculeFile): FileFit | null {
   const referenceIndex = referenceSpeciesIndex(file);
   const spec = file.species[referenceIndex]?.constants?.fit;
   if (!spec) return null;
@@ -95,7 +95,7 @@ export function fitDecimals(uncertainty: number): number {
  * Where the file's written result and a fresh fit disagree: every value must lie within a hundredth
  * of its uncertainty, and every uncertainty within 1 %, of what the fit to the cited lines gives.
  */
-export function fitResultProblems(file: MoleculeFile, fileFit: FileFit): Array<{ path: Array<string | number>; message: string }> {
+export function fitResultProblems(file: DiatomicMoleculeFile, fileFit: FileFit): Array<{ path: Array<string | number>; message: string }> {
   const base = ["species", fileFit.referenceIndex, "constants", "fit"];
   const written = file.species[fileFit.referenceIndex].constants!.fit!.result;
   const rerun = "run `bandatlas fit " + file.id + " --write` to write the fit's result";

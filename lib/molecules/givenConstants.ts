@@ -1,5 +1,5 @@
 import { equilibriumToDunham, type DunhamCoefficient, type EquilibriumConstants, type EquilibriumUncertainties } from "../core/index.ts";
-import type { Measured, MoleculeFile } from "./schema.ts";
+import type { Measured, DiatomicMoleculeFile } from "./schema.ts";
 
 /** A constant as the file gave it, for the pages that show "the constants used". */
 export interface GivenConstant {
@@ -30,7 +30,7 @@ function constantOf(name: string, raw: Measured): GivenConstant {
   return { name, valueCm: value, uncertaintyCm: uncertainty ?? impliedUncertainty(value), uncertaintyImplied: uncertainty === null };
 }
 
-type ConstantsBlock = NonNullable<MoleculeFile["species"][number]["constants"]>;
+type ConstantsBlock = NonNullable<DiatomicMoleculeFile["species"][number]["constants"]>;
 
 export function dunhamFromBlock(block: Pick<ConstantsBlock, "equilibrium" | "dunham" | "massIndependent">): {
   table: DunhamCoefficient[];

@@ -9,3 +9,7 @@ export * from "./fileFit.ts";
 export * from "./givenConstants.ts";
 export * from "./linearFit.ts";
 export type { LinearMoleculeFile, LinearSpeciesEntry } from "./linearSchema.ts";
+export * from "./identityChecks.ts";
+export type { ParseOptions, ParseResult } from "./parseResult.ts";
+export type { MoleculeFile } from "./linearSchema.ts";
+export * from "./moleculeIdentity.ts";

@@ -4,9 +4,10 @@ import {
   type LinearSpeciesData,
   type LinearState,
   type LinearStateSymmetry,
-  type SpeciesModel,
+  type LinearSpeciesModel,
 } from "../core/index.ts";
-import { moleculeIdentity, type Molecule, type SpeciesInfo } from "./buildMolecule.ts";
+import { gasBroadening, moleculeIdentity, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
+import { linearFitErrors, type LinearFileFit } from "./linearFit.ts";
 import { impliedUncertainty, type GivenConstant } from "./givenConstants.ts";
 import { isotope, stableMassNumbers } from "./isotopes.ts";
 import type { LinearMoleculeFile, LinearSpeciesEntry } from "./linearSchema.ts";
@@ -212,7 +213,7 @@ function stateOf(entry: LinearSpeciesEntry["states"][number]): { state: LinearSt
 }
 
 /** The typed molecule of a linear-molecule file that has passed every check. */
-export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string): Molecule {
+export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string, fits: readonly LinearFileFit[] = []): Molecule {
   const referenceIndex = file.species.findIndex((s) => s.reference === true);
   const ordered = [file.species[referenceIndex], ...file.species.filter((_, i) => i !== referenceIndex)];
   const species: SpeciesInfo[] = ordered.map((entry, index) => {
@@ -228,7 +229,7 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string):
         const upperStateIndex = indexOf.get(b.upper)!;
         const lowerStateIndex = indexOf.get(b.lower)!;
         return {
-          band: { vUpper: upperStateIndex, vLower: lowerStateIndex, label: `${b.upper}-${b.lower}` },
+          band: { label: `${b.upper}-${b.lower}`, upperStateIndex, lowerStateIndex },
           upperStateIndex,
           lowerStateIndex,
           name: b.name,
@@ -239,14 +240,12 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string):
     };
     const atoms = entry.massNumbers.map((a, i) => isotope(file.atoms[i], a)!);
     const label = entry.label ?? speciesLabel(file.atoms, entry.massNumbers);
-    const model: SpeciesModel = {
+    const model: LinearSpeciesModel = {
+      structure: "linear",
       label,
       massNumbers: entry.massNumbers,
       atomMassesU: atoms.map((a) => a.massU),
       abundance: atoms.reduce((p, a) => p * (a.abundance ?? 0), 1),
-      // A reduced mass belongs to a diatomic; a linear species carries no Dunham table to scale.
-      reducedMassU: Number.NaN,
-      dunham: [],
       constantsOrigin: "cited",
       constantsSourceKey: entry.states[0].source,
       intensities: [],
@@ -288,14 +287,23 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string):
       given: { sourceKey: entry.states[0].source, form: "states", values: built.flatMap((b) => b.given) },
     };
   });
+  // A fitted species: the fit's covariance and omitted terms make its ±, and its constants count as fitted.
+  for (const fit of fits) {
+    const massNumbers = file.species[fit.speciesIndex].massNumbers.join(",");
+    const model = species.find((s) => s.model.massNumbers.join(",") === massNumbers)!.model;
+    if (model.structure !== "linear") continue;
+    model.linear.positionErrors = linearFitErrors(fit, model.linear);
+    model.constantsOrigin = "fitted";
+  }
   const validations = moleculeValidation(
     species.map((s) => s.model),
-    false,
+    fits.length > 0,
   );
   species.forEach((s, i) => (s.model.validation = validations[i]));
   return {
     ...moleculeIdentity(file, fileName),
     species,
     structure: "linear",
+    broadening: file.broadening ? gasBroadening(file.broadening) : null,
   };
 }

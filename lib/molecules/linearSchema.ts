@@ -1,6 +1,17 @@
 import { z } from "zod";
 import { describeInput } from "./describeInput.ts";
-import { listOf, mapping, massNumbers, measuredIn, moleculeFileSchema, numberIn, referenceLineSchema, sourceKey, text } from "./schema.ts";
+import {
+  identityShape,
+  listOf,
+  mapping,
+  massNumbers,
+  measuredIn,
+  numberIn,
+  referenceLineSchema,
+  sourceKey,
+  text,
+  type DiatomicMoleculeFile,
+} from "./schema.ts";
 
 // The second form of molecule file: a linear polyatomic molecule (`structure: linear`), given as
 // its vibrational states (term energy, B, D, H, symmetry) and the Σ–Σ bands between them. The
@@ -95,20 +106,10 @@ const linearSpeciesSchema = mapping(
   "a species",
 );
 
-const common = moleculeFileSchema.shape;
 export const linearMoleculeFileSchema = mapping(
   {
     structure: z.literal("linear"),
-    id: common.id,
-    name: common.name,
-    formula: common.formula,
-    casNumber: common.casNumber,
-    aliases: common.aliases,
-    limitations: common.limitations,
-    electronicState: common.electronicState,
-    atoms: common.atoms,
-    hazard: common.hazard,
-    sources: common.sources,
+    ...identityShape,
     species: listOf(linearSpeciesSchema, "species").min(1, { error: "give at least the reference species" }),
   },
   "a linear-molecule file",
@@ -116,3 +117,6 @@ export const linearMoleculeFileSchema = mapping(
 
 export type LinearMoleculeFile = z.infer<typeof linearMoleculeFileSchema>;
 export type LinearSpeciesEntry = LinearMoleculeFile["species"][number];
+
+/** A molecule file of either form; `structure` tells them apart (absent: diatomic). */
+export type MoleculeFile = DiatomicMoleculeFile | LinearMoleculeFile;

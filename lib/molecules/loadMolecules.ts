@@ -1,6 +1,6 @@
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import { basename, join, relative } from "node:path";
-import type { Molecule } from "./buildMolecule.ts";
+import type { Molecule } from "./moleculeIdentity.ts";
 import { parseMoleculeBytes, maxMoleculeFileBytes } from "./parseMoleculeText.ts";
 import { MoleculeFileError, type Problem } from "./problems.ts";
 

@@ -1,16 +1,14 @@
-import { CoreInputError, moleculeValidation } from "../core/index.ts";
-import { linearFitErrors, linearFitProblems, linearFitResultProblems, runLinearFit, withFittedConstants, type LinearFileFit } from "./linearFit.ts";
-import { buildLinearMolecule, linearSemanticProblems } from "./linearMolecule.ts";
+import { CoreInputError } from "../core/index.ts";
+import { linearFitProblems, linearFitResultProblems, runLinearFit, withFittedConstants, type LinearFileFit } from "./linearFit.ts";
+import { buildMolecule } from "./buildMolecule.ts";
+import { linearSemanticProblems } from "./linearMolecule.ts";
 import { linearMoleculeFileSchema, type LinearMoleculeFile } from "./linearSchema.ts";
-import { semanticProblems, type ParseOptions, type ParseResult } from "./parseMoleculeText.ts";
+import { identityProblems } from "./identityChecks.ts";
+import type { ParseOptions, ParseResult } from "./parseResult.ts";
 import type { Problem } from "./problems.ts";
-import type { MoleculeFile } from "./schema.ts";
 
 type Path = ReadonlyArray<string | number>;
 type Locate = (path: Path, message: string) => Problem;
-
-// The diatomic checks that concern a molecule's whole-file shape; the linear form has its own.
-const diatomicOnly = new Set(["electronicState", "atoms", "species"]);
 
 /** Validates and builds a `structure: linear` file; problems are located like the diatomic form's. */
 export function parseLinearMolecule(raw: unknown, file: string, expectedId: string | null, located: Locate, options: ParseOptions = {}): ParseResult {
@@ -32,28 +30,9 @@ export function parseLinearMolecule(raw: unknown, file: string, expectedId: stri
       return { ok: false, problems };
     }
     const { data, fits } = fitted;
-    // Identity fields (id, CAS number, element symbols, hazard, sources) are checked as in the first form.
-    const { structure: _structure, species: _species, ...identity } = data;
-    const shared = semanticProblems({ ...identity, species: [] } as unknown as MoleculeFile, expectedId).filter(
-      (p) => !(p.path.length === 1 && diatomicOnly.has(String(p.path[0]))),
-    );
-    for (const { path, message } of [...shared, ...linearSemanticProblems(data)]) problems.push(located(path, message));
+    for (const { path, message } of [...identityProblems(data, expectedId), ...linearSemanticProblems(data)]) problems.push(located(path, message));
     if (!problems.length) {
-      const molecule = buildLinearMolecule(data, file);
-      for (const fit of fits) {
-        const massNumbers = data.species[fit.speciesIndex].massNumbers.join(",");
-        const model = molecule.species.find((s) => s.model.massNumbers.join(",") === massNumbers)!.model;
-        model.linear!.positionErrors = linearFitErrors(fit, model.linear!);
-        model.constantsOrigin = "fitted";
-      }
-      if (fits.length) {
-        const validations = moleculeValidation(
-          molecule.species.map((s) => s.model),
-          true,
-        );
-        molecule.species.forEach((s, i) => (s.model.validation = validations[i]));
-      }
-      return { ok: true, molecule, data: parsed.data, linearFits: fits };
+      return { ok: true, molecule: buildMolecule(data, file, { linearFits: fits }), data: parsed.data, linearFits: fits };
     }
   }
   problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));

@@ -1,20 +1,18 @@
 import { isMap, isPair, isScalar, LineCounter, parseDocument, type Document } from "yaml";
 import { parseBand, CoreInputError } from "../core/index.ts";
-import { buildMolecule, type Molecule } from "./buildMolecule.ts";
+import { buildMolecule } from "./buildMolecule.ts";
 import { fitResultProblems, referenceSpeciesIndex, runFileFit, type FileFit } from "./fileFit.ts";
+import { identityProblems, sourceChecker, type Found } from "./identityChecks.ts";
 import { isKnownElement, isotope, stableMassNumbers } from "./isotopes.ts";
 import { formatPath, type Problem } from "./problems.ts";
-import { moleculeFileSchema, type MoleculeFile } from "./schema.ts";
+import { diatomicFileSchema, type DiatomicMoleculeFile } from "./schema.ts";
 import { parseLinearMolecule } from "./parseLinearMolecule.ts";
-import type { LinearFileFit } from "./linearFit.ts";
-import type { LinearMoleculeFile } from "./linearSchema.ts";
+import type { ParseOptions, ParseResult } from "./parseResult.ts";
 
 /** Files larger than this are refused before parsing: a molecule file is a few kilobytes. */
 export const maxMoleculeFileBytes = 256 * 1024;
 /** YAML aliases allowed in one file; a handful is plenty, thousands is an expansion attack. */
 export const maxYamlAliases = 20;
-
-export const idPattern = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
 
 type Path = ReadonlyArray<string | number>;
 
@@ -61,25 +59,12 @@ function cmPerNumber(value: unknown): number | null {
   return null;
 }
 
-/** Checks no schema can express: references between fields, physics sanity, identity. */
-export function semanticProblems(file: MoleculeFile, expectedId: string | null): Array<{ path: Path; message: string }> {
-  const out: Array<{ path: Path; message: string }> = [];
+/** Checks of a diatomic file no schema can express: references between fields, physics sanity. */
+export function diatomicProblems(file: DiatomicMoleculeFile): Found[] {
+  const out: Found[] = [];
   const add = (path: Path, message: string) => out.push({ path, message });
-  const sourceKeys = Object.keys(file.sources);
-  const checkSource = (path: Path, key: string) => {
-    if (!sourceKeys.includes(key)) add(path, `source "${key}" is not listed under \`sources\` (known: ${sourceKeys.join(", ") || "none"})`);
-  };
+  const checkSource = sourceChecker(file, add);
 
-  if (!idPattern.test(file.id)) add(["id"], `id "${file.id}" must be lowercase letters, digits and single dashes (no spaces, dots or slashes)`);
-  else if (expectedId !== null && file.id !== expectedId) add(["id"], `id "${file.id}" must match the file name "${expectedId}.yaml"`);
-  if (!/^\d{2,7}-\d{2}-\d$/.test(file.casNumber)) add(["casNumber"], `CAS number "${file.casNumber}" is not of the form 1234-56-7`);
-  else {
-    // CAS check digit: the last digit is Σ (position × digit) mod 10 over the others, counted from the right.
-    const digits = file.casNumber.replace(/-/g, "");
-    const body = digits.slice(0, -1).split("").reverse();
-    const sum = body.reduce((s, d, i) => s + (i + 1) * Number(d), 0);
-    if (sum % 10 !== Number(digits.at(-1))) add(["casNumber"], `CAS number "${file.casNumber}" fails its check digit (expected ${sum % 10} at the end)`);
-  }
   if (!modelledStates.test(file.electronicState.trim())) {
     add(
       ["electronicState"],
@@ -87,20 +72,6 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
     );
   }
   if (file.atoms.length !== 2) add(["atoms"], `expected 2 atoms for a diatomic molecule, got ${file.atoms.length}`);
-  file.atoms.forEach((symbol, i) => {
-    if (!isKnownElement(symbol)) add(["atoms", i], `"${symbol}" is not an element symbol (write it as in the periodic table, e.g. Cl, Br)`);
-  });
-  file.hazard.ghsPictograms.forEach((code, i) => {
-    if (file.hazard.ghsPictograms.indexOf(code) !== i) add(["hazard", "ghsPictograms", i], `${code} is listed twice`);
-  });
-
-  for (const [key, source] of Object.entries(file.sources)) {
-    if (source.url !== undefined && !/^https?:\/\/[^\s<>"']+$/i.test(source.url))
-      add(["sources", key, "url"], `a source address must be an https: or http: link, got "${source.url}"`);
-    if (source.doi !== undefined && !/^10\.\d{4,9}\/[^\s<>"']+$/.test(source.doi))
-      add(["sources", key, "doi"], `a DOI looks like 10.1016/0022-2852(79)90117-0, got "${source.doi}"`);
-  }
-
   const speciesKeys = new Set<string>();
   const checkMassNumbers = (path: Path, numbers: number[]) => {
     if (numbers.length !== file.atoms.length) {
@@ -246,9 +217,6 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
       if (!(entry.bandStrength.temperatureK > 0)) add([...path, "bandStrength", "temperatureK"], "the band strength's temperature must be above 0 K");
     }
   });
-  if (file.broadening) {
-    for (const which of ["self", "air"] as const) checkSource(["broadening", which, "source"], file.broadening[which].source);
-  }
   (file.referenceLines ?? []).forEach((group, i) => {
     const path = ["referenceLines", i];
     checkSource([...path, "source"], group.source);
@@ -264,10 +232,6 @@ export function semanticProblems(file: MoleculeFile, expectedId: string | null):
   return out;
 }
 
-export type ParseResult =
-  | { ok: true; molecule: Molecule; data: MoleculeFile | LinearMoleculeFile; fileFit?: FileFit | null; linearFits?: LinearFileFit[] }
-  | { ok: false; problems: Problem[] };
-
 /**
  * Validates one molecule file's bytes. `file` is the path shown in messages; `expectedId` is the
  * file's base name (null to skip the name check, e.g. for text piped in).
@@ -276,11 +240,6 @@ export function parseMoleculeBytes(bytes: Uint8Array, file: string, expectedId: 
   const decoded = decode(bytes, file);
   if ("problem" in decoded) return { ok: false, problems: [decoded.problem] };
   return parseMoleculeText(decoded.text, file, expectedId, options);
-}
-
-export interface ParseOptions {
-  /** false: run the file's fit but do not compare it with the written result (for `bandatlas fit`). */
-  checkFitResult?: boolean;
 }
 
 export function parseMoleculeText(text: string, file: string, expectedId: string | null, options: ParseOptions = {}): ParseResult {
@@ -333,8 +292,7 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
   };
   const structure = (raw as { structure?: unknown }).structure;
   if (structure === "linear") return parseLinearMolecule(raw, file, expectedId, located, options);
-  if (structure === "diatomic") delete (raw as { structure?: unknown }).structure;
-  else if (structure !== undefined)
+  if (structure !== undefined && structure !== "diatomic")
     return {
       ok: false,
       problems: [
@@ -344,7 +302,7 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
         ),
       ],
     };
-  const parsed = moleculeFileSchema.safeParse(raw);
+  const parsed = diatomicFileSchema.safeParse(raw);
   if (!parsed.success) {
     for (const issue of expandUnions(parsed.error.issues, raw)) {
       const path = issue.path as Path;
@@ -355,7 +313,8 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
     }
     return { ok: false, problems: sortProblems(problems) };
   }
-  for (const { path, message } of [...placeholderProblems(raw, []), ...semanticProblems(parsed.data, expectedId)]) problems.push(located(path, message));
+  for (const { path, message } of [...placeholderProblems(raw, []), ...identityProblems(parsed.data, expectedId), ...diatomicProblems(parsed.data)])
+    problems.push(located(path, message));
   if (problems.length) return { ok: false, problems: sortProblems(problems) };
   // The build and the check re-run every fit, so a file's constants cannot drift from their lines.
   let fileFit: FileFit | null = null;
@@ -370,7 +329,7 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
     for (const { path, message } of fitResultProblems(parsed.data, fileFit)) problems.push(located(path, message));
     if (problems.length) return { ok: false, problems: sortProblems(problems) };
   }
-  return { ok: true, molecule: buildMolecule(parsed.data, file, fileFit), data: parsed.data, fileFit };
+  return { ok: true, molecule: buildMolecule(parsed.data, file, { fileFit }), data: parsed.data, fileFit };
 }
 
 type Issue = { code: string; path: PropertyKey[]; message: string; keys?: string[]; errors?: Issue[][] };

@@ -236,41 +236,56 @@ export const referenceLineSchema = mapping(
   "a reference line",
 );
 
-export const moleculeFileSchema = mapping(
+/** The parts every form of molecule file shares: identity, hazard note, sources, broadening. */
+export const identityShape = {
+  id: text("the molecule id"),
+  name: text("the molecule's name"),
+  formula: text("the formula"),
+  casNumber: text("the CAS registry number"),
+  aliases: listOf(text("an alias"), "other names").default([]),
+  limitations: listOf(text("a known limitation of these constants"), "known limitations").default([]),
+  electronicState: text('the electronic state, e.g. "X 1Σ+"'),
+  atoms: listOf(text("an element symbol"), "element symbols"),
+  hazard: mapping(
+    {
+      ghsPictograms: listOf(
+        z
+          .string({ error: (i) => `expected a GHS pictogram code like GHS06, got ${describeInput(i.input)}` })
+          .regex(/^GHS0[1-9]$/, { error: "expected a GHS pictogram code GHS01 to GHS09" }),
+        "GHS pictogram codes",
+      ),
+      sentences: listOf(text("a hazard sentence"), "hazard sentences").min(1, { error: "give at least one plain hazard sentence" }),
+    },
+    "the hazard note",
+  ),
+  sources: z.record(z.string().regex(/^[A-Za-z][A-Za-z0-9_-]{0,40}$/, { error: "a source key is a short word of letters, digits, - or _" }), sourceSchema, {
+    error: (issue) => `expected the sources as a mapping of key: { citation, url, doi }, got ${describeInput(issue.input)}`,
+  }),
+  broadening: broadeningSchema.optional(),
+};
+
+/** A group of measured lines of one band (`"0-0"` for pure rotation) of one species. */
+export const referenceLineGroupSchema = mapping(
+  { source: sourceKey, massNumbers, band: bandText, lines: listOf(referenceLineSchema, "reference lines").min(1) },
+  "a group of reference lines",
+);
+
+/**
+ * The first form of molecule file, a ¹Σ⁺ diatomic (`structure: diatomic`, the default). The other
+ * form, `structure: linear`, is in linearSchema.ts; both share `identityShape`.
+ */
+export const diatomicFileSchema = mapping(
   {
-    id: text("the molecule id"),
-    name: text("the molecule's name"),
-    formula: text("the formula"),
-    casNumber: text("the CAS registry number"),
-    aliases: listOf(text("an alias"), "other names").default([]),
-    limitations: listOf(text("a known limitation of these constants"), "known limitations").default([]),
-    electronicState: text('the electronic state, e.g. "X 1Σ+"'),
-    atoms: listOf(text("an element symbol"), "element symbols"),
-    hazard: mapping(
-      {
-        ghsPictograms: listOf(
-          z
-            .string({ error: (i) => `expected a GHS pictogram code like GHS06, got ${describeInput(i.input)}` })
-            .regex(/^GHS0[1-9]$/, { error: "expected a GHS pictogram code GHS01 to GHS09" }),
-          "GHS pictogram codes",
-        ),
-        sentences: listOf(text("a hazard sentence"), "hazard sentences").min(1, { error: "give at least one plain hazard sentence" }),
-      },
-      "the hazard note",
-    ),
-    sources: z.record(z.string().regex(/^[A-Za-z][A-Za-z0-9_-]{0,40}$/, { error: "a source key is a short word of letters, digits, - or _" }), sourceSchema, {
-      error: (issue) => `expected the sources as a mapping of key: { citation, url, doi }, got ${describeInput(issue.input)}`,
-    }),
+    structure: z.literal("diatomic", { error: () => "structure is diatomic (the default) or linear" }).optional(),
+    ...identityShape,
     species: listOf(speciesSchema, "species").min(1, { error: "give at least the reference species" }),
     intensity: listOf(intensitySchema, "intensity entries").optional(),
-    broadening: broadeningSchema.optional(),
-    referenceLines: listOf(
-      mapping({ source: sourceKey, massNumbers, band: bandText, lines: listOf(referenceLineSchema, "reference lines").min(1) }, "a group of reference lines"),
-      "groups of reference lines",
-    ).optional(),
+    referenceLines: listOf(referenceLineGroupSchema, "groups of reference lines").optional(),
   },
   "a molecule file",
 );
 
-export type MoleculeFile = z.infer<typeof moleculeFileSchema>;
+export type DiatomicMoleculeFile = z.infer<typeof diatomicFileSchema>;
+/** The fields every form of file has (see `identityShape`). */
+export type IdentityFields = Pick<DiatomicMoleculeFile, keyof typeof identityShape>;
 export type Measured = number | { value: number; uncertainty: number };

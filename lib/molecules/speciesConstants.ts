@@ -15,9 +15,9 @@ import {
 } from "../core/index.ts";
 import { dunhamFromBlock, type GivenConstant } from "./givenConstants.ts";
 import type { FileFit, SpeciesMasses } from "./fileFit.ts";
-import type { MoleculeFile } from "./schema.ts";
+import type { DiatomicMoleculeFile } from "./schema.ts";
 
-type ConstantsBlock = NonNullable<MoleculeFile["species"][number]["constants"]>;
+type ConstantsBlock = NonNullable<DiatomicMoleculeFile["species"][number]["constants"]>;
 type MassIndependent = NonNullable<ConstantsBlock["massIndependent"]>;
 
 export interface SpeciesConstants {
@@ -60,8 +60,8 @@ export function dunhamFromMassIndependent(set: MassIndependent, atoms: readonly 
  * A cross-check set from a second source adds their difference as one more component.
  */
 export function speciesConstants(
-  file: MoleculeFile,
-  entry: MoleculeFile["species"][number],
+  file: DiatomicMoleculeFile,
+  entry: DiatomicMoleculeFile["species"][number],
   masses: SpeciesMasses,
   referenceBlock: ConstantsBlock,
   fileFit: FileFit | null,

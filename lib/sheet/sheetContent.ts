@@ -179,8 +179,8 @@ function otherBandsNoteOf(entry: AtlasEntry): string | null {
 
 /** The model in words, as the core computes it for this kind of species. */
 function termModel(model: SpeciesModel): string {
+  if (model.structure !== "linear") return "Dunham expansion of the term values E(v, J) in (v + ½) and J(J + 1); ¹Σ⁺–¹Σ⁺ selection rule ΔJ\u00a0=\u00a0±1";
   const linear = model.linear;
-  if (!linear) return "Dunham expansion of the term values E(v, J) in (v + ½) and J(J + 1); ¹Σ⁺–¹Σ⁺ selection rule ΔJ\u00a0=\u00a0±1";
   const spin = linear.nuclearSpinWeights
     ? `; nuclear-spin weights even J : odd J = ${linear.nuclearSpinWeights.evenJ} : ${linear.nuclearSpinWeights.oddJ} in Σg⁺ states (swapped in Σu⁺)`
     : "";

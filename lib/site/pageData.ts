@@ -65,7 +65,7 @@ export function moleculeView(molecule: Molecule, hasBench = false) {
       isReference: species.isReference,
       abundance: significant(species.model.abundance, 4),
       // A linear species has no reduced mass (it belongs to a diatomic): shown as a dash.
-      reducedMassU: Number.isFinite(species.model.reducedMassU) ? fixed(species.model.reducedMassU, 6) : "—",
+      reducedMassU: species.model.structure === "diatomic" ? fixed(species.model.reducedMassU, 6) : "—",
       constantsNote: constantsNote(molecule, species),
       constantsSource: citationOf(molecule, species.model.constantsSourceKey),
       given: species.given

@@ -10,7 +10,7 @@ import {
   type FileFit,
   type LinearFileFit,
   type LinearMoleculeFile,
-  type MoleculeFile,
+  type DiatomicMoleculeFile,
 } from "../../molecules/index.ts";
 import { SheetInputError, writeFileAtomic } from "../../sheet/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
@@ -35,7 +35,7 @@ function filePath(dir: string, name: string): string {
   return name.endsWith(".yaml") ? name : join(dir, `${name.toLowerCase()}.yaml`);
 }
 
-export function dunhamFitReport(file: MoleculeFile, fileName: string, fileFit: FileFit): FitReport {
+export function dunhamFitReport(file: DiatomicMoleculeFile, fileName: string, fileFit: FileFit): FitReport {
   const { fit, observations, names } = fileFit;
   const support = termSupport(observations, fit);
   const heldOut = fit.residuals.filter((r) => r.observation.heldOut);
@@ -139,7 +139,7 @@ export function runFit(args: string[]): { output: string; exitCode: number } {
   const reports: Array<{ report: FitReport; resultPath: Array<string | number> }> = [];
   if (parsed.fileFit)
     reports.push({
-      report: dunhamFitReport(parsed.data as MoleculeFile, path, parsed.fileFit),
+      report: dunhamFitReport(parsed.data as DiatomicMoleculeFile, path, parsed.fileFit),
       resultPath: ["species", parsed.fileFit.referenceIndex, "constants", "fit"],
     });
   for (const fit of parsed.linearFits ?? [])

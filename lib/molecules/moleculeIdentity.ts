@@ -1,0 +1,67 @@
+import type { GasBroadening, SpeciesModel } from "../core/index.ts";
+import type { GivenConstant } from "./givenConstants.ts";
+import type { IdentityFields } from "./schema.ts";
+
+export interface Source {
+  key: string;
+  citation: string;
+  url: string | null;
+  doi: string | null;
+}
+
+export interface SpeciesInfo {
+  model: SpeciesModel;
+  spellings: string[];
+  isReference: boolean;
+  given: { sourceKey: string; form: "equilibrium" | "dunham" | "mass-independent" | "fit" | "states"; values: GivenConstant[] } | null;
+}
+
+export interface Molecule {
+  id: string;
+  file: string;
+  name: string;
+  formula: string;
+  casNumber: string;
+  aliases: string[];
+  /** Known shortcomings of the cited constants, shown beside every prediction of this molecule. */
+  limitations: string[];
+  electronicState: string;
+  atoms: string[];
+  hazard: { ghsPictograms: string[]; sentences: string[] };
+  sources: Source[];
+  /** Reference species first, then the others in file order. */
+  species: SpeciesInfo[];
+  /** "linear": a linear polyatomic molecule whose species carry states and bands (model.linear). */
+  structure: "diatomic" | "linear";
+  /** Cited self and air broadening from the file; absent or null: none given (spectra use a flagged typical value). */
+  broadening?: GasBroadening | null;
+}
+
+type IdentityKeys = "id" | "file" | "name" | "formula" | "casNumber" | "aliases" | "limitations" | "electronicState" | "atoms" | "hazard" | "sources";
+
+/** The fields every form of molecule file shares: identity, hazard note and sources. */
+export function moleculeIdentity(file: IdentityFields, fileName: string): Pick<Molecule, IdentityKeys> {
+  return {
+    id: file.id,
+    file: fileName,
+    name: file.name,
+    formula: file.formula,
+    casNumber: file.casNumber,
+    aliases: file.aliases,
+    limitations: file.limitations,
+    electronicState: file.electronicState,
+    atoms: file.atoms,
+    hazard: file.hazard,
+    sources: Object.entries(file.sources).map(([key, s]) => ({ key, citation: s.citation, url: s.url ?? null, doi: s.doi ?? null })),
+  };
+}
+
+/** Cited self and air broadening of a file, J-dependent tables in increasing |m|. */
+export function gasBroadening(block: NonNullable<IdentityFields["broadening"]>): GasBroadening {
+  return { self: broadeningOf(block.self), air: broadeningOf(block.air) };
+}
+
+function broadeningOf(block: NonNullable<IdentityFields["broadening"]>["self"]): GasBroadening["self"] {
+  const table = block.byAbsM ? [...block.byAbsM].sort((a, b) => a.absM - b.absM) : null;
+  return { hwhmCmPerAtm: block.hwhmCmPerAtm, byAbsM: table, temperatureExponent: block.temperatureExponent, sourceKey: block.source, origin: "cited" };
+}
