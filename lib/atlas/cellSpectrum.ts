@@ -3,16 +3,12 @@ import {
   bandLabel,
   bandLines,
   broadeningIsTypical,
-  calibrationLines,
   cellSpectrum,
-  defaultCalibrationCriteria,
   scaleTransitionDipoleToIsotopologue,
   speciesPartitionFunction,
   typicalBroadening,
   type AbsorbingLine,
   type Band,
-  type CalibrationCriteria,
-  type CalibrationLine,
   type CellConditions,
   type CellSpectrum,
   type GasBroadening,
@@ -185,84 +181,4 @@ export function moleculeCellSpectrum(
     stepCm: settings.stepCm,
   });
   return { set, spectrum };
-}
-
-/** The range worth computing for calibration lines: the strong lines of the gas, plus a margin. */
-export function calibrationRange(
-  set: CellLineSet,
-  resolutionCm: number,
-  criteria: CalibrationCriteria = defaultCalibrationCriteria,
-): { fromCm: number; toCm: number } {
-  let strongest = 0;
-  for (const l of set.lines) if (l.intensity > strongest) strongest = l.intensity;
-  const strong = set.lines.filter((l) => l.intensity >= criteria.strongFraction * strongest).map((l) => l.wavenumber);
-  const margin = Math.max(5 * resolutionCm, 2);
-  return { fromCm: Math.max(1, Math.min(...strong) - margin), toCm: Math.max(...strong) + margin };
-}
-
-export interface MoleculeCalibrationLines extends MoleculeCellSpectrum {
-  resolutionCm: number;
-  criteria: CalibrationCriteria;
-  lines: CalibrationLine[];
-}
-
-export function moleculeCalibrationLines(
-  molecule: Molecule,
-  settings: Omit<CellSpectrumSettings, "fromCm" | "toCm"> & { fromCm?: number; toCm?: number },
-  criteria: CalibrationCriteria = defaultCalibrationCriteria,
-  set: CellLineSet = cellLineSet(molecule, settings.conditions),
-): MoleculeCalibrationLines {
-  if (settings.instrument.kind === "monochromatic") throw new Error("calibration lines need an instrument resolution");
-  const resolutionCm = settings.instrument.resolutionCm;
-  const range = calibrationRange(set, resolutionCm, criteria);
-  const full = { ...settings, fromCm: settings.fromCm ?? range.fromCm, toCm: settings.toCm ?? range.toCm };
-  const { spectrum } = moleculeCellSpectrum(molecule, full, set);
-  return { set, spectrum, resolutionCm, criteria, lines: calibrationLines(set.lines, spectrum, resolutionCm, criteria) };
-}
-
-/** Plain data for species pages and sheets: calibration-grade lines at the default resolutions. */
-export interface CalibrationMarks {
-  moleculeId: string;
-  conditions: CellConditions;
-  apodization: typeof calibrationApodization;
-  criteria: CalibrationCriteria;
-  intensityScale: IntensityScale;
-  broadeningTypical: boolean;
-  notes: string[];
-  byResolution: Array<{
-    resolutionCm: number;
-    lines: Array<{ species: string; band: string; label: string; wavenumber: number; relativeToStrongest: number; peakShiftCm: number | null }>;
-  }>;
-}
-
-export function calibrationMarks(molecule: Molecule, conditions: CellConditions = defaultCellConditions): CalibrationMarks {
-  const byResolution: CalibrationMarks["byResolution"] = [];
-  let last: MoleculeCalibrationLines | null = null;
-  // The cell's lines depend on the conditions only: made once for all resolutions.
-  const set = cellLineSet(molecule, conditions);
-  for (const resolutionCm of calibrationResolutionsCm) {
-    const settings = { conditions, instrument: { kind: "fourier-transform" as const, resolutionCm, apodization: calibrationApodization } };
-    last = moleculeCalibrationLines(molecule, settings, defaultCalibrationCriteria, set);
-    byResolution.push({
-      resolutionCm,
-      lines: last.lines.map((l) => ({
-        species: l.species,
-        band: l.band,
-        label: l.label,
-        wavenumber: l.wavenumber,
-        relativeToStrongest: l.relativeToStrongest,
-        peakShiftCm: l.peakShiftCm,
-      })),
-    });
-  }
-  return {
-    moleculeId: molecule.id,
-    conditions,
-    apodization: calibrationApodization,
-    criteria: defaultCalibrationCriteria,
-    intensityScale: last!.set.intensityScale,
-    broadeningTypical: last!.set.broadeningTypical,
-    notes: last!.set.notes,
-    byResolution,
-  };
 }

@@ -5,3 +5,4 @@ export * from "./atlasLines.ts";
 export * from "./moleculeBands.ts";
 export * from "./cellSpectrum.ts";
 export * from "./cellUnits.ts";
+export * from "./calibrationMarks.ts";

@@ -13,3 +13,4 @@ export * from "./identityChecks.ts";
 export type { ParseOptions, ParseResult } from "./parseResult.ts";
 export type { MoleculeFile } from "./linearSchema.ts";
 export * from "./moleculeIdentity.ts";
+export * from "./diatomicChecks.ts";

@@ -1,7 +1,7 @@
 import { CoreInputError } from "../core/index.ts";
 import { linearFitProblems, linearFitResultProblems, runLinearFit, withFittedConstants, type LinearFileFit } from "./linearFit.ts";
 import { buildMolecule } from "./buildMolecule.ts";
-import { linearSemanticProblems } from "./linearMolecule.ts";
+import { linearSemanticProblems } from "./linearChecks.ts";
 import { linearMoleculeFileSchema, type LinearMoleculeFile } from "./linearSchema.ts";
 import { identityProblems } from "./identityChecks.ts";
 import type { ParseOptions, ParseResult } from "./parseResult.ts";

@@ -1,14 +1,16 @@
-import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
+import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
-import { accuracyText, intensityOriginWords, calibrationByLine, calibrationCellText, positionStatusWords, calibrationConditionsText, calibrationCriteriaText, calibrationLineKey, fixed, resolutionsText, significant, type LineCalibration } from "../format/index.ts";
+import { calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
 import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
-import { bandLabel, standardAtmospherePa } from "../core/index.ts";
+import { standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { describeBuild, type BuildIdentity } from "../shared/buildIdentity.ts";
-import { pageLineCells, signedSignificant, speciesDisplay } from "./formatCells.ts";
+import { accuracyRows, citationOf } from "./accuracyRows.ts";
+import { bandView } from "./bandView.ts";
+import { speciesDisplay } from "./formatCells.ts";
 import { ghsPictogramName } from "../shared/ghsPictograms.ts";
 import { nearInfraredLimitNm, nearInfraredRows } from "./nearInfraredIndex.ts";
-import { benchModelPath, benchPagePath, downloadPath, lineRowId, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
+import { benchModelPath, benchPagePath, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 
 /** Plots of one entry, rendered beforehand (lib/plot) and inlined by the template. */
 export interface EntryPlots {
@@ -30,11 +32,6 @@ function hazardView(molecule: Molecule): HazardView {
     sentences: molecule.hazard.sentences,
     limitations: molecule.limitations,
   };
-}
-
-function citationOf(molecule: Molecule, key: string) {
-  const source = molecule.sources.find((s) => s.key === key);
-  return { key, citation: source?.citation ?? key, url: source?.url ?? null, doi: source?.doi ?? null };
 }
 
 function constantsNote(molecule: Molecule, species: SpeciesInfo): string {
@@ -90,66 +87,6 @@ export function moleculeView(molecule: Molecule, hasBench = false) {
   };
 }
 
-
-const bandTitles: Record<AtlasBand["kind"], string> = { fundamental: "fundamental", hot: "hot band", overtone: "overtone", combination: "combination band" };
-
-function intensityNote(band: AtlasBand): string {
-  const origin = band.lines.intensityOrigin;
-  if (origin === null) return "No absolute intensities: the molecule file cites no band strength or transition dipole for this band.";
-  return `Absolute intensities ${intensityOriginWords[origin]}, per molecule of the gas at natural isotopic abundance.`;
-}
-
-function truncationNote(band: AtlasBand): string {
-  const why = { intensity: "weaker lines fall below 10⁻⁴ of the strongest", "constants-turn-over": "the constants stop being valid (the rotational levels turn over)", "j-limit": "the program's J limit is reached" }[band.lines.truncatedBy];
-  return `Lines up to J'' = ${band.lines.jLowerMax}; the list stops there because ${why}.`;
-}
-
-export function bandView(entry: AtlasEntry, band: AtlasBand, calibration?: Map<string, LineCalibration[]>) {
-  const residualByLabel = new Map<string, number>();
-  for (const r of entry.residuals) {
-    if (r.predictedMinusMeasured === null) continue;
-    if (bandLabel(r.reference.band) !== band.label) continue;
-    residualByLabel.set(r.reference.label, r.predictedMinusMeasured);
-  }
-  const calibrationOf = (label: string) => {
-    const list = calibration?.get(calibrationLineKey(entry.species, band.label, label));
-    return list ? calibrationCellText(list) : null;
-  };
-  const rows = band.lines.lines.map((line) => {
-    const residual = residualByLabel.get(line.label);
-    return {
-      id: lineRowId(band.label, line.label),
-      label: line.label,
-      branch: line.branch,
-      ...pageLineCells(line),
-      position: positionStatusWords[line.positionStatus],
-      // The table shows measured − predicted (the atlas stores predicted − measured).
-      measuredMinusPredicted: residual === undefined ? null : signedSignificant(-residual, 2),
-      calibration: calibrationOf(line.label),
-    };
-  });
-  return {
-    label: band.label,
-    kind: band.kind,
-    title: `${band.label}${band.name !== band.label ? ` (${band.name})` : ""} ${bandTitles[band.kind]}`,
-    anchor: `band-${band.label}`,
-    bandOrigin: fixed(band.lines.bandOrigin, 4),
-    lineCount: band.lines.lines.length,
-    strength: band.kind === "fundamental" || band.strengthRelativeToFundamental === null ? null : significant(band.strengthRelativeToFundamental, 2),
-    shownWithFundamental: band.shownWithFundamental,
-    intensityNote: intensityNote(band),
-    accuracy: accuracyText(band.lines.accuracy),
-    accuracyStatus: band.lines.accuracy.status,
-    truncationNote: truncationNote(band),
-    hasResiduals: residualByLabel.size > 0,
-    downloads: {
-      csv: downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"),
-      json: downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"),
-    },
-    hasCalibration: rows.some((r) => r.calibration !== null),
-    rows,
-  };
-}
 
 /** What the build computed once per molecule for the bench page and the calibration marks. */
 export interface BenchInput {
@@ -249,46 +186,6 @@ export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: En
 
 export type SpeciesPageView = ReturnType<typeof speciesPageView>;
 
-/**
- * The method page's accuracy table: every band the atlas builds, of every species, with its status
- * and the residuals against cited measured lines; pure-rotation checks get rows of their own.
- */
-export function accuracyRows(molecules: Molecule[], entries: AtlasEntry[]) {
-  const rows = [];
-  for (const molecule of molecules) {
-    // Positions and their checks do not depend on temperature: the default-temperature entry is enough.
-    for (const entry of entries.filter((e) => e.moleculeId === molecule.id && e.temperatureK === defaultTemperatureK)) {
-      const species = molecule.species.find((s) => s.model.label === entry.species)!;
-      const path = speciesPagePath(molecule.id, entry.species, defaultTemperatureK);
-      const row = (band: string, accuracy: AtlasBand["lines"]["accuracy"], anchor: string | null, printed: number[]) => {
-        const c = accuracy.check;
-        return {
-          printedUncertainty: printed.length ? `${significant(Math.min(...printed), 2)} – ${significant(Math.max(...printed), 2)}` : "—",
-          moleculeName: molecule.name,
-          formula: molecule.formula,
-          species: entry.species,
-          speciesText: speciesDisplay(entry.species),
-          band,
-          path,
-          anchor,
-          status: positionStatusWords[accuracy.status === "validated" ? "validated" : accuracy.status],
-          lines: c ? `${c.lineCount}${c.heldOutCount ? ` (${c.heldOutCount} held out)` : ""}` : "—",
-          range: c ? (c.absMMin === c.absMMax ? String(c.absMMin) : `${c.absMMin}–${c.absMMax}`) : "—",
-          largest: c ? significant(c.maxAbsResidualCm, 2) : "—",
-          rms: c ? significant(c.rmsResidualCm, 2) : "—",
-          sources: c ? c.sourceKeys.map((key) => citationOf(molecule, key)) : [],
-        };
-      };
-      for (const band of entry.bands) rows.push(row(band.label, band.lines.accuracy, `band-${band.label}`, band.lines.lines.map((l) => l.wavenumberUncertainty)));
-      for (const check of species.model.validation?.checks ?? []) {
-        if (check.band.vUpper !== check.band.vLower) continue;
-        rows.push(row(`${bandLabel(check.band)} (pure rotation)`, { status: "validated", check, floor: check.envelope }, null, []));
-      }
-    }
-  }
-  return rows;
-}
-
 export interface SiteDataInput {
   molecules: Molecule[];
   entries: AtlasEntry[];
@@ -301,6 +198,7 @@ export interface SiteDataInput {
   /** Per molecule id: calibration marks and bench-page defaults, computed once by the build. */
   bench?: Map<string, BenchInput>;
 }
+
 
 /** Everything the templates read, as one global data object. */
 export function siteData(input: SiteDataInput) {
@@ -326,3 +224,6 @@ export function siteData(input: SiteDataInput) {
 }
 
 export type SiteData = ReturnType<typeof siteData>;
+
+export { accuracyRows };
+export { bandView };
