@@ -6,3 +6,4 @@ export * from "./spectrumCells.ts";
 export * from "./calibrationText.ts";
 export * from "./accuracyText.ts";
 export * from "./fitReport.ts";
+export * from "./cautions.ts";

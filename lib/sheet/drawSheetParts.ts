@@ -1,3 +1,4 @@
+import { continuationCaution } from "../format/index.ts";
 import { ghsPictogramText } from "../shared/ghsPictograms.ts";
 import type { SheetContent } from "./sheetContent.ts";
 import { ink, rule, sheetFonts, softInk } from "./sheetStyle.ts";
@@ -81,7 +82,7 @@ export function drawContinuationHeader(doc: Doc, content: SheetContent, x: numbe
   const h = doc.heightOfString(line, { width });
   doc.text(line, x, y, { width });
   y += h + 4;
-  const caution = `⚠ ${content.caution.pictograms.join(" ") || "hazard"}: see the hazard caution on page 1. Follow the supplier's safety data sheet, local codes and your lab's safety officer.`;
+  const caution = continuationCaution(content.caution.pictograms);
   doc.font(sheetFonts.bold).fontSize(8.5);
   const hc = doc.heightOfString(caution, { width: width - 10 });
   doc

@@ -2,6 +2,7 @@ import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts"
 import { sameBand, type Band, type BandLines, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
 import {
   accuracyText,
+  sheetCautionDeferral,
   calibrationConditionsText,
   intensityOriginWords,
   criteriaPhrase,
@@ -108,8 +109,7 @@ function calibrationMarksNote(marks: CalibrationMarks, entry: AtlasEntry, band: 
   );
 }
 
-export const cautionDeferral =
-  "This sheet predicts a spectrum; it is not a safety document. Before handling the gas follow the supplier's safety data sheet, local codes and your lab's safety officer.";
+export const cautionDeferral = sheetCautionDeferral;
 
 function cellOf(line: Line): SheetLineCell {
   const c = lineCells(line);

@@ -1,6 +1,6 @@
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
-import { calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
+import { allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
 import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
 import { standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
@@ -204,6 +204,7 @@ export interface SiteDataInput {
 export function siteData(input: SiteDataInput) {
   const byId = new Map(input.molecules.map((m) => [m.id, m]));
   return {
+    cautions: { hazardSummaryDeferral, allGasesCaution, predictionNotice },
     build: { ...input.build, text: describeBuild(input.build) },
     molecules: input.molecules.map((m) => moleculeView(m, input.bench?.has(m.id) ?? false)),
     // Species pages are the bulk of the site: their views are made per batch of pages as

@@ -1,6 +1,6 @@
 import { defaultCalibrationCriteria, type CalibrationCriteria } from "../../core/index.ts";
 import { moleculeCalibrationLines } from "../../atlas/index.ts";
-import { calibrationWavenumberDigits, criteriaPhrase, csvRow, numeric, peakShiftDigits, significant, textTable } from "../../format/index.ts";
+import { calibrationWavenumberDigits, criteriaPhrase, csvRow, moleculeCaution, numeric, peakShiftDigits, significant, textTable } from "../../format/index.ts";
 import {
   cellConditionsFromOptions,
   cellOptionSpec,
@@ -13,7 +13,6 @@ import {
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine } from "../options.ts";
 import { UsageError } from "../usageError.ts";
-import { cautionFor } from "./spectrum.ts";
 
 export const calibrationLinesHelp = `bandatlas calibration-lines <molecule> --resolution <cm⁻¹> [options]
 
@@ -71,7 +70,7 @@ export function runCalibrationLines(args: string[]): string {
           intensityScale: result.set.intensityScale,
           broadeningTypical: result.set.broadeningTypical,
           notes: result.set.notes,
-          caution: cautionFor(molecule),
+          caution: moleculeCaution(molecule),
           lines: result.lines.map((l) => ({
             species: l.species,
             band: l.band,
@@ -123,7 +122,7 @@ export function runCalibrationLines(args: string[]): string {
     criteriaText,
     basis,
     ...result.set.notes,
-    `CAUTION — ${cautionFor(molecule)}`,
+    `CAUTION — ${moleculeCaution(molecule)}`,
     "",
   ];
   if (result.lines.length === 0) return header.join("\n") + "no line meets all three criteria at this resolution.\n";

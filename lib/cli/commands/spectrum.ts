@@ -1,6 +1,14 @@
 import { moleculeCellSpectrum } from "../../atlas/index.ts";
-import { csvRow, numeric, opticalDepthDigits, spectrumWavenumberDigits, transmittanceDigits } from "../../format/index.ts";
-import type { Molecule } from "../../molecules/index.ts";
+import {
+  allGasesCaution,
+  csvRow,
+  moleculeCaution,
+  numeric,
+  opticalDepthDigits,
+  predictionNotice,
+  spectrumWavenumberDigits,
+  transmittanceDigits,
+} from "../../format/index.ts";
 import {
   cellConditionsFromOptions,
   cellOptionSpec,
@@ -25,12 +33,8 @@ ${cellOptionsHelp}
                           optically thin apparent absorbance instead of refusing
   --format csv|json       CSV with units in the header (default), or JSON with the settings
 
-Predictions, not measurements. The gas is hazardous: follow the supplier's safety data sheet,
-local codes and your laboratory safety officer.`;
-
-export function cautionFor(molecule: Molecule): string {
-  return `${molecule.name}: ${molecule.hazard.sentences.join(" ")} Follow the supplier's safety data sheet, local codes and your laboratory safety officer; these numbers are predictions, not certified values.`;
-}
+${predictionNotice}
+${allGasesCaution}`;
 
 export function runSpectrum(args: string[]): string {
   const { values, positionals } = parseCommandLine(
@@ -75,7 +79,7 @@ export function runSpectrum(args: string[]): string {
             intensityScale: set.intensityScale,
             settings: describeConditions(conditions, instrument),
             notes: set.notes,
-            caution: cautionFor(molecule),
+            caution: moleculeCaution(molecule),
             samples: indices.map((i) => ({ wavenumber: Number(spectrumWavenumberDigits(nu(i))), relativeAbsorbance: Number(transmittanceDigits(rel(i))) })),
           },
           null,
@@ -106,7 +110,7 @@ export function runSpectrum(args: string[]): string {
           bandsLeftOut: set.bandsLeftOut,
           broadeningTypical: set.broadeningTypical,
           notes: set.notes,
-          caution: cautionFor(molecule),
+          caution: moleculeCaution(molecule),
           samples: indices.map((i) => ({
             wavenumber: Number(spectrumWavenumberDigits(nu(i))),
             transmittance: Number(transmittanceDigits(observed[i])),
