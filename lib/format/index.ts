@@ -7,3 +7,4 @@ export * from "./calibrationText.ts";
 export * from "./accuracyText.ts";
 export * from "./fitReport.ts";
 export * from "./cautions.ts";
+export * from "./lineColumns.ts";

@@ -1,7 +1,7 @@
 import { bandLabel, type BandLines, type Line } from "../core/index.ts";
 import { accuracyRecord, accuracyText } from "./accuracyText.ts";
 import { csvRow, numeric } from "./csv.ts";
-import { fixed, significant } from "./numbers.ts";
+import { csvLineColumns, lineColumns } from "./lineColumns.ts";
 
 /** The JSON contract of `bandatlas lines --format json`, shared by the CLI and the site's downloads. */
 export interface LinesDocument {
@@ -45,53 +45,16 @@ export function linesDocument(moleculeId: string, result: BandLines, limitations
     partitionFunction: result.partitionFunction,
     accuracy: accuracyRecord(result.accuracy),
     limitations: [...limitations],
-    lines: result.lines.map((l) => ({
-      label: l.label,
-      branch: l.branch,
-      jLower: l.jLower,
-      jUpper: l.jUpper,
-      wavenumber: l.wavenumber,
-      wavenumberUncertainty: l.wavenumberUncertainty,
-      wavelengthVacuumUm: l.wavelengthVacuumUm,
-      wavelengthAirNm: l.wavelengthAirNm,
-      lowerStateEnergy: l.lowerStateEnergy,
-      relativeIntensity: l.relativeIntensity,
-      lineIntensity: l.lineIntensity,
-      populationFraction: l.populationFraction,
-      positionStatus: l.positionStatus,
-    })),
+    lines: result.lines.map((l) => Object.fromEntries(csvLineColumns.map((c) => [c.key, l[c.key]])) as LinesDocument["lines"][number]),
   };
 }
 
 /** Column headings with their units, ASCII so every spreadsheet reads them. */
-export const linesCsvHeader = [
-  "label",
-  "branch",
-  "jLower",
-  "jUpper",
-  "wavenumber (cm-1)",
-  "wavenumberUncertainty (cm-1)",
-  "wavelengthVacuum (um)",
-  "wavelengthAir (nm)",
-  "lowerStateEnergy (cm-1)",
-  "relativeIntensity",
-  "lineIntensity (cm/molecule)",
-  "populationFraction",
-  "positionStatus",
-];
+export const linesCsvHeader = csvLineColumns.map((c) => c.csv);
 
-/** The printed digits of each line, the same in CSV, table, page and sheet. */
-export function lineCells(l: Line) {
-  return {
-    wavenumber: fixed(l.wavenumber, 4),
-    wavenumberUncertainty: significant(l.wavenumberUncertainty, 2),
-    wavelengthVacuumUm: fixed(l.wavelengthVacuumUm, 6),
-    wavelengthAirNm: fixed(l.wavelengthAirNm, 3),
-    lowerStateEnergy: fixed(l.lowerStateEnergy, 3),
-    relativeIntensity: significant(l.relativeIntensity, 4),
-    lineIntensity: significant(l.lineIntensity, 4),
-    populationFraction: significant(l.populationFraction, 4),
-  };
+/** The printed digits of each line, the same in CSV, table, page and sheet (from lineColumns). */
+export function lineCells(l: Line): Record<keyof Line & string, string> {
+  return Object.fromEntries(lineColumns.map((c) => [c.key, c.cell(l)])) as Record<keyof Line & string, string>;
 }
 
 /**
@@ -103,25 +66,6 @@ export function lineCells(l: Line) {
 export function linesCsv(result: BandLines, limitations: readonly string[] = []): string {
   const comments = [`# accuracy: ${accuracyText(result.accuracy)}`, ...limitations.map((l) => `# known limitation: ${l}`)];
   const rows = [...comments.map((c) => c.replace(/,/g, ";").replace(/["\r\n]+/g, " ")), csvRow(linesCsvHeader)];
-  for (const l of result.lines) {
-    const c = lineCells(l);
-    rows.push(
-      csvRow([
-        l.label,
-        l.branch,
-        l.jLower,
-        l.jUpper,
-        numeric(c.wavenumber),
-        numeric(c.wavenumberUncertainty),
-        numeric(c.wavelengthVacuumUm),
-        numeric(c.wavelengthAirNm),
-        numeric(c.lowerStateEnergy),
-        numeric(c.relativeIntensity),
-        numeric(c.lineIntensity),
-        numeric(c.populationFraction),
-        l.positionStatus,
-      ]),
-    );
-  }
+  for (const l of result.lines) rows.push(csvRow(csvLineColumns.map((c) => (c.numeric ? numeric(c.cell(l)) : c.cell(l)))));
   return rows.join("\n") + "\n";
 }

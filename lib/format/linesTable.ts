@@ -1,6 +1,6 @@
 import { bandLabel, type BandLines } from "../core/index.ts";
-import { accuracyText, positionStatusWords } from "./accuracyText.ts";
-import { lineCells } from "./lineRecords.ts";
+import { accuracyText } from "./accuracyText.ts";
+import { lineColumns } from "./lineColumns.ts";
 import { significant } from "./numbers.ts";
 
 /** How a band's transition dipole was obtained, in words for the table header. */
@@ -44,21 +44,17 @@ export function linesTable(result: BandLines, context: LinesTableContext): strin
     ...(context.limitations ?? []).map((l) => `KNOWN LIMITATION: ${l}`),
     "",
   ];
-  const rows = result.lines.map((l) => {
-    const c = lineCells(l);
-    return [
-      l.label,
-      c.wavenumber,
-      c.wavenumberUncertainty,
-      positionStatusWords[l.positionStatus],
-      c.wavelengthVacuumUm,
-      c.wavelengthAirNm,
-      c.lowerStateEnergy,
-      c.relativeIntensity,
-      c.lineIntensity || "—",
-      c.populationFraction,
-    ];
-  });
-  const headings = ["line", "ν̃ / cm⁻¹", "± / cm⁻¹", "position", "λ vac / µm", "λ air / nm", "E'' / cm⁻¹", "rel. int.", "S / cm·molecule⁻¹", "pop. fraction"];
-  return header.join("\n") + textTable(headings, rows, [false, true, true, false, true, true, true, true, true, true]) + "\n";
+  // The columns and their digits come from lineColumns; a missing absolute intensity prints as a dash.
+  const columns = lineColumns.filter((c) => c.table !== null);
+  const rows = result.lines.map((l) => columns.map((c) => c.cell(l) || "—"));
+  const headings = columns.map((c) => c.table!);
+  return (
+    header.join("\n") +
+    textTable(
+      headings,
+      rows,
+      columns.map((c) => c.numeric),
+    ) +
+    "\n"
+  );
 }

@@ -1,3 +1,4 @@
+import { lineColumn } from "../format/index.ts";
 import type { Branch } from "../core/index.ts";
 import { drawMarker } from "./drawMarker.ts";
 import type { SheetLineCell, SheetTableRow } from "./sheetContent.ts";
@@ -55,9 +56,9 @@ export function drawTableHead(doc: Doc, x: number, y: number, width: number): vo
       .fillColor(ink)
       .text(`${branch}(J″)  ${style.name}, ${style.rule}`, b.start + 17, y + 3, { lineBreak: false });
     doc.font(sheetFonts.regular).fontSize(8.5);
-    rightText(doc, "ν̃ / cm⁻¹", b.wavenumber, y + 18);
-    rightText(doc, "λ vac / µm", b.wavelength, y + 18);
-    doc.text("rel. int.", b.intensity - intensityPointInset - 7, y + 18, { lineBreak: false });
+    rightText(doc, lineColumn("wavenumber").table!, b.wavenumber, y + 18);
+    rightText(doc, lineColumn("wavelengthVacuumUm").table!, b.wavelength, y + 18);
+    doc.text(lineColumn("relativeIntensity").table!, b.intensity - intensityPointInset - 7, y + 18, { lineBreak: false });
   }
   doc.font(sheetFonts.bold).fontSize(9.5);
   rightText(doc, "J″", c.j[1] - 6, y + 18);

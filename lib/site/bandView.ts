@@ -1,8 +1,8 @@
 import type { AtlasBand, AtlasEntry } from "../atlas/index.ts";
 import { bandLabel } from "../core/index.ts";
-import { accuracyText, calibrationCellText, calibrationLineKey, fixed, intensityOriginWords, positionStatusWords, significant, type LineCalibration } from "../format/index.ts";
+import { accuracyText, calibrationCellText, calibrationLineKey, fixed, intensityOriginWords, lineColumn, lineColumns, significant, type LineCalibration } from "../format/index.ts";
 import { downloadPath, lineRowId } from "../shared/sitePaths.ts";
-import { pageLineCells, signedSignificant } from "./formatCells.ts";
+import { signedSignificant } from "./formatCells.ts";
 
 const bandTitles: Record<AtlasBand["kind"], string> = { fundamental: "fundamental", hot: "hot band", overtone: "overtone", combination: "combination band" };
 
@@ -16,6 +16,10 @@ function truncationNote(band: AtlasBand): string {
   const why = { intensity: "weaker lines fall below 10⁻⁴ of the strongest", "constants-turn-over": "the constants stop being valid (the rotational levels turn over)", "j-limit": "the program's J limit is reached" }[band.lines.truncatedBy];
   return `Lines up to J'' = ${band.lines.jLowerMax}; the list stops there because ${why}.`;
 }
+
+/** The line columns the species pages show (headings and units from lib/format). */
+const pageColumns = lineColumns.filter((c) => c.page !== null);
+export const pageLineHeadings = pageColumns.map((c) => c.page!);
 
 export function bandView(entry: AtlasEntry, band: AtlasBand, calibration?: Map<string, LineCalibration[]>) {
   const residualByLabel = new Map<string, number>();
@@ -34,8 +38,9 @@ export function bandView(entry: AtlasEntry, band: AtlasBand, calibration?: Map<s
       id: lineRowId(band.label, line.label),
       label: line.label,
       branch: line.branch,
-      ...pageLineCells(line),
-      position: positionStatusWords[line.positionStatus],
+      // The page's line columns, in the order and digits of lib/format lineColumns.
+      cells: pageColumns.map((c) => c.cell(line) || "—"),
+      wavenumber: lineColumn("wavenumber").cell(line),
       // The table shows measured − predicted (the atlas stores predicted − measured).
       measuredMinusPredicted: residual === undefined ? null : signedSignificant(-residual, 2),
       calibration: calibrationOf(line.label),
@@ -60,6 +65,7 @@ export function bandView(entry: AtlasEntry, band: AtlasBand, calibration?: Map<s
       json: downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"),
     },
     hasCalibration: rows.some((r) => r.calibration !== null),
+    headings: pageLineHeadings,
     rows,
   };
 }

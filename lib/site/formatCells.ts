@@ -1,13 +1,4 @@
-import type { Line } from "../core/index.ts";
-import { lineCells } from "../format/index.ts";
-
 export { signedSignificant } from "../format/index.ts";
-
-/** The cells of one table row on a page: the same digits as the CSV, text dashes for "none". */
-export function pageLineCells(line: Line) {
-  const c = lineCells(line);
-  return { ...c, lineIntensity: c.lineIntensity || "—" };
-}
 
 const superscriptDigits = "⁰¹²³⁴⁵⁶⁷⁸⁹";
 const subscriptDigits = "₀₁₂₃₄₅₆₇₈₉";
