@@ -8,6 +8,7 @@ import {
   cellSpectrum,
   CoreInputError,
   nearestGridIndex,
+  relativeThinAbsorbance,
   type CalibrationLine,
   type CellConditions,
   type CellSpectrum,
@@ -49,12 +50,12 @@ function compute(model: CellModel, settings: BenchSettings): Computed {
 function shownSignal(c: Computed): { values: Float64Array; label: string; digits: (v: number) => string; absolute: boolean } {
   const s = c.spectrum;
   if (s.observedTransmittance) return { values: s.observedTransmittance, label: "transmittance", digits: transmittanceDigits, absolute: true };
-  const thin = s.observedThinOpticalDepth!;
-  let peak = 0;
-  for (let i = s.windowFirst; i <= s.windowLast; i++) if (thin[i] > peak) peak = thin[i];
-  const values = new Float64Array(thin.length);
-  for (let i = 0; i < thin.length; i++) values[i] = peak > 0 ? thin[i] / peak : 0;
-  return { values, label: "relative absorbance (optically thin, peak = 1), not a transmittance", digits: transmittanceDigits, absolute: false };
+  return {
+    values: relativeThinAbsorbance(s),
+    label: "relative absorbance (optically thin, peak = 1), not a transmittance",
+    digits: transmittanceDigits,
+    absolute: false,
+  };
 }
 
 function setup(page: HTMLElement, model: CellModel) {

@@ -125,3 +125,17 @@ export function observedSignal(spectrum: CellSpectrum): Float64Array {
   for (let i = 0; i < t.length; i++) out[i] = 1 - t[i];
   return out;
 }
+
+/**
+ * For a gas without a cited band intensity: the instrument-convolved optically thin absorbance
+ * scaled so that its largest value inside the window is 1 (the shape is all that can be given).
+ */
+export function relativeThinAbsorbance(spectrum: CellSpectrum): Float64Array {
+  const thin = spectrum.observedThinOpticalDepth;
+  if (!thin) throw new CoreInputError("a relative absorbance is only made for a spectrum without absolute intensities");
+  let peak = 0;
+  for (let i = spectrum.windowFirst; i <= spectrum.windowLast; i++) if (thin[i] > peak) peak = thin[i];
+  const out = new Float64Array(thin.length);
+  for (let i = 0; i < thin.length; i++) out[i] = peak > 0 ? thin[i] / peak : 0;
+  return out;
+}

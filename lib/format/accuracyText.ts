@@ -47,3 +47,10 @@ export function accuracyRecord(accuracy: BandAccuracy) {
     sources: c ? c.sourceKeys : [],
   };
 }
+
+/** Where a species' constants come from, in a few words (pages, sheets, the CLI header). */
+export function constantsOriginText(model: { label: string; constantsOrigin: "cited" | "isotope-scaled" | "fitted" }, referenceLabel: string): string {
+  if (model.constantsOrigin === "fitted") return `constants fitted by bandatlas fit to cited measured lines`;
+  if (model.constantsOrigin === "cited") return `constants cited for ${model.label}`;
+  return `constants scaled from ${referenceLabel} by Dunham's isotope relations`;
+}

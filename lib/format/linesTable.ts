@@ -38,7 +38,7 @@ export function linesTable(result: BandLines, context: LinesTableContext): strin
   const header = [
     `${context.moleculeName} (${context.formula}), species ${result.species}, band ${bandLabel(result.band)}, T = ${result.temperatureK} K`,
     `band origin ${result.bandOrigin.toFixed(4)} cm⁻¹; partition function Q = ${significant(result.partitionFunction, 6)}; ${result.lines.length} lines, J'' up to ${result.jLowerMax}`,
-    `constants: ${context.constantsNote}`,
+    context.constantsNote,
     intensity,
     `accuracy: ${accuracyText(result.accuracy)}`,
     ...(context.limitations ?? []).map((l) => `KNOWN LIMITATION: ${l}`),

@@ -2,6 +2,7 @@ import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts"
 import { sameBand, type Band, type BandLines, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
 import {
   accuracyText,
+  constantsOriginText,
   sheetCautionDeferral,
   calibrationConditionsText,
   intensityOriginWords,
@@ -197,10 +198,7 @@ export function sheetContent(input: SheetContentInput): SheetContent {
     throw new SheetInputError(`${displayText(molecule.name)} ${entry.species}: the atlas entry has no lines in its principal band`);
   const bandLines = fundamental.lines;
   const model = molecule.species[speciesIndex].model;
-  const constants =
-    model.constantsOrigin === "cited"
-      ? `constants cited for ${model.label}`
-      : `constants scaled from ${molecule.species[0].model.label} by Dunham's isotope relations`;
+  const constants = constantsOriginText(model, molecule.species[0].model.label);
   const intensity =
     bandLines.intensityOrigin === null
       ? "relative intensities only (no cited band strength or dipole)"

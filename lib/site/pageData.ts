@@ -1,6 +1,6 @@
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
-import { allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
+import { constantsOriginText, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
 import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
 import { standardAtmospherePa } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
@@ -35,9 +35,7 @@ function hazardView(molecule: Molecule): HazardView {
 }
 
 function constantsNote(molecule: Molecule, species: SpeciesInfo): string {
-  return species.model.constantsOrigin === "cited"
-    ? `constants cited for ${species.model.label}`
-    : `constants scaled from ${molecule.species[0].model.label} by Dunham's isotope relations`;
+  return constantsOriginText(species.model, molecule.species[0].model.label);
 }
 
 /** Only http(s) links from a molecule file become hrefs; anything else is shown as text. */

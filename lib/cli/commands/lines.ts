@@ -1,5 +1,5 @@
 import { bandOf, defaultTemperatureK, resolveBand, selectSpecies } from "../../atlas/index.ts";
-import { linesCsv, linesDocument, linesTable } from "../../format/index.ts";
+import { constantsOriginText, linesCsv, linesDocument, linesTable } from "../../format/index.ts";
 import type { Molecule, SpeciesInfo } from "../../molecules/index.ts";
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine, temperatureOption } from "../options.ts";
@@ -25,10 +25,7 @@ Wavenumbers are vacuum cm⁻¹; air wavelengths are for standard air (Edlén 196
 export function describeConstants(molecule: Molecule, species: SpeciesInfo): string {
   const source = molecule.sources.find((s) => s.key === species.model.constantsSourceKey);
   const cite = source ? source.citation : species.model.constantsSourceKey;
-  if (species.model.constantsOrigin === "fitted") return `fitted by bandatlas fit to cited measured lines (${cite})`;
-  return species.model.constantsOrigin === "cited"
-    ? `cited for ${species.model.label}: ${cite}`
-    : `scaled from ${molecule.species[0].model.label} by Dunham's isotope relations; reference constants: ${cite}`;
+  return `${constantsOriginText(species.model, molecule.species[0].model.label)}: ${cite}`;
 }
 
 export function runLines(args: string[]): string {

@@ -1,4 +1,5 @@
 import { moleculeCellSpectrum } from "../../atlas/index.ts";
+import { relativeThinAbsorbance } from "../../core/index.ts";
 import {
   allGasesCaution,
   csvRow,
@@ -67,10 +68,8 @@ export function runSpectrum(args: string[]): string {
   const nu = (i: number) => spectrum.grid.startCm + i * gridStep;
 
   if (set.intensityScale === "relative-thin") {
-    const thin = spectrum.observedThinOpticalDepth!;
-    let peak = 0;
-    for (let i = spectrum.windowFirst; i <= spectrum.windowLast; i++) if (thin[i] > peak) peak = thin[i];
-    const rel = (i: number) => (peak > 0 ? thin[i] / peak : 0);
+    const relative = relativeThinAbsorbance(spectrum);
+    const rel = (i: number) => relative[i];
     if (format === "json") {
       return (
         JSON.stringify(
