@@ -1,4 +1,14 @@
-import { bandLabel, bandLines, isStateBand, lineResiduals, speciesPartitionFunction, type Band, type BandLines, type LineResidual } from "../core/index.ts";
+import {
+  bandLabel,
+  bandLines,
+  harmonicHotBandDipoleSquaredRatio,
+  isStateBand,
+  lineResiduals,
+  speciesPartitionFunction,
+  type Band,
+  type BandLines,
+  type LineResidual,
+} from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { hotBandDisplayFraction, type BandKind } from "./atlasConfig.ts";
 import { speciesBands } from "./moleculeBands.ts";
@@ -44,7 +54,7 @@ export function atlasEntry(molecule: Molecule, species: SpeciesInfo, temperature
     if (fundamental.strongestLineIntensity && lines.strongestLineIntensity !== null) ratio = lines.strongestLineIntensity / fundamental.strongestLineIntensity;
     else if (kind === "hot" && !isStateBand(band) && fundamental.strongestLinePerDebyeSquared > 0) {
       // Harmonic rule |μ(v+1←v)|² = (v+1)|μ(1←0)|² (Bernath, ch. 7) when no dipole is cited.
-      ratio = (band.vUpper * lines.strongestLinePerDebyeSquared) / fundamental.strongestLinePerDebyeSquared;
+      ratio = (harmonicHotBandDipoleSquaredRatio(band) * lines.strongestLinePerDebyeSquared) / fundamental.strongestLinePerDebyeSquared;
     }
     return {
       kind,

@@ -1,9 +1,14 @@
 import { isStateBand, sameBand, vibrationalBand } from "./band.ts";
-import type { Band, BandIntensityData, MassU } from "./types.ts";
+import type { Band, BandIntensityData, MassU, VibrationalBand } from "./types.ts";
 
 // For a harmonic oscillator with a linear dipole function, |⟨v+1|μ|v⟩|² = (v+1)·|⟨1|μ|0⟩|²
 // (Bernath, Spectra of Atoms and Molecules, ch. 7). Used for hot bands when only the
 // fundamental's dipole is cited; the result is labelled "harmonic-hot-band" wherever shown.
+/** |μ(v'←v'−1)|² / |μ(1←0)|² by the harmonic rule: v'. */
+export function harmonicHotBandDipoleSquaredRatio(band: VibrationalBand): number {
+  return band.vUpper;
+}
+
 export function bandIntensityDataFor(intensities: BandIntensityData[], band: Band): BandIntensityData | null {
   const cited = intensities.find((d) => sameBand(d.band, band));
   if (cited) return cited;
@@ -11,7 +16,7 @@ export function bandIntensityDataFor(intensities: BandIntensityData[], band: Ban
   if (isStateBand(band) || band.vUpper - band.vLower !== 1) return null;
   const fundamental = intensities.find((d) => d.band.vUpper === 1 && d.band.vLower === 0);
   if (!fundamental) return null;
-  const scale = Math.sqrt(band.vUpper);
+  const scale = Math.sqrt(harmonicHotBandDipoleSquaredRatio(band));
   return {
     ...fundamental,
     band,
