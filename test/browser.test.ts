@@ -71,7 +71,7 @@ describe("the site in Chromium", () => {
   });
 
   it("finds lines near a wavenumber exactly as `bandatlas find` does and lands on the row", async () => {
-    const wavenumber = "2143.3";
+    const wavenumber = "2150";
     const expected = JSON.parse(await cli("find", wavenumber, "--format", "json")).matches as Array<{
       molecule: string;
       species: string;
@@ -81,7 +81,7 @@ describe("the site in Chromium", () => {
       offset: number;
       relativeIntensity: number;
     }>;
-    expect(expected.length).toBeGreaterThan(2);
+    expect(expected.length).toBeGreaterThan(1);
     const table = (await cli("find", wavenumber))
       .trim()
       .split("\n")

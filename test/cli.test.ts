@@ -100,17 +100,29 @@ describe("known limitations of a molecule file", () => {
 });
 
 describe("bandatlas find", () => {
-  it("lists the lines near 2143.3 cm⁻¹ nearest first", async () => {
-    const { stdout, exitCode } = await cli("find", "2143.3", "--window", "0.6", "--format", "json");
+  it("lists the lines near 2150 cm⁻¹ nearest first, with their strength relative to the gas and to their band", async () => {
+    const { stdout, exitCode } = await cli("find", "2150", "--window", "3", "--format", "json");
     expect(exitCode).toBe(0);
     const { query, matches } = JSON.parse(stdout);
-    expect(query).toMatchObject({ wavenumber: 2143.3, window: 0.6, temperatureK: 296 });
-    expect(matches.length).toBeGreaterThan(0);
+    expect(query).toMatchObject({ wavenumber: 2150, window: 3, temperatureK: 296 });
+    expect(matches.length).toBeGreaterThan(1);
     for (let i = 1; i < matches.length; i++) expect(Math.abs(matches[i].offset)).toBeGreaterThanOrEqual(Math.abs(matches[i - 1].offset));
     for (const m of matches) {
-      expect(Math.abs(m.offset)).toBeLessThanOrEqual(0.6);
-      expect(Object.keys(m)).toEqual(["molecule", "species", "band", "label", "wavenumber", "relativeIntensity", "offset"]);
+      expect(Math.abs(m.offset)).toBeLessThanOrEqual(3);
+      expect(Object.keys(m)).toEqual(["molecule", "species", "band", "label", "wavenumber", "relativeIntensity", "gasRelativeIntensity", "offset"]);
+      expect(m.gasRelativeIntensity).toBeGreaterThanOrEqual(1e-3);
     }
+  });
+  it("does not send a user after hot bands a millionth as strong: near H35Cl R(0) only the fundamental line is found", async () => {
+    // At 296 K the v = 1 population of HCl is exp(−c2·2886/296) ≈ 1e-6 of v = 0 (fact of the trade),
+    // so 2-1 lines near 2906 cm⁻¹ fall far below 1e-3 of the gas's strongest line.
+    const { stdout } = await cli("find", "2906.25", "--window", "0.5", "--format", "json");
+    const { matches } = JSON.parse(stdout);
+    expect(matches.map((m: { species: string; band: string; label: string }) => `${m.species} ${m.band} ${m.label}`)).toEqual(["1H35Cl 1-0 R(0)"]);
+    const all = JSON.parse((await cli("find", "2906.25", "--window", "0.5", "--min-relative", "0", "--format", "json")).stdout).matches;
+    const hot = all.filter((m: { band: string }) => m.band === "2-1");
+    expect(hot.length).toBeGreaterThan(0);
+    for (const m of hot) expect(m.gasRelativeIntensity).toBeLessThan(1e-5);
   });
   it("finds CO R(0) when asked at its published position", async () => {
     // CRC Handbook, Maki CO 1-0 table: R(0) = 2147.081132 cm⁻¹.

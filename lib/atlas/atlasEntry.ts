@@ -4,6 +4,7 @@ import {
   harmonicHotBandDipoleSquaredRatio,
   isStateBand,
   lineResiduals,
+  scaleTransitionDipoleToIsotopologue,
   speciesPartitionFunction,
   type Band,
   type BandLines,
@@ -33,6 +34,13 @@ export interface AtlasEntry {
   partitionFunction: number;
   bands: AtlasBand[];
   residuals: LineResidual[];
+  /**
+   * The strongest line of this species' principal band on a scale shared by every species of the
+   * molecule: its absolute intensity (cm/molecule) where dipole data are cited, else the intensity
+   * for a 1 D principal-band dipole scaled between isotopologues by the reduced-mass rule (as the
+   * cell model does). Natural abundance and the partition function are in both.
+   */
+  principalStrength: number;
 }
 
 /**
@@ -65,7 +73,24 @@ export function atlasEntry(molecule: Molecule, species: SpeciesInfo, temperature
       shownWithFundamental: index === 0 || (kind === "hot" && ratio !== null && ratio >= hotBandDisplayFraction),
     };
   });
-  return { moleculeId: molecule.id, species: species.model.label, temperatureK, partitionFunction: q, bands, residuals: lineResiduals(species.model) };
+  return {
+    moleculeId: molecule.id,
+    species: species.model.label,
+    temperatureK,
+    partitionFunction: q,
+    bands,
+    residuals: lineResiduals(species.model),
+    principalStrength: fundamental.strongestLineIntensity ?? fundamental.strongestLinePerDebyeSquared * unitDipoleSquared(molecule, species, computed[0].band),
+  };
+}
+
+/** |μ|² of a 1 D principal-band dipole carried to this species by the isotope relation (1 for the reference or a linear molecule). */
+function unitDipoleSquared(molecule: Molecule, species: SpeciesInfo, band: Band): number {
+  const reference = molecule.species[0].model;
+  const model = species.model;
+  if (model === reference || model.structure !== "diatomic" || reference.structure !== "diatomic" || isStateBand(band)) return 1;
+  const unit = { band, transitionDipoleDebye: 1, transitionDipoleUncertaintyDebye: 0, hermanWallis: null, origin: "cited" as const, sourceKey: "unit-dipole" };
+  return scaleTransitionDipoleToIsotopologue(unit, reference.reducedMassU, model.reducedMassU).transitionDipoleDebye ** 2;
 }
 
 /** Lines of one band on request (any v'←v'', not only the atlas's standard set). */

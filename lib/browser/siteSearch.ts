@@ -2,7 +2,7 @@
 // (the pages' Content-Security-Policy allows no inline script); everything it shows is written
 // with textContent, never innerHTML.
 import MiniSearch from "minisearch";
-import { fixed, significant } from "../format/numbers.ts";
+import { findColumns, findHeadText, findUnsourcedNote } from "../format/findText.ts";
 import {
   parseSpectralPosition,
   positionToWavenumber,
@@ -101,34 +101,28 @@ function setupWavenumberSearch(form: HTMLFormElement) {
         );
       const matches = searchWavenumber(index, wavenumber, windowCm, minRelative);
       const given = position.unit === "cm-1" ? "" : ` (${position.value} ${unitLabels[position.unit]}, ${position.medium})`;
-      const head = el(
-        "p",
-        `Lines within ±${significant(windowCm, 4)} cm⁻¹ of ${position.unit === "cm-1" ? wavenumber : fixed(wavenumber, 4)} cm⁻¹${given} at ${index.temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}`,
-      );
+      const head = el("p", findHeadText({ windowCm, wavenumber, given, temperatureK: index.temperatureK, minRelative, count: matches.length }));
       if (!matches.length) return show(output, head);
       const table = el("table", undefined, { class: "lines compact" });
       const headRow = el("tr");
-      for (const h of ["molecule", "species", "band", "line", "wavenumber / cm⁻¹", "offset / cm⁻¹", "rel. intensity"])
-        headRow.append(el("th", h, { scope: "col" }));
+      for (const c of findColumns) headRow.append(el("th", c.heading, { scope: "col" }));
       table.append(el("thead"), el("tbody"));
       table.tHead!.append(headRow);
       for (const m of matches) {
         const row = el("tr");
-        const link = el("a", m.label, { href: `${root}${m.page}#${lineRowId(m.band, m.label)}` });
-        const lineCell = el("td");
-        lineCell.append(link);
-        row.append(
-          el("td", m.molecule),
-          el("td", m.species),
-          el("td", m.band),
-          lineCell,
-          el("td", fixed(m.wavenumber, 4), { class: "num" }),
-          el("td", (m.offset >= 0 ? "+" : "") + fixed(m.offset, 4), { class: "num" }),
-          el("td", significant(m.relativeIntensity, 3), { class: "num" }),
-        );
+        for (const c of findColumns) {
+          if (c.heading === "line") {
+            // The line's name links to its row on the species page.
+            const cell = el("td");
+            cell.append(el("a", m.label, { href: `${root}${m.page}#${lineRowId(m.band, m.label)}` }));
+            row.append(cell);
+          } else row.append(el("td", c.cell(m), c.numeric ? { class: "num" } : undefined));
+        }
         table.tBodies[0].append(row);
       }
-      show(output, head, table);
+      const note = findUnsourcedNote(matches);
+      if (note) show(output, head, table, el("p", note, { class: "hint" }));
+      else show(output, head, table);
     } catch (error) {
       fail(`Search failed: ${(error as Error).message}`);
     }

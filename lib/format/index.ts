@@ -8,3 +8,4 @@ export * from "./accuracyText.ts";
 export * from "./fitReport.ts";
 export * from "./cautions.ts";
 export * from "./lineColumns.ts";
+export * from "./findText.ts";

@@ -3,14 +3,15 @@
 //   wavenumber[n] | relativeIntensity[n] | Uint16 group[n] | Uint16 label[n]
 // = 20 bytes a line, base64 in a small JSON file. Wavenumbers and intensities stay exact doubles
 // so the browser's answer is the CLI's answer digit for digit; groups (molecule, species, band,
-// page) and labels ("R(12)") are small tables referenced by index.
+// page, and the band's factor from band-relative to gas-relative strength) and labels ("R(12)")
+// are small tables referenced by index.
 // Packed for gzip (web servers send it compressed): the lines are sorted, so the 64-bit patterns
 // of the positive wavenumbers rise too and are stored as differences from the previous line's; each
 // column is then split into byte planes (all first bytes, then all second bytes, ...), so the
 // near-constant high bytes of a double become long runs. Both steps are exact and undone on load.
 import type { LocatedLine } from "../core/nearbyLines.ts";
 
-export const lineIndexFormat = "bandatlas-line-index-2";
+export const lineIndexFormat = "bandatlas-line-index-3";
 export const lineIndexBytesPerLine = 20;
 
 export interface LineIndexFile {
@@ -18,8 +19,8 @@ export interface LineIndexFile {
   temperatureK: number;
   minRelative: number;
   count: number;
-  /** [molecule, species, band, page path] */
-  groups: Array<[string, string, string, string]>;
+  /** [molecule, species, band, page path, gas factor]: a line's gas-relative strength is its band-relative one × the factor (null: not sourced). */
+  groups: Array<[string, string, string, string, number | null]>;
   labels: string[];
   data: string;
 }
@@ -112,7 +113,8 @@ export function encodeLineIndex(lines: LocatedLine[], pageOf: (line: LocatedLine
     let g = groupIds.get(key);
     if (g === undefined) {
       g = groups.length;
-      groups.push([line.molecule, line.species, line.band, pageOf(line)]);
+      // Every line of a group shares its band's factor: gas-relative = band-relative × factor.
+      groups.push([line.molecule, line.species, line.band, pageOf(line), line.bandToGas]);
       groupIds.set(key, g);
     }
     let l = labelIds.get(line.label);
@@ -167,8 +169,19 @@ export function decodeLineIndex(file: LineIndexFile): DecodedLineIndex {
     minRelative: file.minRelative,
     wavenumbers,
     line(i) {
-      const [molecule, species, band, page] = file.groups[groupOf[i]];
-      return { molecule, species, band, label: file.labels[labelOf[i]], wavenumber: wavenumbers[i], relativeIntensity: intensities[i], page };
+      const [molecule, species, band, page, factor] = file.groups[groupOf[i]];
+      const relativeIntensity = intensities[i];
+      return {
+        molecule,
+        species,
+        band,
+        label: file.labels[labelOf[i]],
+        wavenumber: wavenumbers[i],
+        relativeIntensity,
+        gasRelativeIntensity: factor === null ? null : relativeIntensity * factor,
+        bandToGas: factor,
+        page,
+      };
     },
   };
 }

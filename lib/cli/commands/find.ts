@@ -1,5 +1,5 @@
 import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, findInAtlas } from "../../atlas/index.ts";
-import { fixed, significant, textTable } from "../../format/index.ts";
+import { findColumns, findHeadText, findUnsourcedNote, textTable } from "../../format/index.ts";
 import { parseSpectralPosition, positionToWavenumber, unitLabels, windowToWavenumber, type PositionUnit } from "../../core/index.ts";
 import { loadMoleculesOrThrow } from "../../molecules/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
@@ -19,7 +19,9 @@ every shipped molecule, species and band, nearest first.
   --window <x>            half-width of the search window, in the position's unit
                           (default ${defaultFindWindowCm} cm⁻¹, or the same width in nm or µm there)
   --temperature <K>       gas temperature in kelvin (default ${defaultTemperatureK})
-  --min-relative <x>      only lines at least x times the strongest of their band (default ${defaultFindMinRelative})
+  --min-relative <x>      only lines at least x times the strongest line of their gas at that
+                          temperature (of their band where the band's strength relative to the
+                          gas is not sourced) (default ${defaultFindMinRelative})
   --format table|json     table (default) or JSON
   --molecules <dir>       read molecule files from <dir> instead of the shipped ones`;
 
@@ -58,28 +60,24 @@ export function runFind(args: string[]): string {
   if (format === "json") {
     return (
       JSON.stringify(
-        { query: { wavenumber, window: windowCm, temperatureK, minRelative, position: position.value, unit: position.unit, medium: position.medium }, matches },
+        {
+          query: { wavenumber, window: windowCm, temperatureK, minRelative, position: position.value, unit: position.unit, medium: position.medium },
+          // bandToGas is the index's packing of gasRelativeIntensity, not a quantity of its own.
+          matches: matches.map(({ bandToGas: _factor, ...m }) => m),
+        },
         null,
         2,
       ) + "\n"
     );
   }
   const given = position.unit === "cm-1" ? "" : ` (${position.value} ${unitLabels[position.unit]}, ${position.medium})`;
-  const head = `Lines within ±${significant(windowCm, 4)} cm⁻¹ of ${position.unit === "cm-1" ? wavenumber : fixed(wavenumber, 4)} cm⁻¹${given} at ${temperatureK} K, at least ${minRelative} of their band's strongest line: ${matches.length}\n`;
+  const head = findHeadText({ windowCm, wavenumber, given, temperatureK, minRelative, count: matches.length }) + "\n";
   if (!matches.length) return head;
-  const rows = matches.map((m) => [
-    m.molecule,
-    m.species,
-    m.band,
-    m.label,
-    fixed(m.wavenumber, 4),
-    (m.offset >= 0 ? "+" : "") + fixed(m.offset, 4),
-    significant(m.relativeIntensity, 3),
-  ]);
-  return (
-    head +
-    "\n" +
-    textTable(["molecule", "species", "band", "line", "ν̃ / cm⁻¹", "offset / cm⁻¹", "rel. int."], rows, [false, false, false, false, true, true, true]) +
-    "\n"
+  const table = textTable(
+    findColumns.map((c) => c.heading),
+    matches.map((m) => findColumns.map((c) => c.cell(m))),
+    findColumns.map((c) => c.numeric),
   );
+  const note = findUnsourcedNote(matches);
+  return head + "\n" + table + "\n" + (note ? note + "\n" : "");
 }
