@@ -30,6 +30,29 @@ export interface FitReport {
   rule: string;
 }
 
+/** The report's line rows from a fit's residuals (Dunham or per-state fits alike). */
+export function fitReportLines(
+  residuals: ReadonlyArray<{
+    observation: { species: string; band: string; label: string; wavenumberCm: number; uncertaintyCm: number; heldOut: boolean; sourceKey: string };
+    calculatedCm: number;
+    residualCm: number;
+    normalized: number;
+  }>,
+): FitReport["lines"] {
+  return residuals.map((r) => ({
+    species: r.observation.species,
+    band: r.observation.band,
+    label: r.observation.label,
+    measured: r.observation.wavenumberCm,
+    uncertainty: r.observation.uncertaintyCm,
+    calculated: r.calculatedCm,
+    residual: r.residualCm,
+    normalized: r.normalized,
+    heldOut: r.observation.heldOut,
+    source: r.observation.sourceKey,
+  }));
+}
+
 export const termSupportRule =
   "a term is supported when |value| ≥ 3 standard uncertainties in the fit that holds it; each next candidate term is tried alone. Uncertainties are scaled by √(χ²/ν) when χ²/ν > 1.";
 

@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { isMap, parseDocument } from "yaml";
 import { dunhamTermName, termSupport } from "../../core/index.ts";
-import { fitReportText, termSupportRule, type FitReport } from "../../format/index.ts";
+import { fitReportLines, fitReportText, termSupportRule, type FitReport } from "../../format/index.ts";
 import {
   fitDecimals,
   MoleculeFileError,
@@ -50,18 +50,7 @@ export function dunhamFitReport(file: DiatomicMoleculeFile, fileName: string, fi
       supported: support.fitted[i].supported,
     })),
     correlation: fit.solution.correlation,
-    lines: fit.residuals.map((r) => ({
-      species: r.observation.species,
-      band: r.observation.band,
-      label: r.observation.label,
-      measured: r.observation.wavenumberCm,
-      uncertainty: r.observation.uncertaintyCm,
-      calculated: r.calculatedCm,
-      residual: r.residualCm,
-      normalized: r.normalized,
-      heldOut: r.observation.heldOut,
-      source: r.observation.sourceKey,
-    })),
+    lines: fitReportLines(fit.residuals),
     fittedCount: fit.fittedCount,
     heldOutCount: fit.heldOutCount,
     degreesOfFreedom: fit.solution.degreesOfFreedom,
@@ -85,18 +74,7 @@ export function linearFitReport(file: LinearMoleculeFile, fileName: string, fit:
       return { name, value: fit.values[i], uncertainty: fit.uncertainties[i], significance, supported: significance >= 3 };
     }),
     correlation: solution.correlation.map((row, i) => row.map((c, j) => c * signs[i] * signs[j])),
-    lines: residuals.map((r) => ({
-      species: r.observation.species,
-      band: r.observation.band,
-      label: r.observation.label,
-      measured: r.observation.wavenumberCm,
-      uncertainty: r.observation.uncertaintyCm,
-      calculated: r.calculatedCm,
-      residual: r.residualCm,
-      normalized: r.normalized,
-      heldOut: r.observation.heldOut,
-      source: r.observation.sourceKey,
-    })),
+    lines: fitReportLines(residuals),
     fittedCount: fit.fit.fittedCount,
     heldOutCount: fit.fit.heldOutCount,
     degreesOfFreedom: solution.degreesOfFreedom,
