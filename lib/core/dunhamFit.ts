@@ -2,16 +2,10 @@ import { CoreInputError } from "./coreInputError.ts";
 import type { DunhamCoefficient, WavenumberCm } from "./types.ts";
 import { weightedLeastSquares, type LeastSquaresResult } from "./weightedLeastSquares.ts";
 
-/** One cited measured line as the fit sees it. */
-export interface FitObservation {
+/** What every fit knows of one cited measured line, whatever the model it fits. */
+export interface MeasuredLineObservation {
   species: string;
-  /** μ_reference / μ_species: Dunham's isotope relation scales Y_kl by (μ_ref/μ)^(k/2+l). */
-  massRatio: number;
-  /** Per atom, 1/M(atom in this species) − 1/M(atom in the reference species), in 1/u. */
-  inverseMassShifts: number[];
-  vUpper: number;
   jUpper: number;
-  vLower: number;
   jLower: number;
   label: string;
   band: string;
@@ -20,6 +14,16 @@ export interface FitObservation {
   sourceKey: string;
   /** Kept out of the fit and used only to test it. */
   heldOut: boolean;
+}
+
+/** One cited measured line as the Dunham fit sees it. */
+export interface FitObservation extends MeasuredLineObservation {
+  /** μ_reference / μ_species: Dunham's isotope relation scales Y_kl by (μ_ref/μ)^(k/2+l). */
+  massRatio: number;
+  /** Per atom, 1/M(atom in this species) − 1/M(atom in the reference species), in 1/u. */
+  inverseMassShifts: number[];
+  vUpper: number;
+  vLower: number;
 }
 
 /**

@@ -1,5 +1,5 @@
 import { CoreInputError } from "./coreInputError.ts";
-import type { WavenumberCm } from "./types.ts";
+import type { MeasuredLineObservation } from "./dunhamFit.ts";
 import { weightedLeastSquares, type LeastSquaresResult } from "./weightedLeastSquares.ts";
 
 /** A coefficient c_l of one state's series E(J) = Σ c_l [J(J+1)]^l (c0 = G, c1 = B, c2 = −D, c3 = H). */
@@ -8,18 +8,10 @@ export interface StateCoefficientKey {
   l: number;
 }
 
-export interface LinearFitObservation {
-  species: string;
+/** One cited measured line as the per-state fit sees it. */
+export interface LinearFitObservation extends MeasuredLineObservation {
   upperStateIndex: number;
   lowerStateIndex: number;
-  jUpper: number;
-  jLower: number;
-  label: string;
-  band: string;
-  wavenumberCm: WavenumberCm;
-  uncertaintyCm: WavenumberCm;
-  sourceKey: string;
-  heldOut: boolean;
 }
 
 export interface LinearFitResidual {

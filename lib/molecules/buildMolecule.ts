@@ -12,7 +12,7 @@ import { split } from "./givenConstants.ts";
 import { buildLinearMolecule } from "./linearMolecule.ts";
 import type { LinearFileFit } from "./linearFit.ts";
 import type { MoleculeFile } from "./linearSchema.ts";
-import { gasBroadening, moleculeIdentity, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
+import { gasBroadening, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
 import { isotope } from "./isotopes.ts";
 import type { DiatomicMoleculeFile } from "./schema.ts";
 import { speciesConstants } from "./speciesConstants.ts";
@@ -93,16 +93,7 @@ export function buildDiatomicMolecule(file: DiatomicMoleculeFile, fileName: stri
     const info = models.find((m) => sameSpecies(m.model.massNumbers, group.massNumbers))!;
     const [vUpper, vLower] = group.band.split("-").map(Number);
     const band = { vUpper, vLower };
-    for (const line of group.lines) {
-      info.model.referenceLines.push({
-        band,
-        label: line.label,
-        wavenumber: line.wavenumber,
-        uncertainty: line.uncertainty ?? null,
-        sourceKey: group.source,
-        heldOut: line.heldOut === true,
-      });
-    }
+    for (const line of group.lines) info.model.referenceLines.push(referenceLineOf(line, band, group.source));
   }
   const validations = moleculeValidation(
     models.map((m) => m.model),

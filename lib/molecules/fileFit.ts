@@ -1,6 +1,7 @@
-import { fitDunham, parseLineLabel, reducedMassU, type DunhamFitResult, type DunhamFitTerm, type FitObservation } from "../core/index.ts";
+import { fitDunham, reducedMassU, type DunhamFitResult, type DunhamFitTerm, type FitObservation } from "../core/index.ts";
 import { isotope } from "./isotopes.ts";
 import type { DiatomicMoleculeFile } from "./schema.ts";
+import { observationOf } from "./moleculeIdentity.ts";
 import { speciesLabel } from "./speciesNames.ts";
 
 /** Masses of one species and its relation to the reference species. */
@@ -54,23 +55,14 @@ export function runFileFit(file: DiatomicMoleculeFile): FileFit | null {
     if (!spec.lines.includes(group.source)) continue;
     const masses = speciesMasses(file.atoms, group.massNumbers, reference);
     const [vUpper, vLower] = group.band.split("-").map(Number);
+    const species = speciesLabel(file.atoms, group.massNumbers);
     for (const line of group.lines) {
-      const { jLower, jUpper } = parseLineLabel(line.label);
       observations.push({
-        species: speciesLabel(file.atoms, group.massNumbers),
+        ...observationOf(line, species, group.band, group.source),
         massRatio: masses.massRatio,
         inverseMassShifts: masses.inverseMassShifts,
         vUpper,
-        jUpper,
         vLower,
-        jLower,
-        label: line.label,
-        band: group.band,
-        wavenumberCm: line.wavenumber,
-        // A line without a stated uncertainty cannot be weighted; the check refuses such a fit.
-        uncertaintyCm: line.uncertainty ?? 0,
-        sourceKey: group.source,
-        heldOut: line.heldOut === true,
       });
     }
   }

@@ -1,7 +1,6 @@
 import {
   componentsFromCovariance,
   fitLinearStates,
-  parseLineLabel,
   stateCoefficientPartial,
   weightedLeastSquares,
   type LinearFitObservation,
@@ -10,6 +9,7 @@ import {
   type StateCoefficientKey,
 } from "../core/index.ts";
 import type { LinearMoleculeFile } from "./linearSchema.ts";
+import { observationOf } from "./moleculeIdentity.ts";
 import { speciesLabel } from "./speciesNames.ts";
 
 type Path = Array<string | number>;
@@ -59,21 +59,9 @@ export function runLinearFit(file: LinearMoleculeFile, speciesIndex: number): Li
   for (const group of entry.referenceLines ?? []) {
     if (!entry.fit.lines.includes(group.source)) continue;
     const [upper, lower] = group.band.split("-");
+    const species = entry.label ?? speciesLabel(file.atoms, entry.massNumbers);
     for (const line of group.lines) {
-      const { jLower, jUpper } = parseLineLabel(line.label);
-      observations.push({
-        species: entry.label ?? speciesLabel(file.atoms, entry.massNumbers),
-        upperStateIndex: index.get(upper)!,
-        lowerStateIndex: index.get(lower)!,
-        jUpper,
-        jLower,
-        label: line.label,
-        band: group.band,
-        wavenumberCm: line.wavenumber,
-        uncertaintyCm: line.uncertainty ?? 0,
-        sourceKey: group.source,
-        heldOut: line.heldOut === true,
-      });
+      observations.push({ ...observationOf(line, species, group.band, group.source), upperStateIndex: index.get(upper)!, lowerStateIndex: index.get(lower)! });
     }
   }
   const fit = fitLinearStates(observations, parameters, known, entry.states.length);

@@ -1,5 +1,5 @@
 import { moleculeValidation, transitionDipoleFromBandStrength, type LinearSpeciesData, type LinearState, type LinearSpeciesModel } from "../core/index.ts";
-import { gasBroadening, moleculeIdentity, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
+import { gasBroadening, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
 import { linearFitErrors, type LinearFileFit } from "./linearFit.ts";
 import type { GivenConstant } from "./givenConstants.ts";
 import { isotope } from "./isotopes.ts";
@@ -83,15 +83,7 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string, 
     }
     for (const group of entry.referenceLines ?? []) {
       const band = linear.bands.find((x) => x.band.label === group.band)!.band;
-      for (const line of group.lines)
-        model.referenceLines.push({
-          band,
-          label: line.label,
-          wavenumber: line.wavenumber,
-          uncertainty: line.uncertainty ?? null,
-          sourceKey: group.source,
-          heldOut: line.heldOut === true,
-        });
+      for (const line of group.lines) model.referenceLines.push(referenceLineOf(line, band, group.source));
     }
     const spellings = new Set([...speciesSpellings(file.atoms, entry.massNumbers), label.toLowerCase()]);
     return {

@@ -1,6 +1,7 @@
-import type { GasBroadening, SpeciesModel } from "../core/index.ts";
+import { parseLineLabel, type Band, type GasBroadening, type MeasuredLineObservation, type ReferenceLine, type SpeciesModel } from "../core/index.ts";
 import type { GivenConstant } from "./givenConstants.ts";
-import type { IdentityFields } from "./schema.ts";
+import type { IdentityFields, referenceLineSchema } from "./schema.ts";
+import type { z } from "zod";
 
 export interface Source {
   key: string;
@@ -64,4 +65,27 @@ export function gasBroadening(block: NonNullable<IdentityFields["broadening"]>):
 function broadeningOf(block: NonNullable<IdentityFields["broadening"]>["self"]): GasBroadening["self"] {
   const table = block.byAbsM ? [...block.byAbsM].sort((a, b) => a.absM - b.absM) : null;
   return { hwhmCmPerAtm: block.hwhmCmPerAtm, byAbsM: table, temperatureExponent: block.temperatureExponent, sourceKey: block.source, origin: "cited" };
+}
+
+type FileLine = z.infer<typeof referenceLineSchema>;
+
+/** A measured line of a file as the species model keeps it. */
+export function referenceLineOf(line: FileLine, band: Band, sourceKey: string): ReferenceLine {
+  return { band, label: line.label, wavenumber: line.wavenumber, uncertainty: line.uncertainty ?? null, sourceKey, heldOut: line.heldOut === true };
+}
+
+/** A measured line of a file as a fit sees it (a line without an uncertainty is refused before any fit runs). */
+export function observationOf(line: FileLine, species: string, band: string, sourceKey: string): MeasuredLineObservation {
+  const { jLower, jUpper } = parseLineLabel(line.label);
+  return {
+    species,
+    jUpper,
+    jLower,
+    label: line.label,
+    band,
+    wavenumberCm: line.wavenumber,
+    uncertaintyCm: line.uncertainty ?? 0,
+    sourceKey,
+    heldOut: line.heldOut === true,
+  };
 }
