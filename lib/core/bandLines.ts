@@ -2,12 +2,13 @@ import { bandLabel, vibrationalBand } from "./band.ts";
 import { bandAccuracy } from "./bandAccuracy.ts";
 import { bandLinesFromModel, type BandModel, type PositionUncertainty } from "./bandModel.ts";
 import { componentsFromUncertainties } from "./positionErrors.ts";
+import { cachedBandErrors } from "./positionUncertainty.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { linearBandModel } from "./linearBandModel.ts";
 import { partitionFunction as computePartitionFunction } from "./partitionFunction.ts";
 import { highestRisingV, levelExpansion, termFromExpansion } from "./termValues.ts";
 import { bandIntensityDataFor } from "./transitionDipole.ts";
-import type { Band, BandAccuracy, BandLines, DiatomicSpeciesModel, SpeciesModel, TemperatureK, VibrationalBand } from "./types.ts";
+import type { Band, BandLines, DiatomicSpeciesModel, SpeciesModel, TemperatureK, VibrationalBand } from "./types.ts";
 
 export interface BandLineOptions {
   temperatureK: TemperatureK;
@@ -32,18 +33,6 @@ export function dunhamPositionUncertainty(species: DiatomicSpeciesModel, band: V
   };
 }
 
-const bandErrors = new WeakMap<DiatomicSpeciesModel, Map<string, { uncertainty: PositionUncertainty; accuracy: BandAccuracy }>>();
-
-/** A band's position uncertainty and accuracy, made once per species and band (they do not depend on T). */
-function positionErrorsOf(species: DiatomicSpeciesModel, band: VibrationalBand): { uncertainty: PositionUncertainty; accuracy: BandAccuracy } {
-  let byBand = bandErrors.get(species);
-  if (!byBand) bandErrors.set(species, (byBand = new Map()));
-  const key = `${band.vUpper}-${band.vLower}`;
-  let errors = byBand.get(key);
-  if (!errors) byBand.set(key, (errors = { uncertainty: dunhamPositionUncertainty(species, band), accuracy: bandAccuracy(species, band) }));
-  return errors;
-}
-
 /** The band model of a ¹Σ⁺ diatomic's band v'←v'': both levels expanded from the Dunham table. */
 export function diatomicBandModel(species: DiatomicSpeciesModel, band: VibrationalBand, options: BandLineOptions): BandModel {
   const vTop = highestRisingV(species.dunham, band.vUpper + 1);
@@ -58,7 +47,7 @@ export function diatomicBandModel(species: DiatomicSpeciesModel, band: Vibration
     lower: levelExpansion(species.dunham, band.vLower),
     upper: levelExpansion(species.dunham, band.vUpper),
     zeroEnergy: termFromExpansion(levelExpansion(species.dunham, 0), 0),
-    ...positionErrorsOf(species, band),
+    ...cachedBandErrors(species, bandLabel(band), () => ({ uncertainty: dunhamPositionUncertainty(species, band), accuracy: bandAccuracy(species, band) })),
     partitionFunction: options.partitionFunction ?? computePartitionFunction(species.dunham, options.temperatureK),
     // Nuclear-spin degeneracy of a heteronuclear diatomic is the same for every level and cancels.
     lowerWeight: () => 1,

@@ -69,3 +69,23 @@ export function cachedFloor(accuracy: BandAccuracy): Float64Array {
   if (!floor) floors.set(accuracy, (floor = Float64Array.from({ length: jLimit + 3 }, (_, m) => envelopeAt(accuracy.floor, m))));
   return floor;
 }
+
+/** A band's position uncertainty and accuracy status: they depend on the species and band, not on T. */
+export interface BandErrors {
+  uncertainty: PositionUncertainty;
+  accuracy: BandAccuracy;
+}
+
+const bandErrors = new WeakMap<object, Map<string, BandErrors>>();
+
+/**
+ * Made once per species and band and kept (the atlas computes every band at several temperatures,
+ * and the CLI and benchmarks many times), for diatomic and linear species alike.
+ */
+export function cachedBandErrors(species: object, bandKey: string, make: () => BandErrors): BandErrors {
+  let byBand = bandErrors.get(species);
+  if (!byBand) bandErrors.set(species, (byBand = new Map()));
+  let errors = byBand.get(bandKey);
+  if (!errors) byBand.set(bandKey, (errors = make()));
+  return errors;
+}
