@@ -6,3 +6,4 @@ export * from "./moleculeBands.ts";
 export * from "./cellSpectrum.ts";
 export * from "./cellUnits.ts";
 export * from "./calibrationMarks.ts";
+export * from "./measuredCalibration.ts";

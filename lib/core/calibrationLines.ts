@@ -75,6 +75,29 @@ export function apparentPeak(signal: Float64Array, spectrum: CellSpectrum, centr
 }
 
 /**
+ * Distance from line i of lines sorted by wavenumber to the nearest other line at least `floor`
+ * strong, either side, cm⁻¹; null when there is none.
+ */
+export function nearestNeighbourCm(sorted: readonly AbsorbingLine[], i: number, floor: number): WavenumberCm | null {
+  const line = sorted[i];
+  let nearest: number | null = null;
+  for (let j = i - 1; j >= 0; j--) {
+    if (sorted[j].intensity >= floor) {
+      nearest = line.wavenumber - sorted[j].wavenumber;
+      break;
+    }
+  }
+  for (let j = i + 1; j < sorted.length; j++) {
+    if (sorted[j].intensity >= floor) {
+      const d = sorted[j].wavenumber - line.wavenumber;
+      if (nearest === null || d < nearest) nearest = d;
+      break;
+    }
+  }
+  return nearest;
+}
+
+/**
  * Lines usable for a wavenumber calibration at resolution R: strong, isolated and accurate by the criteria,
  * inside the spectrum's window, each with the shift of its apparent peak in the convolved
  * spectrum (blends, ILS sidelobes of neighbours and saturation all show up in it).
@@ -100,21 +123,7 @@ export function calibrationLines(
     if (line.wavenumber < from || line.wavenumber > to) continue;
     if (line.intensity < criteria.strongFraction * strongest) continue;
     if (line.positionStatus !== "validated" || line.wavenumberUncertainty > criteria.maxUncertaintyFraction * resolutionCm) continue;
-    const floor = criteria.neighbourFraction * line.intensity;
-    let nearest: number | null = null;
-    for (let j = i - 1; j >= 0; j--) {
-      if (sorted[j].intensity >= floor) {
-        nearest = line.wavenumber - sorted[j].wavenumber;
-        break;
-      }
-    }
-    for (let j = i + 1; j < sorted.length; j++) {
-      if (sorted[j].intensity >= floor) {
-        const d = sorted[j].wavenumber - line.wavenumber;
-        if (nearest === null || d < nearest) nearest = d;
-        break;
-      }
-    }
+    const nearest = nearestNeighbourCm(sorted, i, criteria.neighbourFraction * line.intensity);
     if (nearest !== null && nearest <= criteria.isolationMultiple * resolutionCm) continue;
     const apparent = apparentPeak(signal, spectrum, line.wavenumber, resolutionCm / 2);
     out.push({

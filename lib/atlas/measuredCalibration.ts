@@ -1,0 +1,188 @@
+import {
+  absorptionPeaks,
+  calibrateSpectrum,
+  calibrationReferences,
+  CalibrationRefused,
+  cellSpectrum,
+  defaultReferenceCriteria,
+  defaultSpectrumCalibrationRules,
+  fourierFwhmPerResolution,
+  observedSignal,
+  correctedWavenumber,
+  type AbsorptionPeak,
+  type Apodization,
+  type CellConditions,
+  type CorrectionModel,
+  type ReferenceCriteria,
+  type SpectrumCalibrationResult,
+  type SpectrumCalibrationRules,
+} from "../core/index.ts";
+import { cellLinesOfModel, type CellLineSet, type CellModel } from "./cellSpectrum.ts";
+
+/** A measured spectrum as the calibration needs it: ascending wavenumbers, decadic absorbance. */
+export interface MeasuredAbsorbance {
+  wavenumberCm: Float64Array;
+  absorbance: Float64Array;
+  /** Resolution the file states, cm⁻¹, or null. */
+  resolutionCm: number | null;
+}
+
+export interface MeasuredCalibrationSettings {
+  conditions: CellConditions;
+  apodization: Apodization;
+  /** Overrides the file's resolution and the estimate. */
+  resolutionCm?: number;
+  model: CorrectionModel;
+  rules?: SpectrumCalibrationRules;
+  referenceCriteria?: ReferenceCriteria;
+}
+
+export type ResolutionOrigin = "option" | "file" | "estimated";
+
+export interface MeasuredCalibration {
+  result: SpectrumCalibrationResult;
+  resolutionCm: number;
+  resolutionFrom: ResolutionOrigin;
+  /** How the resolution was obtained, in words. */
+  resolutionNote: string;
+  apodization: Apodization;
+  noiseAbsorbance: number;
+  peakCount: number;
+  set: CellLineSet;
+  /** The range compared: the measured range where the gas has lines. */
+  range: { fromCm: number; toCm: number };
+  /** The predicted spectrum on the corrected measured grid, scaled to the measured peaks (for plots). */
+  predicted: { wavenumberCm: Float64Array; absorbance: Float64Array };
+  /** The measured spectrum on its corrected scale, baseline (median) removed, same points as `predicted`. */
+  measured: { wavenumberCm: Float64Array; absorbance: Float64Array };
+  referenceCriteria: ReferenceCriteria;
+}
+
+/** Peaks whose widths show the instrument: strong, not saturated, both sides free. */
+const widthSignalToNoise = 20;
+/** … and optically thin enough that absorption does not widen them (height ≤ half the saturation level). */
+const widthHeightFraction = 0.5;
+
+/**
+ * The resolution from the measured widths: the median FWHM of the clean strong peaks divided
+ * by the FWHM the instrument line shape has per unit resolution (fourierFwhmPerResolution).
+ * Only peaks well below saturation count: strong absorption widens a line. The gases' own widths at cell pressures (Doppler ≈ 0.006 cm⁻¹ FWHM for HCl at 296 K) are
+ * neglected against the instrument's.
+ */
+export function estimateResolutionCm(peaks: readonly AbsorptionPeak[], apodization: Apodization, saturationAbsorbance: number): number | null {
+  const widths = peaks
+    .filter((p) => p.signalToNoise >= widthSignalToNoise && !p.flatTop && p.heightAbsorbance <= widthHeightFraction * saturationAbsorbance && p.fwhmCm !== null)
+    .map((p) => p.fwhmCm!)
+    .sort((a, b) => a - b);
+  if (widths.length < 3) return null;
+  return widths[widths.length >> 1] / fourierFwhmPerResolution(apodization);
+}
+
+function resolutionOf(
+  measured: MeasuredAbsorbance,
+  settings: MeasuredCalibrationSettings,
+  peaks: readonly AbsorptionPeak[],
+  rules: SpectrumCalibrationRules,
+): { resolutionCm: number; from: ResolutionOrigin; note: string } {
+  if (settings.resolutionCm !== undefined)
+    return { resolutionCm: settings.resolutionCm, from: "option", note: `resolution ${settings.resolutionCm} cm⁻¹ as given` };
+  if (measured.resolutionCm !== null)
+    return { resolutionCm: measured.resolutionCm, from: "file", note: `resolution ${measured.resolutionCm} cm⁻¹ as the file states` };
+  const estimate = estimateResolutionCm(peaks, settings.apodization, rules.saturationAbsorbance);
+  if (estimate === null) {
+    throw new CalibrationRefused("the file does not state its resolution and too few clean strong peaks show it: give the resolution (--resolution)");
+  }
+  const rounded = Number(estimate.toPrecision(2));
+  return {
+    resolutionCm: rounded,
+    from: "estimated",
+    note: `resolution ${rounded} cm⁻¹ estimated from the median width of the strong peaks, assuming ${settings.apodization} apodization`,
+  };
+}
+
+/** The gas as named inside a sentence. */
+function gasName(cell: CellModel): string {
+  return cell.moleculeName.charAt(0).toLowerCase() + cell.moleculeName.slice(1);
+}
+
+/** Calibrate a measured spectrum of one gas against the atlas's predicted spectrum (pure: runs in the browser too). */
+export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbsorbance, settings: MeasuredCalibrationSettings): MeasuredCalibration {
+  const rules = settings.rules ?? defaultSpectrumCalibrationRules;
+  const criteria = settings.referenceCriteria ?? defaultReferenceCriteria;
+  const x = measured.wavenumberCm;
+  const measuredFrom = x[0];
+  const measuredTo = x[x.length - 1];
+  const set = cellLinesOfModel(cell, settings.conditions);
+  let strongest = 0;
+  for (const l of set.lines) if (l.intensity > strongest) strongest = l.intensity;
+  const listed = set.lines.filter((l) => l.intensity >= criteria.minRelativeStrength * strongest);
+  const inRange = listed.filter((l) => l.wavenumber >= measuredFrom && l.wavenumber <= measuredTo);
+  if (!inRange.length) {
+    const lo = Math.min(...listed.map((l) => l.wavenumber));
+    const hi = Math.max(...listed.map((l) => l.wavenumber));
+    throw new CalibrationRefused(
+      `the spectrum covers ${measuredFrom.toFixed(1)}–${measuredTo.toFixed(1)} cm⁻¹, where ${gasName(cell)} has no lines (its lines lie at ${lo.toFixed(0)}–${hi.toFixed(0)} cm⁻¹)`,
+    );
+  }
+  const { peaks: allPeaks, noiseAbsorbance } = absorptionPeaks(x, measured.absorbance, 5);
+  const linesFrom = Math.min(...inRange.map((l) => l.wavenumber));
+  const linesTo = Math.max(...inRange.map((l) => l.wavenumber));
+  // Widths only from peaks among the gas's lines: other gases and other bands in the file say nothing of it.
+  const nearLines = allPeaks.filter((p) => p.wavenumberCm >= linesFrom - 2 && p.wavenumberCm <= linesTo + 2);
+  const resolution = resolutionOf(measured, settings, nearLines, rules);
+  const resolutionCm = resolution.resolutionCm;
+  const margin = Math.max(5 * resolutionCm, 2);
+  const fromCm = Math.max(measuredFrom, linesFrom - margin);
+  const toCm = Math.min(measuredTo, linesTo + margin);
+  const instrument = { kind: "fourier-transform" as const, resolutionCm, apodization: settings.apodization };
+  const spectrum = cellSpectrum({ lines: set.lines, conditions: settings.conditions, intensityScale: set.intensityScale, fromCm, toCm, instrument });
+  const references = calibrationReferences(set.lines, spectrum, resolutionCm, fromCm, toCm, criteria);
+  // Peaks just outside the compared range may still be lines of the gas seen on a wrong scale.
+  const reach = rules.bounds.maxScalePpm * 1e-6 * toCm + rules.bounds.maxOffsetCm + resolutionCm;
+  const peaks = allPeaks.filter((p) => p.wavenumberCm >= fromCm - reach && p.wavenumberCm <= toCm + reach);
+  const result = calibrateSpectrum(gasName(cell), peaks, references, resolutionCm, { fromCm, toCm }, settings.model, rules);
+
+  // For plots: both spectra on the corrected scale, the prediction scaled to the measured peaks.
+  const signal = observedSignal(spectrum);
+  const predictedShape = (nu: number) => {
+    const position = (nu - spectrum.grid.startCm) / spectrum.grid.stepCm;
+    const i = Math.floor(position);
+    if (i < 0 || i + 1 >= signal.length) return 0;
+    const f = position - i;
+    return signal[i] * (1 - f) + signal[i + 1] * f;
+  };
+  const first = x.findIndex((v) => v >= fromCm);
+  let last = x.length - 1;
+  while (last > first && x[last] > toCm) last--;
+  const count = Math.max(0, last - first + 1);
+  const sortedA = Float64Array.from(measured.absorbance.subarray(first, last + 1)).sort();
+  const baseline = sortedA[sortedA.length >> 1] ?? 0;
+  const correctedX = new Float64Array(count);
+  const measuredA = new Float64Array(count);
+  const shape = new Float64Array(count);
+  let cross = 0;
+  let square = 0;
+  for (let k = 0; k < count; k++) {
+    correctedX[k] = correctedWavenumber(result.correction, x[first + k]);
+    measuredA[k] = measured.absorbance[first + k] - baseline;
+    shape[k] = predictedShape(correctedX[k]);
+    cross += shape[k] * measuredA[k];
+    square += shape[k] * shape[k];
+  }
+  const factor = square > 0 ? cross / square : 0;
+  for (let k = 0; k < count; k++) shape[k] *= factor;
+  return {
+    result,
+    resolutionCm,
+    resolutionFrom: resolution.from,
+    resolutionNote: resolution.note,
+    apodization: settings.apodization,
+    noiseAbsorbance,
+    peakCount: peaks.length,
+    set,
+    range: { fromCm, toCm },
+    predicted: { wavenumberCm: correctedX, absorbance: shape },
+    measured: { wavenumberCm: correctedX, absorbance: measuredA },
+    referenceCriteria: criteria,
+  };
+}

@@ -1,0 +1,97 @@
+import type { AbsorbingLine } from "./absorbingLines.ts";
+import { apparentPeak, nearestNeighbourCm } from "./calibrationLines.ts";
+import { observedSignal, type CellSpectrum } from "./cellTransmittance.ts";
+import type { Line, WavenumberCm } from "./types.ts";
+
+/** Which predicted lines may serve as references when a measured spectrum is calibrated. */
+export interface ReferenceCriteria {
+  /** Lines weaker than this fraction of the gas's strongest line in the window are not listed. */
+  minRelativeStrength: number;
+  /** Blended: a line at least this fraction of the candidate's strength within one resolution. */
+  blendFraction: number;
+  /**
+   * A reference is used only when its standard uncertainty is at most this fraction of R: then
+   * it cannot be confused with a neighbour and cannot dominate the fit by a model error the ±
+   * does not show. R/4 is our own rule (common practice, no source), stated on every output.
+   */
+  maxUncertaintyFraction: number;
+  /**
+   * The predicted peak shift (blends, ILS sidelobes of neighbours) rests on modelled
+   * intensities, widths and apodization: this fraction of it enters the reference's ± (our bound).
+   */
+  peakShiftUncertaintyFraction: number;
+}
+
+export const defaultReferenceCriteria: ReferenceCriteria = {
+  minRelativeStrength: 0.01,
+  blendFraction: 0.1,
+  maxUncertaintyFraction: 0.25,
+  peakShiftUncertaintyFraction: 0.25,
+};
+
+export interface CalibrationReference {
+  species: string;
+  band: string;
+  label: string;
+  /** Zero-pressure line position, cm⁻¹, and its standard uncertainty. */
+  wavenumber: WavenumberCm;
+  wavenumberUncertainty: WavenumberCm;
+  positionStatus: Line["positionStatus"];
+  relativeToStrongest: number;
+  /** Where the instrument should show the peak (the apparent peak), cm⁻¹; null when it shows none of its own. */
+  referenceCm: WavenumberCm | null;
+  /** ± of referenceCm: the position's and part of the peak shift, in quadrature. */
+  referenceUncertaintyCm: WavenumberCm;
+  peakShiftCm: WavenumberCm | null;
+  /** Nearest line at least blendFraction as strong, cm⁻¹ (null if none). */
+  nearestNeighbourCm: WavenumberCm | null;
+  blended: boolean;
+  /** True when the reference's ± is small enough against R to use it. */
+  precise: boolean;
+}
+
+/**
+ * Every line of the gas in [fromCm, toCm] at least minRelativeStrength of its strongest line there,
+ * with the apparent peak the predicted cell spectrum shows at resolution R (same conditions,
+ * same instrument line shape as the measurement), which is the reference a measured peak is
+ * compared with.
+ */
+export function calibrationReferences(
+  lines: readonly AbsorbingLine[],
+  spectrum: CellSpectrum,
+  resolutionCm: WavenumberCm,
+  fromCm: WavenumberCm,
+  toCm: WavenumberCm,
+  criteria: ReferenceCriteria = defaultReferenceCriteria,
+): CalibrationReference[] {
+  const sorted = [...lines].sort((a, b) => a.wavenumber - b.wavenumber);
+  let strongest = 0;
+  for (const l of sorted) if (l.wavenumber >= fromCm && l.wavenumber <= toCm && l.intensity > strongest) strongest = l.intensity;
+  if (strongest === 0) return [];
+  const signal = observedSignal(spectrum);
+  const out: CalibrationReference[] = [];
+  for (let i = 0; i < sorted.length; i++) {
+    const line = sorted[i];
+    if (line.wavenumber < fromCm || line.wavenumber > toCm || line.intensity < criteria.minRelativeStrength * strongest) continue;
+    const nearest = nearestNeighbourCm(sorted, i, criteria.blendFraction * line.intensity);
+    const apparent = apparentPeak(signal, spectrum, line.wavenumber, resolutionCm / 2);
+    const shift = apparent === null ? null : apparent - line.wavenumber;
+    const uncertainty = Math.hypot(line.wavenumberUncertainty, criteria.peakShiftUncertaintyFraction * (shift ?? 0));
+    out.push({
+      species: line.species,
+      band: line.band,
+      label: line.label,
+      wavenumber: line.wavenumber,
+      wavenumberUncertainty: line.wavenumberUncertainty,
+      positionStatus: line.positionStatus,
+      relativeToStrongest: line.intensity / strongest,
+      referenceCm: apparent,
+      referenceUncertaintyCm: uncertainty,
+      peakShiftCm: shift,
+      nearestNeighbourCm: nearest,
+      blended: apparent === null || (nearest !== null && nearest <= resolutionCm),
+      precise: uncertainty <= criteria.maxUncertaintyFraction * resolutionCm,
+    });
+  }
+  return out;
+}

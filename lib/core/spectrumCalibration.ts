@@ -1,0 +1,249 @@
+import type { AbsorptionPeak } from "./absorptionPeaks.ts";
+import type { CalibrationReference } from "./calibrationReferences.ts";
+import { CoreInputError } from "./coreInputError.ts";
+import { defaultScaleSearchBounds, hypothesisWavenumber, searchScale, type ScaleHypothesis, type ScaleSearchBounds } from "./scaleSearch.ts";
+import type { WavenumberCm } from "./types.ts";
+import {
+  correctedWavenumber,
+  minimumLines,
+  robustWavenumberCorrection,
+  type CorrectionModel,
+  type CorrectionPoint,
+  type WavenumberCorrection,
+} from "./wavenumberCorrection.ts";
+
+/** A calibration the data do not support: the message is one sentence for the user. */
+export class CalibrationRefused extends CoreInputError {
+  constructor(message: string) {
+    super(message);
+    this.name = "CalibrationRefused";
+  }
+}
+
+/** Our own thresholds (common practice, no source); every output states them. */
+export interface SpectrumCalibrationRules {
+  /** A peak this many times the noise or more counts as measured well enough to use. */
+  minSignalToNoise: number;
+  /**
+   * Saturated: a peak at least this high above its baseline (transmittance ≤ 10 % at the
+   * apparent peak), or a flat top. There the detector's nonlinearity and the unresolved line
+   * core distort the shape the position is read from.
+   */
+  saturationAbsorbance: number;
+  /**
+   * Blended by a strong neighbour: a measured peak within this many resolutions, at least twice
+   * as high and at least half the saturation level, widens in absorbance beyond what an optically
+   * thin prediction gives and pulls the line's apparent peak (seen in real HCl cells: the H³⁷Cl
+   * lines beside strong H³⁵Cl lines).
+   */
+  strongNeighbourResolutions: number;
+  /** At least this fraction of the strong references (≥ 10 % of the strongest) must find a peak. */
+  minMatchedFraction: number;
+  /** Refuse when a different assignment gathers at least this fraction of the best one's votes. */
+  ambiguityRatio: number;
+  bounds: ScaleSearchBounds;
+}
+
+export const defaultSpectrumCalibrationRules: SpectrumCalibrationRules = {
+  minSignalToNoise: 10,
+  saturationAbsorbance: 1,
+  strongNeighbourResolutions: 3,
+  minMatchedFraction: 0.5,
+  ambiguityRatio: 0.8,
+  bounds: defaultScaleSearchBounds,
+};
+
+export type RejectionReason = "weak" | "saturated" | "blended" | "uncertain-reference" | "residual";
+
+export interface CalibratedLine {
+  reference: CalibrationReference;
+  peak: AbsorptionPeak | null;
+  /** reference − corrected measured position, cm⁻¹ (null without a peak). */
+  residualCm: WavenumberCm | null;
+  /** Measured and reference ± in quadrature, cm⁻¹ (null without a peak). */
+  sigmaCm: WavenumberCm | null;
+  used: boolean;
+  reason: RejectionReason | null;
+  /** Why, in words, for an unused line. */
+  detail: string | null;
+}
+
+export interface SpectrumCalibrationResult {
+  gasName: string;
+  resolutionCm: WavenumberCm;
+  correction: WavenumberCorrection;
+  /** Root mean square of the used lines' residuals, cm⁻¹. */
+  rmsResidualCm: WavenumberCm;
+  usedCount: number;
+  lines: CalibratedLine[];
+  /** The assignment vote: the winner and how close the next distinct assignment came (0–1). */
+  assignment: ScaleHypothesis;
+  runnerUpRatio: number;
+  /** Measured peaks no listed line of the gas explains. */
+  unassignedPeakCount: number;
+  rules: SpectrumCalibrationRules;
+}
+
+const fmt = (x: number, digits: number) => x.toFixed(digits);
+
+function strongNeighbour(peaks: readonly AbsorptionPeak[], own: AbsorptionPeak, resolutionCm: number, rules: SpectrumCalibrationRules): AbsorptionPeak | null {
+  let found: AbsorptionPeak | null = null;
+  for (const p of peaks) {
+    if (p === own || Math.abs(p.wavenumberCm - own.wavenumberCm) > rules.strongNeighbourResolutions * resolutionCm) continue;
+    if (p.heightAbsorbance >= 2 * own.heightAbsorbance && p.heightAbsorbance >= 0.5 * rules.saturationAbsorbance) {
+      if (!found || p.heightAbsorbance > found.heightAbsorbance) found = p;
+    }
+  }
+  return found;
+}
+
+/**
+ * Calibrate a measured spectrum's wavenumber scale against predicted references: assign peaks
+ * by an exhaustive vote (searchScale), sort out lines that cannot be trusted (saturated, blended,
+ * weak, reference too uncertain), fit the correction by weighted least squares with the outlier
+ * rule of robustWavenumberCorrection, and refuse — CalibrationRefused — whenever the data do not
+ * support an answer.
+ */
+export function calibrateSpectrum(
+  gasName: string,
+  peaks: readonly AbsorptionPeak[],
+  references: readonly CalibrationReference[],
+  resolutionCm: WavenumberCm,
+  range: { fromCm: WavenumberCm; toCm: WavenumberCm },
+  model: CorrectionModel,
+  rules: SpectrumCalibrationRules = defaultSpectrumCalibrationRules,
+): SpectrumCalibrationResult {
+  const span = `${fmt(range.fromCm, 1)}–${fmt(range.toCm, 1)} cm⁻¹`;
+  const voters = references.filter((r) => r.referenceCm !== null && r.precise && !r.blended);
+  if (!voters.length) {
+    throw new CalibrationRefused(`no line of ${gasName} in ${span} is precise and isolated enough to serve as a reference at ${resolutionCm} cm⁻¹ resolution`);
+  }
+  if (!peaks.length) throw new CalibrationRefused(`no absorption peak stands out of the noise in ${span}: this does not look like a spectrum of ${gasName}`);
+  const tolerance = resolutionCm / 4;
+  let tallest = 0;
+  for (const p of peaks) if (p.heightAbsorbance > tallest) tallest = p.heightAbsorbance;
+  let strongestVoter = 0;
+  for (const r of voters) if (r.relativeToStrongest > strongestVoter) strongestVoter = r.relativeToStrongest;
+  const search = searchScale(
+    peaks.map((p) => ({ wavenumberCm: p.wavenumberCm, weight: p.heightAbsorbance / tallest })),
+    voters.map((r) => ({ referenceCm: r.referenceCm!, weight: r.relativeToStrongest / strongestVoter })),
+    tolerance,
+    rules.bounds,
+  );
+  const reach = `±${rules.bounds.maxScalePpm} ppm and ±${rules.bounds.maxOffsetCm} cm⁻¹`;
+  if (!search.best) throw new CalibrationRefused(`no peak of the spectrum lies within ${reach} of a line of ${gasName}: this does not look like ${gasName}`);
+  const best = search.best;
+
+  // Assign each listed line, strongest first, to the nearest free peak under the winning hypothesis.
+  const corrected = peaks.map((p) => hypothesisWavenumber(best, p.wavenumberCm));
+  const claimed = new Set<number>();
+  const peakOf = new Map<CalibrationReference, number>();
+  for (const ref of [...references].sort((a, b) => b.relativeToStrongest - a.relativeToStrongest)) {
+    const target = ref.referenceCm ?? ref.wavenumber;
+    const window = tolerance + 2 * ref.referenceUncertaintyCm;
+    let bestPeak = -1;
+    for (let i = 0; i < peaks.length; i++) {
+      if (claimed.has(i)) continue;
+      const d = Math.abs(corrected[i] - target);
+      if (d <= window && (bestPeak < 0 || d < Math.abs(corrected[bestPeak] - target))) bestPeak = i;
+    }
+    if (bestPeak >= 0) {
+      claimed.add(bestPeak);
+      peakOf.set(ref, bestPeak);
+    }
+  }
+  const strongVoters = voters.filter((r) => r.relativeToStrongest >= 0.1 * strongestVoter);
+  const found = strongVoters.filter((r) => peakOf.has(r)).length;
+  if (found < rules.minMatchedFraction * strongVoters.length) {
+    throw new CalibrationRefused(
+      `only ${found} of the ${strongVoters.length} strong lines of ${gasName} expected in ${span} were found within ${reach}: the spectrum does not look like ${gasName}`,
+    );
+  }
+  const runnerUpRatio = search.runnerUp ? search.runnerUp.score / best.score : 0;
+  if (runnerUpRatio >= rules.ambiguityRatio) {
+    const other = search.runnerUp!;
+    throw new CalibrationRefused(
+      `two assignments fit the spectrum almost equally well (shifts of ${fmt(best.offsetAtPivotCm, 3)} and ${fmt(other.offsetAtPivotCm, 3)} cm⁻¹ at ${fmt(best.pivotCm, 1)} cm⁻¹): the lines of ${gasName} cannot be told apart here`,
+    );
+  }
+
+  const lines: CalibratedLine[] = references.map((reference) => {
+    const index = peakOf.get(reference);
+    const peak = index === undefined ? null : peaks[index];
+    const sigma = peak ? Math.hypot(peak.wavenumberUncertaintyCm, reference.referenceUncertaintyCm) : null;
+    const reject = (reason: RejectionReason, detail: string): CalibratedLine => ({
+      reference,
+      peak,
+      residualCm: null,
+      sigmaCm: sigma,
+      used: false,
+      reason,
+      detail,
+    });
+    if (!peak) return reject("weak", "no peak found there");
+    if (peak.flatTop || peak.heightAbsorbance >= rules.saturationAbsorbance) {
+      return reject("saturated", peak.flatTop ? "flat-topped peak" : `peak absorbance ${fmt(peak.heightAbsorbance, 2)} ≥ ${rules.saturationAbsorbance}`);
+    }
+    if (reference.blended || reference.referenceCm === null) {
+      return reject(
+        "blended",
+        reference.referenceCm === null ? "no peak of its own at this resolution" : `a line within ${fmt(reference.nearestNeighbourCm!, 3)} cm⁻¹ (≤ resolution)`,
+      );
+    }
+    const pulling = strongNeighbour(peaks, peak, resolutionCm, rules);
+    if (pulling) {
+      return reject(
+        "blended",
+        `beside a strong peak at ${fmt(pulling.wavenumberCm, 2)} cm⁻¹ (absorbance ${fmt(pulling.heightAbsorbance, 2)}) whose wing the prediction cannot give`,
+      );
+    }
+    if (!reference.precise) return reject("uncertain-reference", `reference ± ${reference.referenceUncertaintyCm.toPrecision(2)} cm⁻¹ > resolution/4`);
+    if (peak.signalToNoise < rules.minSignalToNoise) return reject("weak", `signal-to-noise ${fmt(peak.signalToNoise, 1)} < ${rules.minSignalToNoise}`);
+    return { reference, peak, residualCm: null, sigmaCm: sigma, used: true, reason: null, detail: null };
+  });
+
+  const candidates = lines.filter((l) => l.used);
+  const needed = minimumLines[model];
+  if (candidates.length < needed) {
+    const saturated = lines.filter((l) => l.reason === "saturated").length;
+    if (saturated > 0 && saturated >= lines.filter((l) => l.peak).length / 2) {
+      throw new CalibrationRefused(
+        `${saturated} of the lines found are saturated (absorbance ≥ ${rules.saturationAbsorbance} or flat-topped): lower the pressure, dilute the gas or shorten the path, then record again`,
+      );
+    }
+    throw new CalibrationRefused(
+      `too few lines to calibrate: ${candidates.length} usable line${candidates.length === 1 ? "" : "s"} of ${gasName} in ${span}, the ${model} model needs at least ${needed}`,
+    );
+  }
+  const points: CorrectionPoint[] = candidates.map((l) => ({ measuredCm: l.peak!.wavenumberCm, referenceCm: l.reference.referenceCm!, sigmaCm: l.sigmaCm! }));
+  const { correction, rejected } = robustWavenumberCorrection(model, points);
+  for (const i of rejected) {
+    const line = candidates[i];
+    const residual = points[i].referenceCm - correctedWavenumber(correction, points[i].measuredCm);
+    line.used = false;
+    line.reason = "residual";
+    line.detail = `residual ${residual.toPrecision(2)} cm⁻¹ is ${fmt(Math.abs(residual) / points[i].sigmaCm, 1)} σ`;
+  }
+  let sumSquares = 0;
+  let used = 0;
+  for (const line of lines) {
+    if (!line.peak) continue;
+    line.residualCm = (line.reference.referenceCm ?? line.reference.wavenumber) - correctedWavenumber(correction, line.peak.wavenumberCm);
+    if (line.used) {
+      sumSquares += line.residualCm * line.residualCm;
+      used++;
+    }
+  }
+  return {
+    gasName,
+    resolutionCm,
+    correction,
+    rmsResidualCm: Math.sqrt(sumSquares / used),
+    usedCount: used,
+    lines,
+    assignment: best,
+    runnerUpRatio,
+    unassignedPeakCount: peaks.length - claimed.size,
+    rules,
+  };
+}
