@@ -9,7 +9,7 @@ import { buildGraph, codeFilesUnder, folderCycles, folderOf, libDir, referencesO
 const layers: string[][] = [
   ["core"], // physics: pure functions over plain data
   ["shared"], // build identity, site paths, ticks, index formats, GHS table, command results, job pool
-  ["molecules"], // molecule files: schema, parsing, validation
+  ["molecules", "spectrumFile"], // molecule files: schema, parsing, validation; measured spectrum files (JCAMP-DX, CSV)
   ["atlas"], // which species, bands, temperatures; AtlasEntry
   ["format"], // numbers, tables, CSV/JSON, notes, bench settings as text
   ["plot", "site", "sheet", "browser"], // renderers: only format what the atlas made
