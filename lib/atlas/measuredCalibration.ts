@@ -12,6 +12,7 @@ import {
   type AbsorptionPeak,
   type Apodization,
   type CellConditions,
+  type CellSpectrum,
   type CorrectionModel,
   type ReferenceCriteria,
   type SpectrumCalibrationResult,
@@ -100,9 +101,29 @@ function resolutionOf(
   };
 }
 
+/**
+ * The predicted spectrum is most of the work; the same gas, conditions, instrument and range give
+ * the same one, so the last is kept per cell model (a page recalibrating with another model, a
+ * series of scans of one cell).
+ */
+const lastSpectrum = new WeakMap<CellModel, { key: string; spectrum: CellSpectrum }>();
+
 /** The gas as named inside a sentence. */
 function gasName(cell: CellModel): string {
   return cell.moleculeName.charAt(0).toLowerCase() + cell.moleculeName.slice(1);
+}
+
+/** Fraction of the points in [fromCm, toCm] more than `level` above the baseline (the 5th percentile there). */
+function saturatedFraction(measured: MeasuredAbsorbance, fromCm: number, toCm: number, level: number): number {
+  const values: number[] = [];
+  for (let i = 0; i < measured.wavenumberCm.length; i++) {
+    const x = measured.wavenumberCm[i];
+    if (x >= fromCm && x <= toCm) values.push(measured.absorbance[i]);
+  }
+  if (!values.length) return 0;
+  const sorted = [...values].sort((a, b) => a - b);
+  const baseline = sorted[Math.floor(0.05 * (sorted.length - 1))];
+  return values.filter((v) => v - baseline > level).length / values.length;
 }
 
 /** Calibrate a measured spectrum of one gas against the atlas's predicted spectrum (pure: runs in the browser too). */
@@ -135,12 +156,29 @@ export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbs
   const fromCm = Math.max(measuredFrom, linesFrom - margin);
   const toCm = Math.min(measuredTo, linesTo + margin);
   const instrument = { kind: "fourier-transform" as const, resolutionCm, apodization: settings.apodization };
-  const spectrum = cellSpectrum({ lines: set.lines, conditions: settings.conditions, intensityScale: set.intensityScale, fromCm, toCm, instrument });
+  const key = JSON.stringify([settings.conditions, instrument, fromCm, toCm]);
+  let spectrum = lastSpectrum.get(cell)?.key === key ? lastSpectrum.get(cell)!.spectrum : null;
+  if (!spectrum) {
+    spectrum = cellSpectrum({ lines: set.lines, conditions: settings.conditions, intensityScale: set.intensityScale, fromCm, toCm, instrument });
+    lastSpectrum.set(cell, { key, spectrum });
+  }
   const references = calibrationReferences(set.lines, spectrum, resolutionCm, fromCm, toCm, criteria);
   // Peaks just outside the compared range may still be lines of the gas seen on a wrong scale.
   const reach = rules.bounds.maxScalePpm * 1e-6 * toCm + rules.bounds.maxOffsetCm + resolutionCm;
   const peaks = allPeaks.filter((p) => p.wavenumberCm >= fromCm - reach && p.wavenumberCm <= toCm + reach);
-  const result = calibrateSpectrum(gasName(cell), peaks, references, resolutionCm, { fromCm, toCm }, settings.model, rules);
+  let result: SpectrumCalibrationResult;
+  try {
+    result = calibrateSpectrum(gasName(cell), peaks, references, resolutionCm, { fromCm, toCm }, settings.model, rules);
+  } catch (error) {
+    // A black band has no peaks left to find: say that, not that the gas is wrong.
+    const black = saturatedFraction(measured, linesFrom, linesTo, rules.saturationAbsorbance);
+    if (error instanceof CalibrationRefused && black > 0.05) {
+      throw new CalibrationRefused(
+        `the spectrum is saturated: ${(100 * black).toFixed(0)} % of the points between ${linesFrom.toFixed(0)} and ${linesTo.toFixed(0)} cm⁻¹ absorb more than ${rules.saturationAbsorbance} above the baseline; lower the pressure, dilute the gas or shorten the path, then record again`,
+      );
+    }
+    throw error;
+  }
 
   // For plots: both spectra on the corrected scale, the prediction scaled to the measured peaks.
   const signal = observedSignal(spectrum);

@@ -113,28 +113,36 @@ export interface RobustCorrection {
 }
 
 /**
- * The outlier rule, stated on every output: fit, find the line with the largest normalized
- * residual |r|/σ; reject it when that exceeds 3 × max(1, s), where s = 1.4826 × the median
- * |r|/σ of the lines still in (a robust estimate of the scatter in units of σ); refit; repeat
- * while the model keeps its minimum number of lines. One line at a time, worst first, so one
- * bad line cannot drag good ones out with it.
+ * The outlier rule, stated on every output: take the line with the largest normalized residual
+ * |r|/σ, refit without it, and reject it when it lies more than 3 × max(1, √(χ²/ν of that refit))
+ * of its σ from the refitted correction (a deleted residual: the line cannot hide by pulling the
+ * fit towards itself, and the others' scatter sets the scale). Refit and repeat while the model
+ * keeps more than its minimum number of lines. One line at a time, worst first, so one bad line
+ * cannot drag good ones out with it.
  */
 export function robustWavenumberCorrection(model: CorrectionModel, points: readonly CorrectionPoint[]): RobustCorrection {
   let kept = points.map((_, i) => i);
   const rejected: number[] = [];
-  for (;;) {
-    const correction = fitWavenumberCorrection(
-      model,
-      kept.map((i) => points[i]),
-    );
-    if (kept.length <= minimumLines[model]) return { correction, rejected };
+  let correction = fitWavenumberCorrection(
+    model,
+    kept.map((i) => points[i]),
+  );
+  while (kept.length > minimumLines[model]) {
     const z = kept.map((i) => Math.abs(points[i].referenceCm - correctedWavenumber(correction, points[i].measuredCm)) / points[i].sigmaCm);
-    const sorted = [...z].sort((a, b) => a - b);
-    const spread = Math.max(1, 1.4826 * sorted[sorted.length >> 1]);
     let worst = 0;
     for (let j = 1; j < z.length; j++) if (z[j] > z[worst]) worst = j;
-    if (z[worst] <= 3 * spread) return { correction, rejected };
+    const others = kept.filter((_, j) => j !== worst);
+    const refit = fitWavenumberCorrection(
+      model,
+      others.map((i) => points[i]),
+    );
+    const candidate = points[kept[worst]];
+    const deleted = Math.abs(candidate.referenceCm - correctedWavenumber(refit, candidate.measuredCm)) / candidate.sigmaCm;
+    const spread = refit.degreesOfFreedom > 0 ? Math.max(1, Math.sqrt(refit.reducedChiSquared)) : 1;
+    if (deleted <= 3 * spread) break;
     rejected.push(kept[worst]);
-    kept = kept.filter((_, j) => j !== worst);
+    kept = others;
+    correction = refit;
   }
+  return { correction, rejected };
 }
