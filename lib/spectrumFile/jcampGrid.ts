@@ -5,9 +5,10 @@
 // hold, the declared grid is consistent with the data, and line X values that disagree with it
 // were written badly (rounded, truncated, or summed step by step in single precision by the
 // exporter): the note says by how much, and the declared grid is kept. When NPOINTS does not match
-// the data (a lost line, a wrong header), the declared grid is the inconsistent one: the line X
-// values are used if they fall on one straight scale, and the file is refused if they do not,
-// since then no consistent scale exists.
+// the data, the declared grid is the inconsistent one. If the line X values fall on one straight
+// scale that runs from FIRSTX to LASTX over the points the lines hold, only NPOINTS was wrong and
+// that scale is used; otherwise (a lost data line, a wrong FIRSTX or LASTX) no consistent scale
+// exists and the file is refused.
 import { shortNumber } from "./numberText.ts";
 import { SpectrumFileError } from "./spectrumFileError.ts";
 import { readXCheckValues, type XCheckValue } from "./jcampCheckValues.ts";
@@ -57,18 +58,20 @@ export function jcampAbscissa(
     const mismatch = `##NPOINTS=${nPoints} but the data lines hold ${pointCount} points`;
     if (readable) {
       const line = straightLine(scan.checks);
-      const off = Math.max(...scan.checks.map((c) => Math.abs(c.x - (line.first + c.pointIndex * line.step)) - tolerance(c)));
-      if (off <= 0) {
+      const slack = Math.max(...scan.checks.map(tolerance));
+      const straight = scan.checks.every((c) => Math.abs(c.x - (line.first + c.pointIndex * line.step)) <= tolerance(c));
+      const fromFirstToLast = Math.abs(line.first - firstX) <= slack && Math.abs(line.first + (pointCount - 1) * line.step - lastX) <= slack;
+      if (straight && fromFirstToLast) {
         return {
           x: grid(line.first, line.step, pointCount),
           notes: [
-            `${mismatch}, so FIRSTX, LASTX and NPOINTS do not describe the data; the x values were taken from the X values written at the start of the data lines, which fall on one straight scale (${shortNumber(line.first)} ${unitText} + i · ${shortNumber(line.step)} ${unitText}).`,
+            `${mismatch}; the X values written at the start of the data lines fall on one straight scale from FIRSTX to LASTX over those points (${shortNumber(line.first)} ${unitText} + i · ${shortNumber(line.step)} ${unitText}), so NPOINTS was taken as wrong and that scale was used.`,
           ],
         };
       }
     }
     throw new SpectrumFileError(
-      `${fileName}: ${mismatch}, and the X values on the data lines do not give one straight scale either, so the x values cannot be placed.`,
+      `${fileName}: ${mismatch}, and the X values on the data lines do not run on one straight scale from FIRSTX to LASTX either, so the x values cannot be placed (a data line may be missing).`,
     );
   }
 

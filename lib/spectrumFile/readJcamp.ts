@@ -30,7 +30,7 @@ function theOneSpectrum(fileName: string, entries: Entry[]): { entry: Entry; spe
   }
   const entry = entries[0];
   const dataType = String(entry.dataType ?? record(entry, "DATATYPE") ?? "");
-  if (/NMR|MASS/i.test(dataType)) throw new SpectrumFileError(`${fileName} is a ${dataType.toLowerCase()}, not an infrared spectrum.`);
+  if (/NMR|MASS/i.test(dataType)) throw new SpectrumFileError(`${fileName} is not an infrared spectrum (##DATA TYPE=${dataType}).`);
   if (Object.keys(entry.ntuples ?? {}).length > 0 || record(entry, "NTUPLES") !== undefined || entry.twoD) {
     throw new SpectrumFileError(`${fileName} holds NTUPLES (multi-dimensional) data; bandatlas reads ##XYDATA spectra.`);
   }
