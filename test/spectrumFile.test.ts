@@ -76,6 +76,22 @@ describe("JCAMP-DX files", () => {
     expect(s.instrument).toBeNull();
   });
 
+  it("reports an X check value that is a whole point off", () => {
+    const text = readFileSync(join(fixtures, "spectrumFiles", "compressed.jdx"), "utf8").replace("\n4219A00", "\n4220A00");
+    const s = readSpectrumText(text, "off.jdx");
+    expect(s.wavenumberCm[19]).toBe(2109.5);
+    expect(s.notes.join(" ")).toMatch(
+      /X values at the start of 1 of 4 data lines disagree .* by up to 0\.5 cm⁻¹ \(1 point spacings; line 19 says 2110 where the scale puts 2109\.5\)/,
+    );
+  });
+
+  it("refuses X values written in SQZ form after DIF lines, which make the library count the Y check values as points", () => {
+    const text = readFileSync(join(fixtures, "spectrumFiles", "compressed.jdx"), "utf8").replace(/\n42(\d\d)/g, "\nD2$1");
+    expect(refusal(text, "sqz-x.jdx")).toBe(
+      "sqz-x.jdx: ##NPOINTS=20 but the data lines hold 23 points, and the X values at the start of the data lines are not plain numbers, so the x values cannot be placed.",
+    );
+  });
+
   it("reads MICROMETERS and %T: wavenumber 10⁴/λ, absorbance −log10(T/100), a bare resolution taken as cm⁻¹", () => {
     const s = readFixture("micrometres-percent.jdx");
     expect([s.abscissaUnit, s.abscissaFrom, s.ordinate, s.ordinateFrom]).toEqual(["um", "file", "percent-transmittance", "file"]);
@@ -211,6 +227,12 @@ describe("CSV, TSV and other column text", () => {
     expectInvented(s);
     expect(s.notes).toContain("Every data line ended with a delimiter; the empty last column was ignored.");
     expect(s.notes.join(" ")).toMatch(/Line 2 was read as the column header \("cm-1", "A"\)/);
+  });
+
+  it("reads a CSV whose comments start with ## as a CSV, not as JCAMP-DX", () => {
+    const s = readSpectrumText(`## exported by an invented program\n## 20 points\n${csv(goodRows())}`, "hashes.csv");
+    expect(s.format).toBe("csv");
+    expectInvented(s);
   });
 
   it("reads a file with a byte-order mark and CRLF line ends", () => {

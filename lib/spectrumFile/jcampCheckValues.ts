@@ -16,27 +16,6 @@ export interface XCheckValue {
 
 type Token = { kind: "value" | "dif"; text: string } | { kind: "dup"; count: number };
 
-const sqzDigits: Record<string, number> = {
-  "@": 0,
-  A: 1,
-  B: 2,
-  C: 3,
-  D: 4,
-  E: 5,
-  F: 6,
-  G: 7,
-  H: 8,
-  I: 9,
-  a: -1,
-  b: -2,
-  c: -3,
-  d: -4,
-  e: -5,
-  f: -6,
-  g: -7,
-  h: -8,
-  i: -9,
-};
 const isSqz = (c: string) => /[@A-Ia-i]/.test(c);
 const isDif = (c: string) => /[%J-Rj-r]/.test(c);
 const isDup = (c: string) => /[S-Zs]/.test(c);
@@ -63,11 +42,12 @@ function tokenize(line: string): Token[] {
   return tokens;
 }
 
-/** The value of an AFFN or SQZ token ("4200", "-12.5", "A00" = 100, "j5" = -15), with its decimals. */
+/**
+ * The value of an X written in plain AFFN ("4200", "-12.5"), with its decimals. An X in SQZ form is
+ * not read: jcampconverter then takes the Y check value after a DIF line for a new point.
+ */
 function decodeX(text: string): { value: number; decimals: number } | undefined {
-  const first = text[0];
-  const digits = isSqz(first) ? `${sqzDigits[first] < 0 ? "-" : ""}${Math.abs(sqzDigits[first])}${text.slice(1)}` : text;
-  const normal = digits.replace(",", ".");
+  const normal = text.replace(",", ".");
   if (!/^[+-]?(\d+\.?\d*|\.\d+)$/.test(normal)) return undefined;
   const dot = normal.indexOf(".");
   return { value: Number(normal), decimals: dot < 0 ? 0 : normal.length - dot - 1 };
@@ -75,7 +55,7 @@ function decodeX(text: string): { value: number; decimals: number } | undefined 
 
 /**
  * The X check values of the XYDATA block and the number of points its lines hold, or undefined
- * when the block is not in the (X++(Y..Y)) form or a line's X cannot be read.
+ * when the block is not in the (X++(Y..Y)) form or a line's X is not a plain number.
  */
 export function readXCheckValues(text: string, xFactor: number): { checks: XCheckValue[]; pointCount: number } | undefined {
   const lines = text.split(/\r\n|\n|\r/);

@@ -70,9 +70,12 @@ export function jcampAbscissa(
         };
       }
     }
-    throw new SpectrumFileError(
-      `${fileName}: ${mismatch}, and the X values on the data lines do not run on one straight scale from FIRSTX to LASTX either, so the x values cannot be placed (a data line may be missing).`,
-    );
+    const why = !scan
+      ? "the X values at the start of the data lines are not plain numbers"
+      : !readable
+        ? "the data lines could not be matched to points"
+        : "the X values on the data lines do not run on one straight scale from FIRSTX to LASTX either (a data line may be missing)";
+    throw new SpectrumFileError(`${fileName}: ${mismatch}, and ${why}, so the x values cannot be placed.`);
   }
 
   const step = nPoints > 1 ? (lastX - firstX) / (nPoints - 1) : 0;
@@ -80,7 +83,7 @@ export function jcampAbscissa(
   if (!readable) {
     return {
       x,
-      notes: ["The X values at the start of the data lines could not be matched to points, so they were not compared with FIRSTX, LASTX and NPOINTS."],
+      notes: ["The X values at the start of the data lines could not be read or matched to points, so they were not compared with FIRSTX, LASTX and NPOINTS."],
     };
   }
   const off = scan.checks.filter((c) => Math.abs(c.x - x[c.pointIndex]) > tolerance(c));

@@ -14,5 +14,6 @@ export function readSpectrumText(text: string, fileName: string, options: Spectr
     throw new SpectrumFileError(`${fileName} is larger than the ${maxSpectrumFileBytes / (1024 * 1024)} MB a spectrum file may have.`);
   const content = text.replace(/^\uFEFF/, "");
   if (content.trim() === "") throw new SpectrumFileError(`${fileName} is empty.`);
-  return content.trimStart().startsWith("##") ? readJcamp(content, fileName, options) : readCsv(content, fileName, options);
+  // A JCAMP-DX file opens with a labelled record ("##TITLE="); "## exported by …" is a CSV comment.
+  return /^##\S[^=\n]*=/.test(content.trimStart()) ? readJcamp(content, fileName, options) : readCsv(content, fileName, options);
 }
