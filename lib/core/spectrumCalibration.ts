@@ -79,7 +79,7 @@ export interface SpectrumCalibrationResult {
   /** The assignment vote: the winner and how close the next distinct assignment came (0–1). */
   assignment: ScaleHypothesis;
   runnerUpRatio: number;
-  /** Measured peaks no listed line of the gas explains. */
+  /** Measured peaks at or above the usable signal-to-noise that no listed line of the gas explains. */
   unassignedPeakCount: number;
   rules: SpectrumCalibrationRules;
 }
@@ -243,7 +243,7 @@ export function calibrateSpectrum(
     lines,
     assignment: best,
     runnerUpRatio,
-    unassignedPeakCount: peaks.length - claimed.size,
+    unassignedPeakCount: peaks.filter((p, i) => !claimed.has(i) && p.signalToNoise >= rules.minSignalToNoise).length,
     rules,
   };
 }

@@ -9,3 +9,4 @@ export * from "./fitReport.ts";
 export * from "./cautions.ts";
 export * from "./lineColumns.ts";
 export * from "./findText.ts";
+export * from "./spectrumCalibrationText.ts";

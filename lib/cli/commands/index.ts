@@ -9,6 +9,7 @@ import { runServe, serveHelp } from "./serve.ts";
 import { runSpectrum, spectrumHelp } from "./spectrum.ts";
 import { calibrationLinesHelp, runCalibrationLines } from "./calibrationLines.ts";
 import { fitHelp, runFit } from "./fit.ts";
+import { calibrateHelp, runCalibrate } from "./calibrate.ts";
 
 export type { CommandResult };
 
@@ -28,6 +29,11 @@ export const commands: Record<string, Command> = {
     summary: "strong, isolated lines to calibrate against at a resolution, with their peak shifts",
     help: calibrationLinesHelp,
     run: runCalibrationLines,
+  },
+  calibrate: {
+    summary: "correct an instrument's wavenumber scale from a spectrum of a gas cell it recorded (JCAMP-DX or CSV)",
+    help: calibrateHelp,
+    run: runCalibrate,
   },
   fit: {
     summary: "fit a molecule file's constants to its cited measured lines (constants, uncertainties, correlations, residuals)",

@@ -1,0 +1,154 @@
+import { createHash } from "node:crypto";
+import { readFileSync, statSync } from "node:fs";
+import { basename } from "node:path";
+import { calibrateMeasuredSpectrum, cellModel } from "../../atlas/index.ts";
+import { apodizations, correctionModels, type Apodization, type CorrectionModel } from "../../core/index.ts";
+import { calibrationDocument, calibrationText, moleculeCaution, type CalibrationRun } from "../../format/index.ts";
+import { checkSpectrumFileSize, readSpectrumText, SpectrumFileError, type AbscissaUnit, type OrdinateKind } from "../../spectrumFile/index.ts";
+import { cellConditionsFromOptions, joinUnitWords } from "../cellOptions.ts";
+import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
+import { formatOption, numberOption, parseCommandLine } from "../options.ts";
+import { UsageError } from "../usageError.ts";
+import type { CommandResult } from "../../shared/commandResult.ts";
+
+export const calibrateHelp = `bandatlas calibrate <spectrum file> --gas <molecule> [options]
+
+How wrong an instrument's wavenumber scale is, from a spectrum of a gas cell it recorded: finds
+the absorption peaks, assigns them to the gas's predicted lines (all species at natural
+abundance, apparent peaks at the instrument's resolution), and fits the correction by weighted
+least squares. Refuses when the data do not support a correction.
+
+  <spectrum file>         JCAMP-DX (.jdx, .dx) or CSV/TSV of two columns, at most 50 MB
+  --gas <molecule>        the gas in the cell: id, formula, CAS number or alias (hcl, CO)
+  --model <name>          ${correctionModels.join(", ")} (default scale):
+                            scale      true = measured × (1 + k)
+                            offset     true = measured + c
+                            linear     true = measured × (1 + k) + c
+                            quadratic  true = measured × (1 + k) + c + q·(measured − centre)²
+  --temperature <K>       gas temperature (default 296 K)
+  --pressure <p unit>     total pressure in the cell, e.g. "20 Torr" (default 20 Torr)
+  --path <l unit>         cell path length, e.g. "10 cm" (default 10 cm)
+  --mole-fraction <x>     fraction of the gas in the cell, the rest air (default 1)
+  --resolution <cm⁻¹>     FT resolution (1/max. OPD); default: the file's, else estimated from the peak widths
+  --apodization <name>    ${apodizations.join(", ")} (default triangular)
+  --x cm-1|um|nm          unit of the file's x values when it does not say
+  --y transmittance|percent|absorbance   what the file's y values are when it does not say
+  --format table|json     readable table (default) or JSON
+  --report <file.pdf>     also write a PDF calibration report
+  --molecules <dir>       read molecule files from <dir> instead of the shipped ones
+
+The true wavenumber is measured × (1 + scalePpm·10⁻⁶) + offsetCm. The atlas predicts spectra;
+it does not certify an instrument.`;
+
+const ordinates: Record<string, OrdinateKind> = { transmittance: "transmittance", percent: "percent-transmittance", absorbance: "absorbance" };
+const abscissas: Record<string, AbscissaUnit> = { "cm-1": "cm-1", um: "um", µm: "um", nm: "nm" };
+
+/** Reads the spectrum file whole (size checked first) and its SHA-256; a plain message for any failure. */
+function readSpectrumFile(path: string): { text: string; sha256: string } {
+  let size: number;
+  try {
+    const stat = statSync(path);
+    if (stat.isDirectory()) throw new UsageError(`${path} is a folder; give a spectrum file`);
+    size = stat.size;
+  } catch (error) {
+    if (error instanceof UsageError) throw error;
+    throw new UsageError(`cannot read ${path}: no such file`);
+  }
+  checkSpectrumFileSize(basename(path), size);
+  const bytes = readFileSync(path);
+  return { text: bytes.toString("utf8"), sha256: createHash("sha256").update(bytes).digest("hex") };
+}
+
+export interface CalibrateRequest {
+  run: CalibrationRun;
+  format: "table" | "json";
+  reportPath: string | undefined;
+}
+
+/** The command line turned into one calibration run (exported for the report writer and tests). */
+export function calibrateRun(args: string[]): CalibrateRequest | string {
+  const { values, positionals } = parseCommandLine(
+    "calibrate",
+    joinUnitWords(args),
+    {
+      gas: { type: "string" },
+      model: { type: "string" },
+      temperature: { type: "string" },
+      pressure: { type: "string" },
+      path: { type: "string" },
+      "mole-fraction": { type: "string" },
+      resolution: { type: "string" },
+      apodization: { type: "string" },
+      x: { type: "string" },
+      y: { type: "string" },
+      format: { type: "string" },
+      report: { type: "string" },
+      molecules: { type: "string" },
+    },
+    1,
+  );
+  if (values.help) return calibrateHelp + "\n";
+  if (positionals.length === 0) throw new UsageError("which spectrum file? e.g. `bandatlas calibrate scan.csv --gas hcl` (see bandatlas calibrate --help)");
+  if (values.gas === undefined) throw new UsageError("which gas is in the cell? give --gas, e.g. --gas hcl");
+  const format = formatOption(values.format as string | undefined, ["table", "json"]) as "table" | "json";
+  const model = ((values.model as string | undefined) ?? "scale").toLowerCase();
+  if (!(correctionModels as readonly string[]).includes(model)) throw new UsageError(`--model ${values.model}: use one of ${correctionModels.join(", ")}`);
+  const apodization = ((values.apodization as string | undefined) ?? "triangular").toLowerCase();
+  if (!(apodizations as readonly string[]).includes(apodization))
+    throw new UsageError(`--apodization ${values.apodization}: use one of ${apodizations.join(", ")}`);
+  const ordinateText = values.y as string | undefined;
+  if (ordinateText !== undefined && !(ordinateText.toLowerCase() in ordinates))
+    throw new UsageError(`--y ${ordinateText}: use transmittance, percent or absorbance`);
+  const abscissaText = values.x as string | undefined;
+  if (abscissaText !== undefined && !(abscissaText.toLowerCase() in abscissas)) throw new UsageError(`--x ${abscissaText}: use cm-1, um or nm`);
+  const resolutionCm = values.resolution === undefined ? undefined : numberOption("resolution", values.resolution as string, 0, "cm-1");
+  if (resolutionCm !== undefined && !(resolutionCm > 0 && resolutionCm <= 16))
+    throw new UsageError(`--resolution ${values.resolution}: give a resolution above 0 and at most 16 cm⁻¹`);
+  const reportPath = values.report as string | undefined;
+  if (reportPath !== undefined && !/\.pdf$/i.test(reportPath)) throw new UsageError(`--report ${reportPath}: give a file name ending in .pdf`);
+  const conditions = cellConditionsFromOptions(values);
+  const molecule = loadOneMolecule(moleculesDir(values.molecules as string | undefined), values.gas as string);
+
+  const path = positionals[0];
+  const fileName = basename(path);
+  try {
+    const { text, sha256 } = readSpectrumFile(path);
+    const spectrum = readSpectrumText(text, fileName, {
+      ...(abscissaText ? { abscissa: abscissas[abscissaText.toLowerCase()] } : {}),
+      ...(ordinateText ? { ordinate: ordinates[ordinateText.toLowerCase()] } : {}),
+    });
+    const calibration = calibrateMeasuredSpectrum(
+      cellModel(molecule),
+      { wavenumberCm: spectrum.wavenumberCm, absorbance: spectrum.absorbance, resolutionCm: spectrum.resolutionCm },
+      { conditions, apodization: apodization as Apodization, model: model as CorrectionModel, ...(resolutionCm !== undefined ? { resolutionCm } : {}) },
+    );
+    const run: CalibrationRun = {
+      gas: molecule.id,
+      gasName: molecule.name.charAt(0).toLowerCase() + molecule.name.slice(1),
+      fileName,
+      sha256,
+      spectrum,
+      conditions,
+      calibration,
+      caution: moleculeCaution(molecule),
+      sources: molecule.sources.map((source) => source.citation),
+    };
+    return { run, format, reportPath };
+  } catch (error) {
+    if (error instanceof SpectrumFileError) throw new UsageError(error.message);
+    throw error;
+  }
+}
+
+export async function runCalibrate(args: string[]): Promise<CommandResult | string> {
+  const request = calibrateRun(args);
+  if (typeof request === "string") return request;
+  const { run, format, reportPath } = request;
+  const output = format === "json" ? JSON.stringify(calibrationDocument(run), null, 2) + "\n" : calibrationText(run);
+  if (reportPath !== undefined) {
+    const { writeCalibrationReport } = await import("./calibrationReport.ts");
+    const written = await writeCalibrationReport(run, reportPath);
+    return format === "json" ? output : `${output}wrote ${written}\n`;
+  }
+  return output;
+}

@@ -1,0 +1,224 @@
+import type { CellConditions, RejectionReason } from "../core/index.ts";
+import { standardAtmospherePa } from "../core/index.ts";
+import type { MeasuredCalibration } from "../atlas/index.ts";
+import type { MeasuredSpectrum } from "../spectrumFile/index.ts";
+import { textTable } from "./linesTable.ts";
+
+/** Everything one calibration run produced, as the table, the JSON, the page and the report show it. */
+export interface CalibrationRun {
+  gas: string;
+  gasName: string;
+  fileName: string;
+  sha256: string;
+  spectrum: MeasuredSpectrum;
+  conditions: CellConditions;
+  calibration: MeasuredCalibration;
+  /** The molecule's hazard caution, one paragraph (it ends with the prediction notice). */
+  caution: string;
+  /** The molecule file's sources, one citation each. */
+  sources: string[];
+}
+
+/** A value and its standard uncertainty at the uncertainty's second significant digit. */
+export function withUncertainty(value: number, sigma: number): { value: string; sigma: string } {
+  if (!(sigma > 0) || !Number.isFinite(sigma)) return { value: value.toPrecision(6), sigma: "0" };
+  const decimals = Math.max(0, 1 - Math.floor(Math.log10(sigma)));
+  return { value: value.toFixed(decimals), sigma: sigma.toFixed(decimals) };
+}
+
+const signed = (text: string) => (text.startsWith("-") ? text.replace("-", "−") : `+${text}`);
+/** Wavenumbers of peaks and references: 0.0001 cm⁻¹, below any measured ± here. */
+export const calibrationPositionDigits = 4;
+const position = (x: number | null) => (x === null ? null : Number(x.toFixed(calibrationPositionDigits)));
+
+export const rejectionWords: Record<RejectionReason, string> = {
+  weak: "weak",
+  saturated: "saturated",
+  blended: "blended",
+  "uncertain-reference": "reference too uncertain",
+  residual: "residual (outlier)",
+};
+
+export const correctionModelWords = {
+  scale: "scale: true = measured × (1 + k)",
+  offset: "offset: true = measured + c",
+  linear: "linear: true = measured × (1 + k) + c",
+  quadratic: "quadratic: true = measured × (1 + k) + c + q·(measured − centre)²",
+} as const;
+
+function conditionsText(c: CellConditions): string {
+  return `${c.pathCm} cm cell, ${c.temperatureK} K, ${((c.pressurePa * 760) / standardAtmospherePa).toPrecision(4)} Torr, mole fraction ${c.moleFraction}`;
+}
+
+/** The correction in words, one line per term, for the table, the page and the report's box. */
+export function correctionLines(run: CalibrationRun): string[] {
+  const { result } = run.calibration;
+  const c = result.correction;
+  const lines: string[] = [];
+  if (c.model !== "offset") {
+    const k = withUncertainty(c.scale * 1e6, c.scaleUncertainty * 1e6);
+    lines.push(`scale k = ${signed(k.value)} ± ${k.sigma} ppm`);
+  }
+  if (c.model !== "scale") {
+    const o = withUncertainty(c.offsetCm, c.offsetUncertaintyCm);
+    lines.push(`offset c = ${signed(o.value)} ± ${o.sigma} cm⁻¹`);
+  }
+  if (c.model === "quadratic") {
+    const q = withUncertainty(c.quadraticPerCm, c.quadraticUncertaintyPerCm);
+    lines.push(`quadratic q = ${signed(q.value)} ± ${q.sigma} cm⁻¹ per cm⁻², about ${c.centreCm.toFixed(2)} cm⁻¹`);
+  }
+  if (c.model === "linear" || c.model === "quadratic") lines.push(`correlation of k and c: ${c.scaleOffsetCorrelation.toFixed(3)}`);
+  lines.push(
+    `RMS residual ${result.rmsResidualCm.toPrecision(2)} cm⁻¹ over ${result.usedCount} lines; χ²/ν = ${Number.isFinite(c.reducedChiSquared) ? c.reducedChiSquared.toFixed(2) : "—"}`,
+  );
+  return lines;
+}
+
+/** The stated rules, in one paragraph. */
+export function calibrationRulesText(run: CalibrationRun): string {
+  const r = run.calibration.result.rules;
+  const k = run.calibration.referenceCriteria;
+  return (
+    `Rules (our own, common practice, no source): peaks are assigned by an exhaustive vote over scale errors within ±${r.bounds.maxScalePpm} ppm and offsets within ±${r.bounds.maxOffsetCm} cm⁻¹; ` +
+    `a line is used when its reference ± is at most ${k.maxUncertaintyFraction} × resolution, no line ≥ ${100 * k.blendFraction} % as strong lies within one resolution, ` +
+    `its peak is ≥ ${r.minSignalToNoise} × the noise, below absorbance ${r.saturationAbsorbance} without a flat top, and no peak twice as high (and ≥ ${r.saturationAbsorbance / 2}) lies within ${r.strongNeighbourResolutions} resolutions; ` +
+    `the worst line is rejected while, refitted without it, it lies more than 3 × max(1, √(χ²/ν)) of its σ from the fit. ` +
+    `References are the apparent peaks predicted for this cell and resolution (${Math.round(100 * k.peakShiftUncertaintyFraction)} % of the predicted peak shift is added to their ±); no pressure shift is applied.`
+  );
+}
+
+/** Sentences every output of a calibration carries: what was detected, assumed and left out. */
+export function calibrationNotes(run: CalibrationRun): string[] {
+  const { calibration } = run;
+  const { result } = calibration;
+  const notes = [...run.spectrum.notes, `${calibration.resolutionNote}.`, ...calibration.set.notes];
+  const used = result.lines.filter((l) => l.used);
+  const unvalidated = used.filter((l) => l.reference.positionStatus === "not-validated").length;
+  if (unvalidated > 0) {
+    notes.push(
+      `${unvalidated} of the ${used.length} lines used have predicted positions not validated against measured lines (their ± is the constants' own estimate): the correction is only as good as that ±.`,
+    );
+  }
+  if (result.correction.reducedChiSquared > 1) notes.push("The scatter exceeds the stated ± (χ²/ν > 1): the uncertainties are scaled by √(χ²/ν).");
+  if (result.unassignedPeakCount > 0) {
+    notes.push(
+      `${result.unassignedPeakCount} peak${result.unassignedPeakCount === 1 ? "" : "s"} of the spectrum near the band match no listed line of ${run.gasName} (noise, other gases, or lines weaker than ${100 * calibration.referenceCriteria.minRelativeStrength} % of the strongest).`,
+    );
+  }
+  return notes;
+}
+
+/** The `--format json` document: the shape the issue fixed, with fields added after it. */
+export function calibrationDocument(run: CalibrationRun) {
+  const { calibration } = run;
+  const { result } = calibration;
+  const c = result.correction;
+  const k = withUncertainty(c.scale * 1e6, c.scaleUncertainty * 1e6);
+  const o = withUncertainty(c.offsetCm, c.offsetUncertaintyCm);
+  const q = withUncertainty(c.quadraticPerCm, c.quadraticUncertaintyPerCm);
+  const x = run.spectrum.wavenumberCm;
+  return {
+    gas: run.gas,
+    file: run.fileName,
+    sha256: run.sha256,
+    model: c.model,
+    resolutionCm: calibration.resolutionCm,
+    correction: {
+      scalePpm: c.model === "offset" ? 0 : Number(k.value),
+      scalePpmUncertainty: c.model === "offset" ? 0 : Number(k.sigma),
+      offsetCm: c.model === "scale" ? 0 : Number(o.value),
+      offsetCmUncertainty: c.model === "scale" ? 0 : Number(o.sigma),
+      ...(c.model === "quadratic"
+        ? { quadraticPerCm: Number(q.value), quadraticPerCmUncertainty: Number(q.sigma), quadraticCentreCm: position(c.centreCm) }
+        : {}),
+      scaleOffsetCorrelation: c.model === "linear" || c.model === "quadratic" ? Number(c.scaleOffsetCorrelation.toFixed(3)) : null,
+      reducedChiSquared: Number.isFinite(c.reducedChiSquared) ? Number(c.reducedChiSquared.toFixed(3)) : null,
+      meaning: correctionModelWords[c.model],
+    },
+    rmsResidualCm: Number(result.rmsResidualCm.toPrecision(2)),
+    linesUsed: result.usedCount,
+    lines: result.lines.map((l) => ({
+      label: l.reference.label,
+      species: l.reference.species,
+      band: l.reference.band,
+      reference: position(l.reference.referenceCm ?? l.reference.wavenumber),
+      measured: position(l.peak?.wavenumberCm ?? null),
+      residual: position(l.residualCm),
+      used: l.used,
+      reason: l.reason,
+      detail: l.detail,
+      referenceUncertainty: Number(l.reference.referenceUncertaintyCm.toPrecision(2)),
+      measuredUncertainty: l.peak ? Number(l.peak.wavenumberUncertaintyCm.toPrecision(2)) : null,
+      positionStatus: l.reference.positionStatus,
+      wavenumber: position(l.reference.wavenumber),
+      relativeStrength: Number(l.reference.relativeToStrongest.toPrecision(3)),
+    })),
+    resolution: { cm: calibration.resolutionCm, from: calibration.resolutionFrom, note: calibration.resolutionNote },
+    apodization: calibration.apodization,
+    conditions: run.conditions,
+    spectrum: {
+      format: run.spectrum.format,
+      points: x.length,
+      fromCm: position(x[0]),
+      toCm: position(x[x.length - 1]),
+      ordinate: run.spectrum.ordinate,
+      ordinateFrom: run.spectrum.ordinateFrom,
+      abscissaUnit: run.spectrum.abscissaUnit,
+      abscissaFrom: run.spectrum.abscissaFrom,
+      title: run.spectrum.title,
+      instrument: run.spectrum.instrument,
+      noiseAbsorbance: Number(calibration.noiseAbsorbance.toPrecision(2)),
+    },
+    rules: calibrationRulesText(run),
+    notes: calibrationNotes(run),
+    caution: `${run.caution}`,
+  };
+}
+
+/** The line table's rows, as the CLI and the report print them. */
+export function calibrationLineRows(run: CalibrationRun): { headings: string[]; rows: string[][]; rightAligned: boolean[] } {
+  const headings = ["species", "band", "line", "reference/cm⁻¹", "± ref", "measured/cm⁻¹", "± meas", "residual/cm⁻¹", "used", "why not"];
+  const rows = run.calibration.result.lines.map((l) => [
+    l.reference.species,
+    l.reference.band,
+    l.reference.label,
+    (l.reference.referenceCm ?? l.reference.wavenumber).toFixed(calibrationPositionDigits),
+    l.reference.referenceUncertaintyCm.toPrecision(2),
+    l.peak ? l.peak.wavenumberCm.toFixed(calibrationPositionDigits) : "—",
+    l.peak ? l.peak.wavenumberUncertaintyCm.toPrecision(2) : "—",
+    l.residualCm === null ? "—" : signed(l.residualCm.toFixed(calibrationPositionDigits)),
+    l.used ? "yes" : "no",
+    l.reason ? `${rejectionWords[l.reason]}: ${l.detail}` : "",
+  ]);
+  return { headings, rows, rightAligned: [false, false, false, true, true, true, true, true, false, false] };
+}
+
+/** The readable report of `bandatlas calibrate`. */
+export function calibrationText(run: CalibrationRun): string {
+  const { calibration } = run;
+  const x = run.spectrum.wavenumberCm;
+  const table = calibrationLineRows(run);
+  const box = correctionLines(run);
+  const width = Math.max(...box.map((l) => l.length)) + 2;
+  return [
+    `Wavenumber calibration of ${run.fileName} against ${run.gasName}`,
+    `file SHA-256 ${run.sha256}`,
+    `spectrum: ${run.spectrum.format === "jcamp-dx" ? "JCAMP-DX" : "CSV"}, ${x.length} points, ${x[0].toFixed(2)}–${x[x.length - 1].toFixed(2)} cm⁻¹` +
+      (run.spectrum.title ? `, "${run.spectrum.title}"` : "") +
+      (run.spectrum.instrument ? `, instrument ${run.spectrum.instrument}` : ""),
+    `cell: ${conditionsText(run.conditions)}; FT resolution ${calibration.resolutionCm} cm⁻¹ (${calibration.resolutionFrom}), ${calibration.apodization} apodization`,
+    `model: ${correctionModelWords[calibration.result.correction.model]}`,
+    "",
+    `┌${"─".repeat(width)}┐`,
+    ...box.map((l) => `│ ${l.padEnd(width - 1)}│`),
+    `└${"─".repeat(width)}┘`,
+    "",
+    textTable(table.headings, table.rows, table.rightAligned),
+    "",
+    ...calibrationNotes(run).map((n) => `note: ${n}`),
+    calibrationRulesText(run),
+    "",
+    run.caution,
+    "",
+  ].join("\n");
+}
