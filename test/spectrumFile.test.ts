@@ -309,6 +309,16 @@ describe("real spectra from public teaching laboratories", () => {
     expect(s.wavenumberCm.every((x, i) => i === 0 || x > s.wavenumberCm[i - 1])).toBe(true);
     expect([s.ordinate, s.ordinateFrom]).toEqual(["absorbance", "file"]);
     expect([s.absorbance[0], s.absorbance[3600]]).toEqual([0.0244, 0.0238]);
+    // The file prints 2650.125 as 2650.12 (two decimals): the even 0.125 cm⁻¹ grid is restored.
+    expect(s.wavenumberCm[1]).toBeCloseTo(2650.125, 9);
+    expect(s.notes.some((n) => /printed to 2 decimals .* even grid of step 0\.125000/.test(n))).toBe(true);
+  });
+
+  it("keeps x as printed when it is not within rounding of an even grid", () => {
+    const rows = Array.from({ length: 20 }, (_, i) => `${(2000 + i * 0.5 + (i === 7 ? 0.01 : 0)).toFixed(2)},${(0.1 + 0.01 * i).toFixed(3)}`);
+    const s = readSpectrumText(["cm-1,A", ...rows].join("\n"), "scan.csv");
+    expect(s.wavenumberCm[7]).toBeCloseTo(2003.51, 9);
+    expect(s.notes.some((n) => /even grid/.test(n))).toBe(false);
   });
 });
 

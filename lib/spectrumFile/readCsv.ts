@@ -4,6 +4,7 @@ import { detectLayout, layoutDescription, splitRows } from "./csvLayout.ts";
 import type { MeasuredSpectrum, SpectrumReadOptions } from "./measuredSpectrum.ts";
 import { isInfinityWord, parseNumberField } from "./numberText.ts";
 import { SpectrumFileError } from "./spectrumFileError.ts";
+import { regularizedAbscissa } from "./regularGrid.ts";
 import { abscissaUnitFromWords, abscissaUnitTexts, ordinateFromWords } from "./unitWords.ts";
 
 const isComment = (fields: string[]) => fields.length > 0 && /^(#|\/\/)/.test(fields[0]);
@@ -49,6 +50,7 @@ export function readCsv(text: string, fileName: string, options: SpectrumReadOpt
   const y: number[] = [];
   const lineOf: number[] = [];
   let trailingEmpty = 0;
+  let xDecimals = 0;
   for (let i = dataStart; i < rows.length; i++) {
     if (isBlank(rows[i]) || isComment(rows[i])) continue;
     const fields = withoutTrailingEmpty(rows[i]);
@@ -64,16 +66,20 @@ export function readCsv(text: string, fileName: string, options: SpectrumReadOpt
     });
     x.push(values[0]);
     y.push(values[1]);
+    xDecimals = Math.max(xDecimals, /[.,](\d+)(?:$|[eE])/.exec(fields[0])?.[1].length ?? 0);
     lineOf.push(i + 1);
   }
   if (trailingEmpty > 0)
     notes.push(`${trailingEmpty === x.length ? "Every data line" : `${trailingEmpty} data lines`} ended with a delimiter; the empty last column was ignored.`);
 
+  // Only plain decimals say how x was rounded; an exponent form says nothing about the grid.
+  const even = x.length && !/e/i.test(rows[dataStart][0]) ? regularizedAbscissa(Float64Array.from(x), xDecimals) : null;
+  if (even) notes.push(even.note);
   return buildSpectrum(
     {
       fileName,
       format: "csv",
-      x: Float64Array.from(x),
+      x: even ? even.x : Float64Array.from(x),
       y: Float64Array.from(y),
       placeOf: (index) => `${fileName} line ${lineOf[index]}`,
       abscissa: abscissaUnit && { unit: abscissaUnit, words: header[0] },
