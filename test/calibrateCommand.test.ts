@@ -1,0 +1,169 @@
+// `bandatlas calibrate` end to end: the two real teaching-laboratory HCl spectra (MIT-licensed
+// copies in test/fixtures/spectra, provenance beside them) and every kind of bad input.
+import { mkdtempSync, readdirSync, truncateSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { describe, expect, it } from "vitest";
+import { runCli } from "../lib/cli/main.ts";
+import { cellModel, defaultCellConditions, selectMolecule } from "../lib/atlas/index.ts";
+import { shippedMolecules } from "./helpers/shipped.ts";
+import { measuredSpectrum, seededRandom, trueSpectrum } from "./helpers/syntheticSpectrum.ts";
+
+const spectra = join(import.meta.dirname, "fixtures", "spectra");
+const hunter = join(spectra, "hcl-dcl-hunter", "HCl_spectrum.csv");
+const pitt = join(spectra, "hcl-dcl-pitt", "Freeman.csv");
+const dir = mkdtempSync(join(tmpdir(), "bandatlas-calibrate-"));
+
+interface Document {
+  correction: { scalePpm: number; scalePpmUncertainty: number; offsetCm: number; offsetCmUncertainty: number };
+  rmsResidualCm: number;
+  linesUsed: number;
+  lines: Array<{
+    label: string;
+    species: string;
+    reference: number;
+    measured: number | null;
+    residual: number | null;
+    used: boolean;
+    reason: string | null;
+    referenceUncertainty: number;
+    measuredUncertainty: number | null;
+  }>;
+}
+
+async function calibrate(...args: string[]): Promise<Document> {
+  const { stdout, stderr, exitCode } = await runCli(["calibrate", ...args, "--format", "json"]);
+  expect(stderr).toBe("");
+  expect(exitCode).toBe(0);
+  return JSON.parse(stdout) as Document;
+}
+
+async function refusal(...args: string[]): Promise<string> {
+  const { stdout, stderr, exitCode } = await runCli(["calibrate", ...args]);
+  expect(stdout).toBe("");
+  expect(exitCode).toBe(2);
+  expect(stderr).not.toMatch(/\n\s+at |internal error/);
+  expect(stderr.trim().split("\n")).toHaveLength(1);
+  return stderr;
+}
+
+/** A synthetic spectrum (our own cell model, invented measurement) written as CSV. */
+function syntheticCsv(name: string, conditions = defaultCellConditions, fromCm = 2000, toCm = 2260): string {
+  const cell = cellModel(selectMolecule(shippedMolecules(), "co"));
+  const truth = trueSpectrum(cell, conditions, 0.5, "triangular", fromCm - 5, toCm + 5);
+  const m = measuredSpectrum(
+    truth,
+    fromCm,
+    toCm,
+    0.125,
+    { scale: 0, offsetCm: 0, noiseAbsorbance: 0.002, tiltPerCm: 0, baselineAbsorbance: 0.01 },
+    seededRandom(9),
+  );
+  const path = join(dir, name);
+  writeFileSync(
+    path,
+    [
+      "# invented spectrum made by the bandatlas cell model",
+      "wavenumber (cm-1),absorbance",
+      ...Array.from(m.wavenumberCm, (x, i) => `${x.toFixed(4)},${m.absorbance[i].toFixed(5)}`),
+    ].join("\n"),
+  );
+  return path;
+}
+
+describe("real spectra from two teaching-laboratory FTIRs", () => {
+  it("each used line's residual lies within 3σ, and the scale model agrees with the linear model", async () => {
+    for (const file of [hunter, pitt]) {
+      const scale = await calibrate(file, "--gas", "hcl");
+      expect(scale.linesUsed).toBeGreaterThanOrEqual(3);
+      for (const line of scale.lines.filter((l) => l.used)) {
+        const sigma = Math.hypot(line.referenceUncertainty, line.measuredUncertainty!);
+        expect(Math.abs(line.residual!)).toBeLessThan(3 * sigma + 1e-4);
+      }
+      // Freeman.csv leaves 3 lines (its strong H³⁵Cl lines are saturated): enough for a scale, too few for two terms.
+      if (file === pitt) continue;
+      const linear = await calibrate(file, "--gas", "hcl", "--model", "linear");
+      // The two models describe the same instrument at the band: their corrections at 2900 cm⁻¹ agree within the linear model's ±.
+      const atBand = (d: Document) => 2900 * d.correction.scalePpm * 1e-6 + d.correction.offsetCm;
+      expect(Math.abs(atBand(scale) - atBand(linear))).toBeLessThan(
+        3 * Math.hypot(2900e-6 * linear.correction.scalePpmUncertainty, linear.correction.offsetCmUncertainty) + 0.01,
+      );
+    }
+  });
+
+  it("after their corrections, the two instruments put H³⁵Cl R(0) and P(1) at the same wavenumber within the combined ±", async () => {
+    const a = await calibrate(hunter, "--gas", "hcl");
+    const b = await calibrate(pitt, "--gas", "hcl");
+    // Raw, the two files disagree by ≈0.2 cm⁻¹ at these lines (a 7·10⁻⁵ scale difference).
+    for (const label of ["R(0)", "P(1)"]) {
+      const lineA = a.lines.find((l) => l.species === "1H35Cl" && l.label === label)!;
+      const lineB = b.lines.find((l) => l.species === "1H35Cl" && l.label === label)!;
+      const corrected = (d: Document, measured: number) => measured * (1 + d.correction.scalePpm * 1e-6) + d.correction.offsetCm;
+      const raw = Math.abs(lineA.measured! - lineB.measured!);
+      const after = Math.abs(corrected(a, lineA.measured!) - corrected(b, lineB.measured!));
+      const sigma = Math.hypot(
+        2906 * a.correction.scalePpmUncertainty * 1e-6,
+        2906 * b.correction.scalePpmUncertainty * 1e-6,
+        lineA.measuredUncertainty!,
+        lineB.measuredUncertainty!,
+      );
+      expect(raw).toBeGreaterThan(0.1);
+      expect(after).toBeLessThan(3 * sigma + 0.01);
+    }
+  });
+
+  it("prints the correction box, every line's reason and the caution in the table", async () => {
+    const { stdout, exitCode } = await runCli(["calibrate", pitt, "--gas", "hcl"]);
+    expect(exitCode).toBe(0);
+    expect(stdout).toMatch(/│ scale k = −\d+\.\d ± \d\.\d ppm\s+│/);
+    expect(stdout).toMatch(/saturated: peak absorbance 1\.\d\d ≥ 1/);
+    expect(stdout).toMatch(/blended: beside a strong peak/);
+    expect(stdout).toMatch(/does not certify an instrument/);
+    expect(stdout).toMatch(/safety data sheet/);
+  });
+});
+
+describe("bad input: one sentence, exit 2, nothing written", () => {
+  it("not a spectrum, empty, one column, NaN, µm without a unit", async () => {
+    expect(await refusal(join(import.meta.dirname, "..", "molecules", "hcl.yaml"), "--gas", "hcl")).toMatch(/hcl\.yaml does not look like a spectrum/);
+    writeFileSync(join(dir, "empty.csv"), "");
+    expect(await refusal(join(dir, "empty.csv"), "--gas", "hcl")).toMatch(/empty\.csv is empty/);
+    writeFileSync(join(dir, "one.csv"), Array.from({ length: 30 }, (_, i) => `${2000 + i}`).join("\n"));
+    expect(await refusal(join(dir, "one.csv"), "--gas", "co")).toMatch(/one\.csv has only one column/);
+    writeFileSync(join(dir, "nan.csv"), ["x,y", ...Array.from({ length: 30 }, (_, i) => `${2000 + i},${i === 12 ? "NaN" : 0.1}`)].join("\n"));
+    expect(await refusal(join(dir, "nan.csv"), "--gas", "co")).toMatch(/nan\.csv line 14: "NaN" is not a/);
+    writeFileSync(join(dir, "um.csv"), Array.from({ length: 30 }, (_, i) => `${(4.5 + i * 0.01).toFixed(2)},0.1`).join("\n"));
+    expect(await refusal(join(dir, "um.csv"), "--gas", "co")).toMatch(/um\.csv: the x values .* look like micrometres.*--x um/);
+  });
+
+  it("a file over 50 MB is refused before it is read", async () => {
+    const big = join(dir, "big.csv");
+    writeFileSync(big, "");
+    truncateSync(big, 51 * 1024 * 1024);
+    expect(await refusal(big, "--gas", "co")).toMatch(/big\.csv is 51\.0 MB, more than the 50 MB/);
+  });
+
+  it("the wrong gas, too few lines, saturated lines", async () => {
+    expect(await refusal(hunter, "--gas", "co")).toMatch(/covers 2650\.0–3100\.0 cm⁻¹, where carbon monoxide has no lines/);
+    expect(await refusal(syntheticCsv("co.csv"), "--gas", "n2o")).toMatch(/does not look like nitrous oxide|cannot be told apart|too few lines/);
+    expect(await refusal(syntheticCsv("narrow.csv", defaultCellConditions, 2145, 2153), "--gas", "co", "--model", "linear", "--resolution", "0.5")).toMatch(
+      /too few lines to calibrate: \d usable lines? of carbon monoxide/,
+    );
+    const black = syntheticCsv("black.csv", { temperatureK: 296, pressurePa: 101325, moleFraction: 1, pathCm: 100 });
+    expect(await refusal(black, "--gas", "co", "--pressure", "1", "atm", "--path", "1", "m")).toMatch(
+      /saturated.*lower the pressure, dilute the gas or shorten the path/,
+    );
+  });
+
+  it("a failed calibration writes no report", async () => {
+    const before = readdirSync(dir).filter((f) => f.endsWith(".pdf"));
+    await refusal(hunter, "--gas", "co", "--report", join(dir, "r.pdf"));
+    expect(readdirSync(dir).filter((f) => f.endsWith(".pdf"))).toEqual(before);
+  });
+
+  it("options: an unknown model, a missing gas, a missing file", async () => {
+    expect(await refusal(hunter, "--gas", "hcl", "--model", "cubic")).toMatch(/--model cubic: use one of scale, offset, linear, quadratic/);
+    expect(await refusal(hunter)).toMatch(/give --gas/);
+    expect(await refusal(join(dir, "nothing.csv"), "--gas", "hcl")).toMatch(/cannot read .*nothing\.csv: no such file/);
+  });
+});
