@@ -123,6 +123,43 @@ describe("real spectra from two teaching-laboratory FTIRs", () => {
   });
 });
 
+describe("a JCAMP-DX file", () => {
+  it("a synthetic CO cell written as JCAMP-DX (XFACTOR/YFACTOR, transmittance, ##RESOLUTION) with a +150 ppm scale error: recovered within 3σ", async () => {
+    const cell = cellModel(selectMolecule(shippedMolecules(), "co"));
+    const truth = trueSpectrum(cell, defaultCellConditions, 0.5, "triangular", 1995, 2265);
+    const error = { scale: 150e-6, offsetCm: 0, noiseAbsorbance: 0.001, tiltPerCm: 0, baselineAbsorbance: 0 };
+    const m = measuredSpectrum(truth, 2000, 2260, 0.125, error, seededRandom(21));
+    const y = Array.from(m.absorbance, (a) => Math.round(10 ** -a * 1e5));
+    const rows: string[] = [];
+    for (let i = 0; i < y.length; i += 10) rows.push(`${Math.round(m.wavenumberCm[i] * 1000)} ${y.slice(i, i + 10).join(" ")}`);
+    const text = [
+      "##TITLE=invented CO cell spectrum made by the bandatlas cell model",
+      "##JCAMP-DX=4.24",
+      "##DATA TYPE=INFRARED SPECTRUM",
+      "##XUNITS=1/CM",
+      "##YUNITS=TRANSMITTANCE",
+      "##RESOLUTION=0.5",
+      "##XFACTOR=0.001",
+      "##YFACTOR=0.00001",
+      `##FIRSTX=${m.wavenumberCm[0]}`,
+      `##LASTX=${m.wavenumberCm[y.length - 1]}`,
+      `##NPOINTS=${y.length}`,
+      `##FIRSTY=${y[0] * 1e-5}`,
+      "##XYDATA=(X++(Y..Y))",
+      ...rows,
+      "##END=",
+    ].join("\n");
+    const path = join(dir, "co-cell.jdx");
+    writeFileSync(path, text);
+    const doc = await calibrate(path, "--gas", "co");
+    // true = measured·(1 + k): the file's scale is 150 ppm short, so k = +150 ppm.
+    expect(Math.abs(doc.correction.scalePpm - 150)).toBeLessThan(3 * doc.correction.scalePpmUncertainty);
+    expect(doc.correction.scalePpmUncertainty).toBeLessThan(5);
+    const { stdout } = await runCli(["calibrate", path, "--gas", "co"]);
+    expect(stdout).toMatch(/FT resolution 0\.5 cm⁻¹ \(file\)/);
+  });
+});
+
 describe("bad input: one sentence, exit 2, nothing written", () => {
   it("not a spectrum, empty, one column, NaN, µm without a unit", async () => {
     expect(await refusal(join(import.meta.dirname, "..", "molecules", "hcl.yaml"), "--gas", "hcl")).toMatch(/hcl\.yaml does not look like a spectrum/);
