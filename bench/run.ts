@@ -2,6 +2,7 @@
 // of the tests: machines are noisy. The full run takes several minutes (the 500-molecule builds);
 // --quick uses smaller atlases (scale 10 and 20, browser 50) and finishes in one to two minutes.
 import { benchBrowserSearch } from "./browserSearch.ts";
+import { benchCalibrateSpectrum } from "./calibrateSpectrum.ts";
 import { benchCellTransmittance } from "./cellTransmittance.ts";
 import { benchCoreLines } from "./coreLines.ts";
 import { benchIncremental } from "./incrementalBuild.ts";
@@ -14,7 +15,7 @@ const known = ["--quick", "--help", "-h"];
 if (args.includes("--help") || args.includes("-h") || args.some((a) => a.startsWith("-") && !known.includes(a))) {
   console.log(`npm run bench [-- [--quick] [section-prefix]]
 
-Prints every speed figure with its target. Sections: core, sheets, build, scale, incremental,
+Prints every speed figure with its target. Sections: core, cell, calibrate, sheets, build, scale, incremental,
 browser (a prefix picks them). The full run builds atlases of 50, 200 and 500 invented molecules
 and takes many minutes; --quick uses 10 and 20 (and 50 for the browser) instead.`);
   process.exit(args.includes("--help") || args.includes("-h") ? 0 : 2);
@@ -31,6 +32,7 @@ const sections: Array<{ name: string; run: () => Promise<string[]> | string[] }>
     },
   },
   { name: "cell: CO transmittance, 300 cm⁻¹ at 0.002 cm⁻¹, all species, FT 0.5 cm⁻¹, Node", run: benchCellTransmittance },
+  { name: "calibrate: a 65 536-point CO spectrum from CSV text to the correction, Node", run: benchCalibrateSpectrum },
   { name: "sheets: one bench sheet, one core", run: benchSheetRender },
   { name: "build: shipped atlas, cold, beside a bare Eleventy baseline", run: benchShippedBuild },
   { name: "scale: invented molecules, full builds", run: () => benchScale(quick ? [10, 20] : [50, 200, 500]) },
