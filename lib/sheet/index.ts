@@ -5,3 +5,4 @@ export * from "./sheetContent.ts";
 export * from "./renderBenchSheet.ts";
 export * from "./writeFileAtomic.ts";
 export * from "./writeBenchSheets.ts";
+export * from "./calibrationReport.ts";

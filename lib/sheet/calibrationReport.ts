@@ -1,0 +1,119 @@
+import { createRequire } from "node:module";
+import PDFDocument from "pdfkit";
+import { calibrationNotes, calibrationReportFacts, calibrationRulesText, correctionLines, correctionModelWords, type CalibrationRun } from "../format/index.ts";
+import { describeBuild } from "../shared/buildIdentity.ts";
+import { drawCalibrationLineTable } from "./calibrationLineTable.ts";
+import { CalibrationPageFlow } from "./calibrationPageFlow.ts";
+import {
+  drawCorrectionBox,
+  drawFacts,
+  drawParagraph,
+  drawReportCaution,
+  drawReportFooter,
+  drawReportHeader,
+  drawReportReminder,
+  drawSectionHeading,
+  reportFooterHeightPt,
+  reportMonoFont,
+  reportMonoFontFile,
+} from "./calibrationReportParts.ts";
+import { drawResidualPlot, residualPlotHeight } from "./calibrationResidualPlot.ts";
+import { displayText } from "./displayText.ts";
+import { paperSizes, type PaperName } from "./paper.ts";
+import { sheetFont } from "./sheetFonts.ts";
+import { buildDate, type SheetBuildIdentity } from "./sheetInput.ts";
+import { marginPt, sheetFonts } from "./sheetStyle.ts";
+
+const require = createRequire(import.meta.url);
+
+export interface CalibrationReportRequest {
+  run: CalibrationRun;
+  build: SheetBuildIdentity;
+  paper?: PaperName;
+}
+
+function newDocument(run: CalibrationRun, build: SheetBuildIdentity, paper: PaperName): PDFKit.PDFDocument {
+  const size = paperSizes[paper];
+  // The build's date, not the clock: the same spectrum and build give the same bytes.
+  const date = buildDate(build);
+  const doc = new PDFDocument({
+    size: [size.widthPt, size.heightPt],
+    margin: 0,
+    autoFirstPage: false,
+    bufferPages: true,
+    displayTitle: true,
+    lang: "en",
+    info: {
+      Title: `Wavenumber calibration report: ${displayText(run.fileName)}`,
+      Subject: `Wavenumber scale of a spectrum checked against predicted lines of ${run.gasName}; not a certificate`,
+      Creator: `bandatlas ${build.version} (${build.commit})`,
+      Producer: "bandatlas with PDFKit",
+      CreationDate: date,
+      ModDate: date,
+    },
+  });
+  doc.registerFont(sheetFonts.regular, sheetFont("regular") as Buffer);
+  doc.registerFont(sheetFonts.bold, sheetFont("bold") as Buffer);
+  doc.registerFont(reportMonoFont, require.resolve(reportMonoFontFile));
+  return doc;
+}
+
+function lay(doc: PDFKit.PDFDocument, run: CalibrationRun, build: SheetBuildIdentity, paper: PaperName): void {
+  const { widthPt, heightPt } = paperSizes[paper];
+  const x = marginPt;
+  const width = widthPt - 2 * marginPt;
+  const top = marginPt * 0.75;
+  const pageBottom = heightPt - marginPt * 0.75;
+  const buildText = describeBuild(build);
+  const flow = new CalibrationPageFlow(doc, x, width, top, pageBottom - reportFooterHeightPt - 4, drawReportReminder);
+
+  doc.addPage();
+  flow.y = drawReportHeader(doc, buildText, `${displayText(run.fileName)} against ${run.gasName}`, x, top, width);
+  flow.y = drawReportCaution(doc, run.caution, x, flow.y, width);
+
+  const facts = calibrationReportFacts(run);
+  drawSectionHeading(flow, "Spectrum file", 40);
+  drawFacts(flow, facts.spectrum);
+  drawSectionHeading(flow, "Cell and instrument", 40);
+  drawFacts(flow, facts.cell);
+
+  drawCorrectionBox(flow, correctionLines(run), correctionModelWords[run.calibration.result.correction.model]);
+
+  drawSectionHeading(flow, "Residuals of the lines found", residualPlotHeight(doc, run, width));
+  flow.y = drawResidualPlot(doc, run, x, flow.y, width) + 10;
+
+  drawSectionHeading(flow, "Lines", 60);
+  drawCalibrationLineTable(flow, run);
+
+  drawSectionHeading(flow, "Notes", 30);
+  for (const note of calibrationNotes(run)) drawParagraph(flow, `• ${note}`);
+  flow.y += 4;
+  drawSectionHeading(flow, "The model and its limits", 40);
+  drawParagraph(flow, calibrationRulesText(run));
+  flow.y += 4;
+  drawSectionHeading(flow, "Provenance", 40);
+  drawParagraph(flow, `Made by ${buildText} (commit ${build.commit}).`);
+  drawParagraph(flow, `Predicted lines from the molecule file of ${run.gasName}, which cites:`);
+  for (const source of run.sources) drawParagraph(flow, `• ${source}`, 8);
+
+  const range = doc.bufferedPageRange();
+  for (let i = 0; i < range.count; i++) {
+    doc.switchToPage(range.start + i);
+    drawReportFooter(doc, `${buildText} · calibration of ${run.fileName} · predicted, not certified`, x, pageBottom, width, i + 1, range.count);
+  }
+}
+
+/** The PDF calibration report of one run, as bytes (A4 unless asked for letter). */
+export function renderCalibrationReport(request: CalibrationReportRequest): Promise<Uint8Array> {
+  const paper = request.paper ?? "a4";
+  const doc = newDocument(request.run, request.build, paper);
+  const chunks: Buffer[] = [];
+  const done = new Promise<Uint8Array>((resolve, reject) => {
+    doc.on("data", (chunk: Buffer) => chunks.push(chunk));
+    doc.on("end", () => resolve(new Uint8Array(Buffer.concat(chunks))));
+    doc.on("error", reject);
+  });
+  lay(doc, request.run, request.build, paper);
+  doc.end();
+  return done;
+}
