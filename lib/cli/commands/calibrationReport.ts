@@ -1,8 +1,19 @@
-import { UsageError } from "../usageError.ts";
+import { fileURLToPath } from "node:url";
 import type { CalibrationRun } from "../../format/index.ts";
+import { buildIdentity } from "../../shared/buildIdentity.ts";
+import { renderCalibrationReport, SheetInputError, writeFileAtomic } from "../../sheet/index.ts";
+import { UsageError } from "../usageError.ts";
 
-/** Writes the PDF calibration report (not built yet: refuses plainly rather than write half a file). */
+const repoDir = fileURLToPath(new URL("../../..", import.meta.url));
+
+/** Renders the PDF calibration report and writes it whole or not at all; returns the path written. */
 export async function writeCalibrationReport(run: CalibrationRun, path: string): Promise<string> {
-  void run;
-  throw new UsageError(`--report ${path}: the PDF calibration report is not available yet`);
+  try {
+    const bytes = await renderCalibrationReport({ run, build: buildIdentity(repoDir), paper: "a4" });
+    writeFileAtomic(path, bytes);
+    return path;
+  } catch (error) {
+    if (error instanceof SheetInputError) throw new UsageError(error.message);
+    throw error;
+  }
 }
