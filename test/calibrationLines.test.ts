@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { calibrationMarks, calibrationResolutionsCm, defaultCellConditions, moleculeCalibrationLines } from "../lib/atlas/index.ts";
+import { calibrationApodization, calibrationMarks, calibrationResolutionsCm, defaultCellConditions, moleculeCalibrationLines } from "../lib/atlas/index.ts";
+import { calibrationWavenumberDigits, peakShiftDigits } from "../lib/format/index.ts";
 import { calibrationLines, cellSpectrum, defaultCalibrationCriteria, type AbsorbingLine } from "../lib/core/index.ts";
 import { runCli } from "../lib/cli/main.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
@@ -101,5 +102,20 @@ describe("calibration-grade lines", () => {
     expect(doc.lines.map((l: { label: string }) => l.label)).toEqual(marks.lines.map((l) => l.label));
     expect(doc.lines[0].peakShiftCm).toBeCloseTo(marks.lines[0].peakShiftCm!, 4);
     expect(doc.caution).toMatch(/safety data sheet/);
+  });
+});
+
+describe("calibration marks computed around their candidates only", () => {
+  it("equal the full-range computation to the printed digits, for every shipped molecule and resolution", () => {
+    for (const molecule of molecules) {
+      const marks = calibrationMarks(molecule);
+      for (const { resolutionCm, lines } of marks.byResolution) {
+        const instrument = { kind: "fourier-transform" as const, resolutionCm, apodization: calibrationApodization };
+        const full = moleculeCalibrationLines(molecule, { conditions: defaultCellConditions, instrument });
+        const printed = (l: { species: string; label: string; wavenumber: number; peakShiftCm: number | null }) =>
+          `${l.species} ${l.label} ${calibrationWavenumberDigits(l.wavenumber)} ${peakShiftDigits(l.peakShiftCm)}`;
+        expect(lines.map(printed), `${molecule.id} at ${resolutionCm} cm⁻¹`).toEqual(full.lines.map(printed));
+      }
+    }
   });
 });

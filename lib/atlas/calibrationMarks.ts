@@ -1,5 +1,7 @@
 import {
+  calibrationCandidates,
   calibrationLines,
+  calibrationLinesOf,
   defaultCalibrationCriteria,
   type CalibrationCriteria,
   type CalibrationLine,
@@ -68,15 +70,24 @@ export interface CalibrationMarks {
 
 export function calibrationMarks(molecule: Molecule, conditions: CellConditions = defaultCellConditions): CalibrationMarks {
   const byResolution: CalibrationMarks["byResolution"] = [];
-  let last: MoleculeCalibrationLines | null = null;
   // The cell's lines depend on the conditions only: made once for all resolutions.
   const set = cellLineSet(molecule, conditions);
   for (const resolutionCm of calibrationResolutionsCm) {
-    const settings = { conditions, instrument: { kind: "fourier-transform" as const, resolutionCm, apodization: calibrationApodization } };
-    last = moleculeCalibrationLines(molecule, settings, defaultCalibrationCriteria, set);
+    const instrument = { kind: "fourier-transform" as const, resolutionCm, apodization: calibrationApodization };
+    const range = calibrationRange(set, resolutionCm);
+    const candidates = calibrationCandidates(set.lines, range.fromCm, range.toCm, resolutionCm, defaultCalibrationCriteria);
+    let lines: CalibrationLine[] = [];
+    if (candidates.length) {
+      // Only a gas with calibration-grade candidates needs its spectrum (most have none: their
+      // positions are not validated). It is computed over the whole range: a narrower window
+      // drops the far sidelobes of lines outside it, which moves apparent peaks by up to
+      // 3·10⁻⁵ cm⁻¹ at 1–2 cm⁻¹ resolution, enough to change a printed digit.
+      const { spectrum } = moleculeCellSpectrum(molecule, { conditions, instrument, ...range }, set);
+      lines = calibrationLinesOf(candidates, spectrum, resolutionCm);
+    }
     byResolution.push({
       resolutionCm,
-      lines: last.lines.map((l) => ({
+      lines: lines.map((l) => ({
         species: l.species,
         band: l.band,
         label: l.label,
@@ -91,9 +102,9 @@ export function calibrationMarks(molecule: Molecule, conditions: CellConditions 
     conditions,
     apodization: calibrationApodization,
     criteria: defaultCalibrationCriteria,
-    intensityScale: last!.set.intensityScale,
-    broadeningTypical: last!.set.broadeningTypical,
-    notes: last!.set.notes,
+    intensityScale: set.intensityScale,
+    broadeningTypical: set.broadeningTypical,
+    notes: set.notes,
     byResolution,
   };
 }

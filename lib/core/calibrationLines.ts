@@ -97,36 +97,54 @@ export function nearestNeighbourCm(sorted: readonly AbsorbingLine[], i: number, 
   return nearest;
 }
 
+/** A line that passes the strong, isolated and accurate criteria, before its apparent peak is known. */
+export interface CalibrationCandidate {
+  line: AbsorbingLine;
+  strongest: number;
+  nearestNeighbourCm: WavenumberCm | null;
+}
+
 /**
- * Lines usable for a wavenumber calibration at resolution R: strong, isolated and accurate by the criteria,
- * inside the spectrum's window, each with the shift of its apparent peak in the convolved
- * spectrum (blends, ILS sidelobes of neighbours and saturation all show up in it).
+ * The lines in [fromCm, toCm] that are strong, isolated and accurate by the criteria at
+ * resolution R. None of this needs a spectrum, so a caller can skip computing one when no line
+ * qualifies, or compute it only around the lines that do.
  */
-export function calibrationLines(
+export function calibrationCandidates(
   lines: readonly AbsorbingLine[],
-  spectrum: CellSpectrum,
+  fromCm: WavenumberCm,
+  toCm: WavenumberCm,
   resolutionCm: WavenumberCm,
   criteria: CalibrationCriteria = defaultCalibrationCriteria,
-): CalibrationLine[] {
+): CalibrationCandidate[] {
   checkCalibrationCriteria(criteria);
   if (!(resolutionCm > 0)) throw new CoreInputError(`resolution ${resolutionCm} cm⁻¹ must be above 0`);
   let strongest = 0;
   for (const l of lines) if (l.intensity > strongest) strongest = l.intensity;
   if (strongest === 0) return [];
   const sorted = [...lines].sort((a, b) => a.wavenumber - b.wavenumber);
-  const from = spectrum.grid.startCm + spectrum.windowFirst * spectrum.grid.stepCm;
-  const to = spectrum.grid.startCm + spectrum.windowLast * spectrum.grid.stepCm;
-  const signal = observedSignal(spectrum);
-  const out: CalibrationLine[] = [];
+  const out: CalibrationCandidate[] = [];
   for (let i = 0; i < sorted.length; i++) {
     const line = sorted[i];
-    if (line.wavenumber < from || line.wavenumber > to) continue;
+    if (line.wavenumber < fromCm || line.wavenumber > toCm) continue;
     if (line.intensity < criteria.strongFraction * strongest) continue;
     if (line.positionStatus !== "validated" || line.wavenumberUncertainty > criteria.maxUncertaintyFraction * resolutionCm) continue;
     const nearest = nearestNeighbourCm(sorted, i, criteria.neighbourFraction * line.intensity);
     if (nearest !== null && nearest <= criteria.isolationMultiple * resolutionCm) continue;
+    out.push({ line, strongest, nearestNeighbourCm: nearest });
+  }
+  return out;
+}
+
+/**
+ * Calibration candidates with the shift of their apparent peak in the convolved spectrum
+ * (blends, ILS sidelobes of neighbours and saturation all show up in it); the spectrum must
+ * cover each candidate ± R/2.
+ */
+export function calibrationLinesOf(candidates: readonly CalibrationCandidate[], spectrum: CellSpectrum, resolutionCm: WavenumberCm): CalibrationLine[] {
+  const signal = observedSignal(spectrum);
+  return candidates.map(({ line, strongest, nearestNeighbourCm }) => {
     const apparent = apparentPeak(signal, spectrum, line.wavenumber, resolutionCm / 2);
-    out.push({
+    return {
       species: line.species,
       band: line.band,
       label: line.label,
@@ -134,10 +152,24 @@ export function calibrationLines(
       wavenumberUncertainty: line.wavenumberUncertainty,
       intensity: line.intensity,
       relativeToStrongest: line.intensity / strongest,
-      nearestNeighbourCm: nearest,
+      nearestNeighbourCm,
       apparentWavenumber: apparent,
       peakShiftCm: apparent === null ? null : apparent - line.wavenumber,
-    });
-  }
-  return out;
+    };
+  });
+}
+
+/**
+ * Lines usable for a wavenumber calibration at resolution R: strong, isolated and accurate by the
+ * criteria, inside the spectrum's window, with their apparent peaks (calibrationLinesOf).
+ */
+export function calibrationLines(
+  lines: readonly AbsorbingLine[],
+  spectrum: CellSpectrum,
+  resolutionCm: WavenumberCm,
+  criteria: CalibrationCriteria = defaultCalibrationCriteria,
+): CalibrationLine[] {
+  const from = spectrum.grid.startCm + spectrum.windowFirst * spectrum.grid.stepCm;
+  const to = spectrum.grid.startCm + spectrum.windowLast * spectrum.grid.stepCm;
+  return calibrationLinesOf(calibrationCandidates(lines, from, to, resolutionCm, criteria), spectrum, resolutionCm);
 }
