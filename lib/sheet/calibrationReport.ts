@@ -1,5 +1,4 @@
 import { createRequire } from "node:module";
-import PDFDocument from "pdfkit";
 import { calibrationNotes, calibrationReportFacts, calibrationRulesText, correctionLines, correctionModelWords, type CalibrationRun } from "../format/index.ts";
 import { describeBuild } from "../shared/buildIdentity.ts";
 import { drawCalibrationLineTable } from "./calibrationLineTable.ts";
@@ -20,9 +19,9 @@ import {
 import { drawResidualPlot, residualPlotHeight } from "./calibrationResidualPlot.ts";
 import { displayText } from "./displayText.ts";
 import { paperSizes, type PaperName } from "./paper.ts";
-import { sheetFont } from "./sheetFonts.ts";
-import { buildDate, type SheetBuildIdentity } from "./sheetInput.ts";
-import { marginPt, sheetFonts } from "./sheetStyle.ts";
+import type { SheetBuildIdentity } from "./sheetInput.ts";
+import { newPdfDocument, pdfBytes } from "./pdfDocument.ts";
+import { marginPt } from "./sheetStyle.ts";
 
 const require = createRequire(import.meta.url);
 
@@ -33,27 +32,10 @@ export interface CalibrationReportRequest {
 }
 
 function newDocument(run: CalibrationRun, build: SheetBuildIdentity, paper: PaperName): PDFKit.PDFDocument {
-  const size = paperSizes[paper];
-  // The build's date, not the clock: the same spectrum and build give the same bytes.
-  const date = buildDate(build);
-  const doc = new PDFDocument({
-    size: [size.widthPt, size.heightPt],
-    margin: 0,
-    autoFirstPage: false,
-    bufferPages: true,
-    displayTitle: true,
-    lang: "en",
-    info: {
-      Title: `Wavenumber calibration report: ${displayText(run.fileName)}`,
-      Subject: `Wavenumber scale of a spectrum checked against predicted lines of ${run.gasName}; not a certificate`,
-      Creator: `bandatlas ${build.version} (${build.commit})`,
-      Producer: "bandatlas with PDFKit",
-      CreationDate: date,
-      ModDate: date,
-    },
+  const doc = newPdfDocument(paper, build, {
+    title: `Wavenumber calibration report: ${displayText(run.fileName)}`,
+    subject: `Wavenumber scale of a spectrum checked against predicted lines of ${run.gasName}; not a certificate`,
   });
-  doc.registerFont(sheetFonts.regular, sheetFont("regular") as Buffer);
-  doc.registerFont(sheetFonts.bold, sheetFont("bold") as Buffer);
   doc.registerFont(reportMonoFont, require.resolve(reportMonoFontFile));
   return doc;
 }
@@ -104,16 +86,8 @@ function lay(doc: PDFKit.PDFDocument, run: CalibrationRun, build: SheetBuildIden
 }
 
 /** The PDF calibration report of one run, as bytes (A4 unless asked for letter). */
-export function renderCalibrationReport(request: CalibrationReportRequest): Promise<Uint8Array> {
+export async function renderCalibrationReport(request: CalibrationReportRequest): Promise<Uint8Array> {
   const paper = request.paper ?? "a4";
   const doc = newDocument(request.run, request.build, paper);
-  const chunks: Buffer[] = [];
-  const done = new Promise<Uint8Array>((resolve, reject) => {
-    doc.on("data", (chunk: Buffer) => chunks.push(chunk));
-    doc.on("end", () => resolve(new Uint8Array(Buffer.concat(chunks))));
-    doc.on("error", reject);
-  });
-  lay(doc, request.run, request.build, paper);
-  doc.end();
-  return done;
+  return new Uint8Array(await pdfBytes(doc, () => lay(doc, request.run, request.build, paper)));
 }

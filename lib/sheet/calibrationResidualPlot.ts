@@ -1,7 +1,7 @@
 import { calibrationPlotWords, type CalibrationRun } from "../format/index.ts";
 import { axisTicks } from "../shared/axisTicks.ts";
 import { drawCalibrationMark, markColour, type CalibrationMark } from "./calibrationMarkers.ts";
-import { ink, rule, sheetFonts, softInk } from "./sheetStyle.ts";
+import { ink, sheetFonts, softInk } from "./sheetStyle.ts";
 
 type Doc = PDFKit.PDFDocument;
 

@@ -1,14 +1,13 @@
-import PDFDocument from "pdfkit";
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
-import { buildDate, type SheetBuildIdentity } from "./sheetInput.ts";
+import type { SheetBuildIdentity } from "./sheetInput.ts";
+import { newPdfDocument, pdfBytes } from "./pdfDocument.ts";
 import { drawLegendLine } from "./drawLegend.ts";
 import { drawTableHead, drawTableRows, tableHeadHeightPt, tableRowHeightPt } from "./drawLineTable.ts";
 import { drawCautionBox, drawContinuationHeader, drawSheetFooter, drawSheetHeader, footerHeight } from "./drawSheetParts.ts";
 import { drawStickPlot } from "./drawStickPlot.ts";
 import { paperSizes, type PaperName } from "./paper.ts";
 import { sheetContent, type SheetContent } from "./sheetContent.ts";
-import { sheetFont } from "./sheetFonts.ts";
 import { ink, marginPt, sheetFonts } from "./sheetStyle.ts";
 
 export interface BenchSheetRequest {
@@ -24,32 +23,6 @@ export interface BenchSheetRequest {
 }
 
 const plotHeightPt = 178;
-
-function newDocument(content: SheetContent, paper: PaperName, build: SheetBuildIdentity): PDFKit.PDFDocument {
-  const size = paperSizes[paper];
-  const date = buildDate(build);
-  // A fixed creation date makes PDFKit's file ID (an MD5 of the info dictionary) fixed too, and
-  // the font subset tags come from the font's order of use, so equal inputs give equal bytes.
-  const doc = new PDFDocument({
-    size: [size.widthPt, size.heightPt],
-    margin: 0,
-    autoFirstPage: false,
-    bufferPages: true,
-    displayTitle: true,
-    lang: "en",
-    info: {
-      Title: content.documentTitle,
-      Subject: "Predicted vibration–rotation lines; not a certificate",
-      Creator: `bandatlas ${build.version} (${build.commit})`,
-      Producer: "bandatlas with PDFKit",
-      CreationDate: date,
-      ModDate: date,
-    },
-  });
-  doc.registerFont(sheetFonts.regular, sheetFont("regular") as Buffer);
-  doc.registerFont(sheetFonts.bold, sheetFont("bold") as Buffer);
-  return doc;
-}
 
 function lay(doc: PDFKit.PDFDocument, content: SheetContent, paper: PaperName): void {
   const { widthPt, heightPt } = paperSizes[paper];
@@ -95,14 +68,6 @@ function lay(doc: PDFKit.PDFDocument, content: SheetContent, paper: PaperName): 
 /** The PDF bench sheet of one molecule, species, temperature and paper size, as bytes. */
 export function renderBenchSheet(request: BenchSheetRequest): Promise<Buffer> {
   const content = sheetContent(request);
-  const doc = newDocument(content, request.paper, request.build);
-  const chunks: Buffer[] = [];
-  const done = new Promise<Buffer>((resolve, reject) => {
-    doc.on("data", (chunk: Buffer) => chunks.push(chunk));
-    doc.on("end", () => resolve(Buffer.concat(chunks)));
-    doc.on("error", reject);
-  });
-  lay(doc, content, request.paper);
-  doc.end();
-  return done;
+  const doc = newPdfDocument(request.paper, request.build, { title: content.documentTitle, subject: "Predicted vibration–rotation lines; not a certificate" });
+  return pdfBytes(doc, () => lay(doc, content, request.paper));
 }
