@@ -11,7 +11,7 @@ import { siteData, type EntryPlots } from "../site/pageData.ts";
 import { lineIndex, nameIndexJson } from "../site/searchIndexes.ts";
 import { benchModelPath, downloadPath, temperatureToken } from "../shared/sitePaths.ts";
 import { startBenchData, type BenchDataRun } from "./benchDataPool.ts";
-import { bundleBenchScript, bundleBrowserScript } from "./bundleBrowser.ts";
+import { bundleBenchScript, bundleBrowserScript, bundleCalibrateScript } from "./bundleBrowser.ts";
 import type { BuildCache } from "./buildCache.ts";
 import { buildIdentity, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { checkInternalLinks } from "./checkLinks.ts";
@@ -187,6 +187,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     await bundleBrowserScript(join(work, "assets/search.js"));
     for (const b of bench.values()) writeFile(work, benchModelPath(b.moleculeId), JSON.stringify(b.model));
     await bundleBenchScript(join(work, "assets/bench.js"));
+    await bundleCalibrateScript(join(work, "assets/calibrate.js"));
     for (const asset of ["site.css", "favicon.svg"]) cpSync(join(contentDir, "assets", asset), join(work, "assets", asset));
 
     const filesMs = lap();

@@ -24,6 +24,11 @@ export function benchPagePath(moleculeId: string): string {
   return `molecules/${moleculeId}/bench/index.html`;
 }
 
+/** The calibrate page: a measured spectrum of a gas cell against the atlas, computed in the browser. */
+export function calibratePagePath(): string {
+  return "calibrate/index.html";
+}
+
 /** The cell model (species, bands, intensity data, broadening) the bench page computes from. */
 export function benchModelPath(moleculeId: string): string {
   return `molecules/${moleculeId}/bench/cell-model.json`;

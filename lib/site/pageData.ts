@@ -1,8 +1,9 @@
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
-import { constantsOriginText, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
+import { constantsOriginText, correctionModelWords, moleculeCaution, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
 import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
-import { standardAtmospherePa } from "../core/index.ts";
+import { apodizations, correctionModels, standardAtmospherePa } from "../core/index.ts";
+import { maxSpectrumFileBytes } from "../spectrumFile/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { describeBuild, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { accuracyRows, citationOf } from "./accuracyRows.ts";
@@ -10,7 +11,7 @@ import { bandView } from "./bandView.ts";
 import { speciesDisplay } from "./formatCells.ts";
 import { ghsPictogramName } from "../shared/ghsPictograms.ts";
 import { nearInfraredLimitNm, nearInfraredRows } from "./nearInfraredIndex.ts";
-import { benchModelPath, benchPagePath, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
+import { benchModelPath, benchPagePath, calibratePagePath, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 
 /** Plots of one entry, rendered beforehand (lib/plot) and inlined by the template. */
 export interface EntryPlots {
@@ -150,6 +151,36 @@ export function benchPageView(molecule: Molecule, bench: BenchInput) {
   };
 }
 
+/**
+ * The calibrate page: every gas with a bench cell model (the browser calibrates against it), with
+ * what a calibration run takes from the Molecule, which the browser does not have (its name in a
+ * sentence, its caution, its sources: as `bandatlas calibrate` fills them), and the form's choices.
+ * The cell fields start where the bench pages' do (the atlas's default cell, in the same units).
+ */
+export function calibratePageView(molecules: Molecule[], bench: Map<string, BenchInput> | undefined) {
+  const views = molecules.filter((m) => bench?.has(m.id)).map((m) => ({ molecule: m, view: benchPageView(m, bench!.get(m.id)!) }));
+  const gases = views.map(({ molecule, view }) => ({
+    id: view.moleculeId,
+    name: view.moleculeName,
+    formula: view.formula,
+    modelPath: view.modelPath,
+    gasName: molecule.name.charAt(0).toLowerCase() + molecule.name.slice(1),
+    caution: moleculeCaution(molecule),
+    sources: molecule.sources.map((s) => s.citation),
+  }));
+  const first = views[0]?.view;
+  return {
+    path: calibratePagePath(),
+    gases,
+    gasesJson: JSON.stringify(gases.map(({ id, modelPath, gasName, caution, sources }) => ({ id, modelPath, gasName, caution, sources }))),
+    cell: first ? { defaults: first.defaults, pressureUnits: first.pressureUnits, lengthUnits: first.lengthUnits } : null,
+    // The CLI's default apodization and model.
+    apodizations: apodizations.map((a) => ({ value: a, name: lineShapeNames[a], isDefault: a === "triangular" })),
+    models: correctionModels.map((m) => ({ value: m, name: correctionModelWords[m], isDefault: m === "scale" })),
+    maxFileMb: maxSpectrumFileBytes / (1024 * 1024),
+  };
+}
+
 export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: EntryPlots, sheetsAvailable: boolean, allEntries: AtlasEntry[], bench?: BenchInput) {
   const path = speciesPagePath(entry.moleculeId, entry.species, entry.temperatureK);
   const sameSpecies = allEntries.filter((e) => e.moleculeId === entry.moleculeId && e.species === entry.species);
@@ -212,6 +243,7 @@ export function siteData(input: SiteDataInput) {
       views: (from: number, to: number) =>
         input.entries.slice(from, to).map((e) => speciesPageView(byId.get(e.moleculeId)!, e, input.plots.get(e)!, input.sheetsAvailable, input.entries, input.bench?.get(e.moleculeId))),
     },
+    calibratePage: calibratePageView(input.molecules, input.bench),
     benchPages: input.molecules.filter((m) => input.bench?.has(m.id)).map((m) => benchPageView(m, input.bench!.get(m.id)!)),
     accuracy: accuracyRows(input.molecules, input.entries),
     nearInfrared: { rows: nearInfraredRows(input.molecules, input.entries), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },

@@ -1,0 +1,66 @@
+// The words of one calibration run on the page, all from lib/format as the CLI prints them: the
+// report's header lines, the correction box, the line table, notes, rules, and the two downloads
+// (the JSON the same bytes as `--format json`, the text the same as the table output).
+import {
+  calibrationDocument,
+  calibrationLineRows,
+  calibrationNotes,
+  calibrationRulesText,
+  calibrationText,
+  correctionLines,
+  type CalibrationRun,
+} from "../format/spectrumCalibrationText.ts";
+import { el } from "./dom.ts";
+
+/** The text report's lines above its box: file, hash, spectrum, cell, model. */
+function headerLines(text: string): string[] {
+  const lines = text.split("\n");
+  return lines.slice(0, lines.indexOf(""));
+}
+
+function lineTable(run: CalibrationRun): HTMLTableElement {
+  const { headings, rows, rightAligned } = calibrationLineRows(run);
+  const lines = run.calibration.result.lines;
+  const table = el("table", undefined, { class: "calibration-result", id: "calibrate-line-table" });
+  table.append(
+    el(
+      "caption",
+      `${lines.length} lines of ${run.gasName} in the range, ${run.calibration.result.usedCount} used in the fit; residual = reference − corrected measured position`,
+    ),
+  );
+  const head = el("tr");
+  headings.forEach((h, i) => head.append(el("th", h, { scope: "col", ...(rightAligned[i] ? { class: "num" } : {}) })));
+  table.append(el("thead"));
+  table.tHead!.append(head);
+  const body = el("tbody");
+  rows.forEach((cells, r) => {
+    const tr = el("tr", undefined, { class: lines[r].used ? "used" : "rejected" });
+    cells.forEach((c, i) => tr.append(el(i === 2 ? "th" : "td", c, { ...(i === 2 ? { scope: "row" } : {}), ...(rightAligned[i] ? { class: "num" } : {}) })));
+    body.append(tr);
+  });
+  table.append(body);
+  return table;
+}
+
+/** Blob URLs of the last run, released when the next one replaces them. */
+let downloadUrls: string[] = [];
+
+function setDownload(anchor: HTMLAnchorElement, text: string, type: string): void {
+  const url = URL.createObjectURL(new Blob([text], { type }));
+  downloadUrls.push(url);
+  anchor.href = url;
+}
+
+export function showCalibrationRun(run: CalibrationRun): void {
+  const text = calibrationText(run);
+  document.getElementById("calibrate-summary")!.replaceChildren(...headerLines(text).map((l) => el("li", l)));
+  document.getElementById("calibrate-correction")!.replaceChildren(...correctionLines(run).map((l) => el("p", l)));
+  document.getElementById("calibrate-lines")!.replaceChildren(lineTable(run));
+  document.getElementById("calibrate-notes")!.replaceChildren(...calibrationNotes(run).map((n) => el("li", n)));
+  document.getElementById("calibrate-rules")!.textContent = calibrationRulesText(run);
+  document.getElementById("calibrate-sources")!.replaceChildren(...run.sources.map((s) => el("li", s)));
+  for (const url of downloadUrls) URL.revokeObjectURL(url);
+  downloadUrls = [];
+  setDownload(document.getElementById("calibrate-json") as HTMLAnchorElement, JSON.stringify(calibrationDocument(run), null, 2) + "\n", "application/json");
+  setDownload(document.getElementById("calibrate-txt") as HTMLAnchorElement, text, "text/plain;charset=utf-8");
+}
