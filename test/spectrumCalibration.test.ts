@@ -19,11 +19,13 @@ import { gaussian, measuredSpectrum, seededRandom, trueSpectrum, type Miscalibra
 const cellOf = (id: string): CellModel => cellModel(selectMolecule(shippedMolecules(), id));
 const ranges: Record<string, [number, number]> = { co: [2000, 2260], hcl: [2620, 3100] };
 
+/** Noise is given as a fraction of the tallest peak (a signal-to-noise of 100 for 0.01), as a technician would choose the cell. */
 function calibrateSynthetic(id: string, resolutionCm: number, error: Miscalibration, seed: number, model: CorrectionModel = "linear") {
   const [from, to] = ranges[id];
   const cell = cellOf(id);
   const truth = trueSpectrum(cell, defaultCellConditions, resolutionCm, "triangular", from - 5, to + 5);
-  const measured = measuredSpectrum(truth, from, to, resolutionCm / 4, error, seededRandom(seed));
+  const noiseAbsorbance = error.noiseAbsorbance * truth.peakAbsorbance;
+  const measured = measuredSpectrum(truth, from, to, resolutionCm / 4, { ...error, noiseAbsorbance }, seededRandom(seed));
   return calibrateMeasuredSpectrum(cell, { ...measured, resolutionCm }, { conditions: defaultCellConditions, apodization: "triangular", model });
 }
 
@@ -105,7 +107,7 @@ describe("calibration of synthetic spectra (Monte Carlo coverage)", () => {
           const error = {
             scale: (random() * 2 - 1) * 400e-6,
             offsetCm: (random() * 2 - 1) * 0.8,
-            noiseAbsorbance: 0.002,
+            noiseAbsorbance: 0.01,
             tiltPerCm: 1e-4,
             baselineAbsorbance: 0.02,
           };
@@ -114,23 +116,35 @@ describe("calibration of synthetic spectra (Monte Carlo coverage)", () => {
         }
         for (const v of z) expect(Math.abs(v)).toBeLessThan(3.5);
         const within = z.filter((v) => Math.abs(v) <= 1).length / z.length;
-        // CO's references are good to 10⁻⁵ cm⁻¹, so its ± is the measurement's: near the
-        // normal 68 % (our band 45–95 % for 32 draws). HCl's references carry the constants' ±
-        // (not validated against measured lines), which synthetic data from the same constants
-        // do not show: its ± may only be larger, never smaller.
-        if (id === "co") expect(within).toBeGreaterThan(0.45);
-        if (id === "co") expect(within).toBeLessThan(0.96);
-        else expect(within).toBeGreaterThanOrEqual(0.68);
+        // At least the normal 68 % within 1σ up to the scatter of 32 draws (our band: ≥ 45 %). For
+        // CO at 0.125 and 0.5 cm⁻¹ the references are good to 10⁻⁵ cm⁻¹ and the predicted peak
+        // shifts are small, so the ± is the measurement's and must not be inflated (≤ 95 %). At
+        // 2 cm⁻¹ a quarter of each predicted shift enters the ± and HCl's references carry the
+        // constants' own ± (not validated), which synthetic data from the same constants do not
+        // show: there the ± may be larger than the scatter.
+        expect(within).toBeGreaterThan(0.45);
+        if (id === "co" && resolutionCm < 2) expect(within).toBeLessThan(0.96);
       });
     }
   }
 
   it("is not fooled by the other isotopologue: a shift that lays H³⁵Cl peaks on H³⁷Cl lines is found as a shift", () => {
     // −500 ppm and −0.55 cm⁻¹ move every line down by ≈2.0 cm⁻¹, the H³⁵Cl–H³⁷Cl spacing.
-    const error = { scale: -480e-6, offsetCm: -0.6, noiseAbsorbance: 0.001, tiltPerCm: 0, baselineAbsorbance: 0 };
+    const error = { scale: -480e-6, offsetCm: -0.6, noiseAbsorbance: 0.005, tiltPerCm: 0, baselineAbsorbance: 0 };
     const { result } = calibrateSynthetic("hcl", 0.5, error, 5, "linear");
     expect(Math.abs(result.correction.scale - error.scale)).toBeLessThan(3 * result.correction.scaleUncertainty);
     expect(result.lines.filter((l) => l.used).every((l) => Math.abs(l.residualCm!) < 0.05)).toBe(true);
+  });
+});
+
+describe("model check", () => {
+  it("a pure offset calibrated with the scale model: the linear refit names the missing offset", () => {
+    const error = { scale: 0, offsetCm: 0.3, noiseAbsorbance: 0.005, tiltPerCm: 0, baselineAbsorbance: 0 };
+    const { result } = calibrateSynthetic("co", 0.5, error, 8, "scale");
+    expect(result.missingTerm?.term).toBe("offset");
+    expect(Math.abs(result.missingTerm!.value - 0.3)).toBeLessThan(3 * result.missingTerm!.uncertainty);
+    const clean = calibrateSynthetic("co", 0.5, { ...error, offsetCm: 0, scale: 100e-6 }, 8, "scale").result;
+    expect(clean.missingTerm).toBeNull();
   });
 });
 

@@ -28,7 +28,7 @@ export interface SearchReference {
 
 export interface ScaleSearchResult {
   best: ScaleHypothesis | null;
-  /** The best hypothesis that differs from `best` by more than two tolerances somewhere in the range. */
+  /** The best hypothesis made only of peak–line pairs that `best` does not hold (its score counts those alone). */
   runnerUp: ScaleHypothesis | null;
 }
 
@@ -81,9 +81,7 @@ export function searchScale(
   const kStep = toleranceCm / (2 * halfSpan);
   const kCount = Math.ceil(maxScale / kStep);
   const offsetLimit = bounds.maxOffsetCm + maxScale * pivot;
-  const distance = (a: ScaleHypothesis, k: number, c: number) => Math.abs(a.offsetAtPivotCm - c) + Math.abs(a.scale - k) * halfSpan;
-
-  const scan = (accept: (k: number, c: number) => boolean): ScaleHypothesis | null => {
+  const scan = (weights: readonly number[]): ScaleHypothesis | null => {
     let best: ScaleHypothesis | null = null;
     const offsets = new Float64Array(pairsPeak.length);
     const order = new Uint32Array(pairsPeak.length);
@@ -97,17 +95,24 @@ export function searchScale(
       let start = 0;
       let sum = 0;
       for (let end = 0; end < order.length; end++) {
-        sum += pairsWeight[order[end]];
-        while (offsets[order[end]] - offsets[order[start]] > toleranceCm) sum -= pairsWeight[order[start++]];
+        sum += weights[order[end]];
+        while (offsets[order[end]] - offsets[order[start]] > toleranceCm) sum -= weights[order[start++]];
         const c = (offsets[order[start]] + offsets[order[end]]) / 2;
         if (Math.abs(c) > offsetLimit + toleranceCm / 2) continue;
-        if ((best === null || sum > best.score + 1e-12) && accept(k, c)) best = { scale: k, offsetAtPivotCm: c, pivotCm: pivot, score: sum };
+        if (best === null || sum > best.score + 1e-12) best = { scale: k, offsetAtPivotCm: c, pivotCm: pivot, score: sum };
       }
     }
     return best;
   };
-  const best = scan(() => true);
+  const best = scan(pairsWeight);
   if (!best) return { best: null, runnerUp: null };
-  const runnerUp = scan((k, c) => distance(best, k, c) > 2 * toleranceCm);
+  // The rival: the best hypothesis built only from pairs the winner does not hold. A hypothesis
+  // that differs from the winner only where no line matched (or by a hair) holds the same
+  // pairs and gathers nothing here; one that assigns the peaks to other lines gathers its own.
+  const rivalWeights = pairsWeight.map((w, i) => {
+    const offset = pairsRef[i] - pairsPeak[i] - best.scale * (pairsPeak[i] - pivot);
+    return Math.abs(offset - best.offsetAtPivotCm) <= toleranceCm / 2 ? 0 : w;
+  });
+  const runnerUp = scan(rivalWeights);
   return { best, runnerUp };
 }

@@ -79,6 +79,11 @@ export interface SpectrumCalibrationResult {
   /** The assignment vote: the winner and how close the next distinct assignment came (0–1). */
   assignment: ScaleHypothesis;
   runnerUpRatio: number;
+  /**
+   * For the one-term models: the linear model fitted to the same lines, when its other term is
+   * more than 3σ from zero (the chosen model then leaves a real error out); else null.
+   */
+  missingTerm: { term: "offset" | "scale"; value: number; uncertainty: number; linear: WavenumberCorrection } | null;
   /** Measured peaks at or above the usable signal-to-noise that no listed line of the gas explains. */
   unassignedPeakCount: number;
   rules: SpectrumCalibrationRules;
@@ -224,6 +229,15 @@ export function calibrateSpectrum(
     line.reason = "residual";
     line.detail = `residual ${residual.toPrecision(2)} cm⁻¹ is ${fmt(Math.abs(residual) / points[i].sigmaCm, 1)} σ`;
   }
+  let missingTerm: SpectrumCalibrationResult["missingTerm"] = null;
+  // All usable lines, before rejection: a missing term is exactly what makes good lines look like outliers.
+  if ((model === "scale" || model === "offset") && points.length >= minimumLines.linear) {
+    const { correction: linear } = robustWavenumberCorrection("linear", points);
+    const term = model === "scale" ? "offset" : "scale";
+    const value = term === "offset" ? linear.offsetCm : linear.scale;
+    const uncertainty = term === "offset" ? linear.offsetUncertaintyCm : linear.scaleUncertainty;
+    if (Math.abs(value) > 3 * uncertainty) missingTerm = { term, value, uncertainty, linear };
+  }
   let sumSquares = 0;
   let used = 0;
   for (const line of lines) {
@@ -243,6 +257,7 @@ export function calibrateSpectrum(
     lines,
     assignment: best,
     runnerUpRatio,
+    missingTerm,
     unassignedPeakCount: peaks.filter((p, i) => !claimed.has(i) && p.signalToNoise >= rules.minSignalToNoise).length,
     rules,
   };

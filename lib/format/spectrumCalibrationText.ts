@@ -99,6 +99,16 @@ export function calibrationNotes(run: CalibrationRun): string[] {
       `${unvalidated} of the ${used.length} lines used have predicted positions not validated against measured lines (their ± is the constants' own estimate): the correction is only as good as that ±.`,
     );
   }
+  if (result.missingTerm) {
+    const m = result.missingTerm;
+    const size =
+      m.term === "offset"
+        ? `an offset of ${signed(withUncertainty(m.value, m.uncertainty).value)} ± ${withUncertainty(m.value, m.uncertainty).sigma} cm⁻¹`
+        : `a scale of ${signed(withUncertainty(m.value * 1e6, m.uncertainty * 1e6).value)} ± ${withUncertainty(m.value * 1e6, m.uncertainty * 1e6).sigma} ppm`;
+    notes.push(
+      `The same lines fitted with scale and offset together show ${size}, more than 3σ from zero: this instrument's error is not a pure ${result.correction.model}; the linear model (--model linear) describes it better.`,
+    );
+  }
   if (result.correction.reducedChiSquared > 1) notes.push("The scatter exceeds the stated ± (χ²/ν > 1): the uncertainties are scaled by √(χ²/ν).");
   if (result.unassignedPeakCount > 0) {
     notes.push(

@@ -25,6 +25,8 @@ export interface TrueSpectrum {
   spectrum: CellSpectrum;
   /** Decadic absorbance the instrument shows at a true wavenumber. */
   absorbanceAt: (wavenumberCm: number) => number;
+  /** The tallest absorbance in the window. */
+  peakAbsorbance: number;
 }
 
 /**
@@ -67,7 +69,9 @@ export function trueSpectrum(
     const f = position - i;
     return values[i] * (1 - f) + values[i + 1] * f;
   };
-  return { spectrum, absorbanceAt };
+  let peakAbsorbance = 0;
+  for (let i = spectrum.windowFirst; i <= spectrum.windowLast; i++) peakAbsorbance = Math.max(peakAbsorbance, values[i]);
+  return { spectrum, absorbanceAt, peakAbsorbance };
 }
 
 export interface Miscalibration {
