@@ -151,11 +151,12 @@ describe("the CO bench page in Chromium", () => {
 
 describe("a molecule without cited intensities", () => {
   it("says no transmittance can be given and shows the relative absorbance, labelled", async () => {
-    await page.goto(server.base + "molecules/hcl/bench/index.html");
+    // Hydrogen iodide: no band intensity could be cited for it (molecules/SOURCES-NOTES.md).
+    await page.goto(server.base + "molecules/hi/bench/index.html");
     await ready("0.5");
-    await expect(page.locator("#bench-relative").textContent()).resolves.toContain("No transmittance for Hydrogen chloride.");
+    await expect(page.locator("#bench-relative").textContent()).resolves.toContain("No transmittance for Hydrogen iodide.");
     await expect(page.locator(".spectrum-plot .axis-label").nth(1).textContent()).resolves.toBe("relative absorbance (peak = 1)");
-    // No cited measured line validates the HCl constants: no line is calibration grade, and the page says why.
+    // No cited measured line validates the HI constants: no line is calibration grade, and the page says why.
     expect(await page.locator("#bench-lines tbody tr").count()).toBe(0);
     await expect(page.locator("#bench-lines caption").textContent()).resolves.toMatch(/^0 calibration-grade lines .*validated against cited measured lines/);
     expect(problems).toEqual([]);
