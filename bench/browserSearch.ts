@@ -1,10 +1,8 @@
-import { createReadStream, existsSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
-import { createServer } from "node:http";
-import type { AddressInfo } from "node:net";
+import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
-import { extname, join, normalize } from "node:path";
+import { join } from "node:path";
 import { gzipSync } from "node:zlib";
-import { chromium } from "playwright-core";
+import { launchChromium, serveSite } from "./benchBrowser.ts";
 import { standardTemperaturesK } from "../lib/atlas/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
@@ -12,15 +10,6 @@ import { lineIndex } from "../lib/site/searchIndexes.ts";
 import { temperatureToken } from "../lib/shared/sitePaths.ts";
 import { loadNote, runChild, seconds } from "./childProcess.ts";
 import { writeSyntheticMolecules } from "./syntheticMolecules.ts";
-
-const types: Record<string, string> = {
-  ".html": "text/html",
-  ".js": "text/javascript",
-  ".json": "application/json",
-  ".css": "text/css",
-  ".svg": "image/svg+xml",
-  ".bin": "application/octet-stream",
-};
 
 /**
  * The home page's wavenumber search over an atlas of N invented molecules, in Chromium: the
@@ -32,17 +21,12 @@ const types: Record<string, string> = {
  */
 export async function benchBrowserSearch(n: number, queries: number): Promise<string[]> {
   const work = mkdtempSync(join(tmpdir(), "bandatlas-bench-browser-"));
-  const server = createServer((req, res) => {
-    const path = join(work, "site", normalize(decodeURIComponent(new URL(req.url!, "http://x").pathname)).replace(/^[/\\]+/, "") || "index.html");
-    const file = existsSync(path) && statSync(path).isDirectory() ? join(path, "index.html") : path;
-    if (!file.startsWith(join(work, "site")) || !existsSync(file)) return res.writeHead(404).end();
-    res.writeHead(200, { "content-type": types[extname(file)] ?? "application/octet-stream" });
-    createReadStream(file).pipe(res);
-  });
+  const site = join(work, "site");
+  const { server, base } = await serveSite(site);
   try {
     const built = await runChild<{ lines: Array<{ temperatureK: number; lines: number }> }>("./buildChild.ts", {
       moleculesDir: shippedMoleculesDir,
-      outDir: join(work, "site"),
+      outDir: site,
       sheets: false,
     });
     const molecules = loadMoleculesOrThrow(writeSyntheticMolecules(join(work, "molecules"), n));
@@ -77,20 +61,7 @@ export async function benchBrowserSearch(n: number, queries: number): Promise<st
       `index, all temperatures: ${totalLines} lines, ${(totalGzip / totalLines).toFixed(2)} bytes/line compressed (${(totalRaw / totalLines).toFixed(2)} uncompressed); target ≤ 16 bytes/line`,
     );
 
-    await new Promise<void>((r) => server.listen(0, "127.0.0.1", r));
-    const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}/`;
-    const browser = await chromium.launch({
-      executablePath: "/usr/bin/chromium",
-      args: [
-        "--headless",
-        "--no-sandbox",
-        "--disable-gpu",
-        "--disable-background-networking",
-        "--disable-component-update",
-        "--no-first-run",
-        "--disable-sync",
-      ],
-    });
+    const browser = await launchChromium();
     try {
       const page = await browser.newPage();
       await page.goto(base);

@@ -1,6 +1,7 @@
 // `npm run bench [-- [--quick] [section-prefix]]`: prints figures with their targets. Never part
 // of the tests: machines are noisy. The full run takes several minutes (the 500-molecule builds);
 // --quick uses smaller atlases (scale 10 and 20, browser 50) and finishes in one to two minutes.
+import { benchBrowserCalibrate } from "./browserCalibrate.ts";
 import { benchBrowserSearch } from "./browserSearch.ts";
 import { benchCalibrateSpectrum } from "./calibrateSpectrum.ts";
 import { benchCellTransmittance } from "./cellTransmittance.ts";
@@ -38,6 +39,7 @@ const sections: Array<{ name: string; run: () => Promise<string[]> | string[] }>
   { name: "scale: invented molecules, full builds", run: () => benchScale(quick ? [10, 20] : [50, 200, 500]) },
   { name: "incremental: bandatlas serve, one molecule file saved", run: () => benchIncremental(quick ? 2 : 5) },
   { name: "browser: wavenumber search in Chromium", run: () => benchBrowserSearch(quick ? 50 : 500, 21) },
+  { name: "browser: calibrate page in Chromium, a 65 536-point CO spectrum", run: () => benchBrowserCalibrate(quick ? 3 : 7) },
 ];
 
 const started = performance.now();
