@@ -198,6 +198,15 @@ describe("bad input: one sentence, exit 2, nothing written", () => {
     expect(readdirSync(dir).filter((f) => f.endsWith(".pdf"))).toEqual(before);
   });
 
+  it("an enriched cell: --species keeps only those lines; DCl's isotope-scaled positions are too uncertain to calibrate with", async () => {
+    expect(await refusal(pitt, "--gas", "hcl", "--species", "D35Cl")).toMatch(
+      /no line of hydrogen chloride in .* is precise and isolated enough to serve as a reference/,
+    );
+    expect(await refusal(pitt, "--gas", "hcl", "--species", "H2O")).toMatch(/Hydrogen chloride has no species "H2O"; it has: 1H35Cl, 1H37Cl, 2H35Cl/);
+    const h35 = await calibrate(hunter, "--gas", "hcl", "--species", "H35Cl");
+    expect(h35.lines.every((l) => l.species === "1H35Cl")).toBe(true);
+  });
+
   it("options: an unknown model, a missing gas, a missing file", async () => {
     expect(await refusal(hunter, "--gas", "hcl", "--model", "cubic")).toMatch(/--model cubic: use one of scale, offset, linear, quadratic/);
     expect(await refusal(hunter)).toMatch(/give --gas/);

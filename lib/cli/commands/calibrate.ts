@@ -1,7 +1,7 @@
 import { createHash } from "node:crypto";
 import { readFileSync, statSync } from "node:fs";
 import { basename } from "node:path";
-import { calibrateMeasuredSpectrum, cellModel } from "../../atlas/index.ts";
+import { calibrateMeasuredSpectrum, cellModel, selectSpecies, type CellModel } from "../../atlas/index.ts";
 import { apodizations, correctionModels, type Apodization, type CorrectionModel } from "../../core/index.ts";
 import { calibrationDocument, calibrationText, moleculeCaution, type CalibrationRun } from "../../format/index.ts";
 import { checkSpectrumFileSize, readSpectrumText, SpectrumFileError, type AbscissaUnit, type OrdinateKind } from "../../spectrumFile/index.ts";
@@ -20,6 +20,8 @@ least squares. Refuses when the data do not support a correction.
 
   <spectrum file>         JCAMP-DX (.jdx, .dx) or CSV/TSV of two columns, at most 50 MB
   --gas <molecule>        the gas in the cell: id, formula, CAS number or alias (hcl, CO)
+  --species <list>        an enriched cell: only these species, e.g. D35Cl or 13CO (comma-separated);
+                          default: every species at natural abundance
   --model <name>          ${correctionModels.join(", ")} (default scale):
                             scale      true = measured × (1 + k)
                             offset     true = measured + c
@@ -72,6 +74,7 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
     joinUnitWords(args),
     {
       gas: { type: "string" },
+      species: { type: "string" },
       model: { type: "string" },
       temperature: { type: "string" },
       pressure: { type: "string" },
@@ -109,6 +112,12 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
   const conditions = cellConditionsFromOptions(values);
   const molecule = loadOneMolecule(moleculesDir(values.molecules as string | undefined), values.gas as string);
 
+  let cell: CellModel = cellModel(molecule);
+  if (values.species !== undefined) {
+    // An enriched sample: its species' lines keep their relative strengths; the others are absent.
+    const labels = new Set((values.species as string).split(",").map((name) => selectSpecies(molecule, name).model.label));
+    cell = { ...cell, species: cell.species.filter((s) => labels.has(s.model.label)) };
+  }
   const path = positionals[0];
   const fileName = basename(path);
   try {
@@ -118,7 +127,7 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
       ...(ordinateText ? { ordinate: ordinates[ordinateText.toLowerCase()] } : {}),
     });
     const calibration = calibrateMeasuredSpectrum(
-      cellModel(molecule),
+      cell,
       { wavenumberCm: spectrum.wavenumberCm, absorbance: spectrum.absorbance, resolutionCm: spectrum.resolutionCm },
       { conditions, apodization: apodization as Apodization, model: model as CorrectionModel, ...(resolutionCm !== undefined ? { resolutionCm } : {}) },
     );
