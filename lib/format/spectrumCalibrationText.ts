@@ -67,7 +67,7 @@ export function correctionLines(run: CalibrationRun): string[] {
     const q = withUncertainty(c.quadraticPerCm, c.quadraticUncertaintyPerCm);
     lines.push(`quadratic q = ${signed(q.value)} ± ${q.sigma} cm⁻¹ per cm⁻², about ${c.centreCm.toFixed(2)} cm⁻¹`);
   }
-  if (c.model === "linear" || c.model === "quadratic") lines.push(`correlation of k and c: ${c.scaleOffsetCorrelation.toFixed(3)}`);
+  if (c.model === "linear" || c.model === "quadratic") lines.push(`correlation of k and c: ${c.scaleOffsetCorrelation.toFixed(3).replace("-", "−")}`);
   lines.push(
     `RMS residual ${result.rmsResidualCm.toPrecision(2)} cm⁻¹ over ${result.usedCount} lines; χ²/ν = ${Number.isFinite(c.reducedChiSquared) ? c.reducedChiSquared.toFixed(2) : "—"}`,
   );
