@@ -160,6 +160,29 @@ describe("a JCAMP-DX file", () => {
   });
 });
 
+describe("a near-infrared spectrum in nm", () => {
+  it("an invented acetylene cell written in descending vacuum nm with a +20 ppm scale error: recovered within 3σ, and the air-wavelength caveat is stated", async () => {
+    const cell = cellModel(selectMolecule(shippedMolecules(), "c2h2"));
+    const truth = trueSpectrum(cell, defaultCellConditions, 0.1, "triangular", 6440, 6640);
+    const m = measuredSpectrum(
+      truth,
+      6450,
+      6630,
+      0.025,
+      { scale: 20e-6, offsetCm: 0, noiseAbsorbance: 0.003, tiltPerCm: 0, baselineAbsorbance: 0.01 },
+      seededRandom(3),
+    );
+    const rows = ["wavelength (nm),absorbance"];
+    for (let i = m.wavenumberCm.length - 1; i >= 0; i--) rows.push(`${(1e7 / m.wavenumberCm[i]).toFixed(6)},${m.absorbance[i].toFixed(5)}`);
+    const path = join(dir, "c2h2-nm.csv");
+    writeFileSync(path, rows.join("\n"));
+    const doc = await calibrate(path, "--gas", "c2h2", "--resolution", "0.1");
+    expect(Math.abs(doc.correction.scalePpm - 20)).toBeLessThan(3 * doc.correction.scalePpmUncertainty + 0.01);
+    const { stdout } = await runCli(["calibrate", path, "--gas", "c2h2", "--resolution", "0.1"]);
+    expect(stdout).toMatch(/taken as vacuum wavelengths; an axis in standard air shows here as a scale error of about −273 ppm/);
+  });
+});
+
 describe("bad input: one sentence, exit 2, nothing written", () => {
   it("not a spectrum, empty, one column, NaN, µm without a unit", async () => {
     expect(await refusal(join(import.meta.dirname, "..", "molecules", "hcl.yaml"), "--gas", "hcl")).toMatch(/hcl\.yaml does not look like a spectrum/);

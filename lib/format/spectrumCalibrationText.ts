@@ -92,6 +92,13 @@ export function calibrationNotes(run: CalibrationRun): string[] {
   const { calibration } = run;
   const { result } = calibration;
   const notes = [...run.spectrum.notes, `${calibration.resolutionNote}.`, ...calibration.set.notes];
+  if (run.spectrum.abscissaUnit !== "cm-1") {
+    // Optical spectrum analysers and wavemeters often report wavelengths in standard air, whose
+    // refractive index would read as a scale error: 1/n − 1 ≈ −2.73·10⁻⁴ from 2000 to 6500 cm⁻¹ (Edlén, core airRefractiveIndexEdlen).
+    notes.push(
+      "The file's wavelengths were taken as vacuum wavelengths; an axis in standard air shows here as a scale error of about −273 ppm (1/n − 1 for standard air, Edlén), not as an instrument fault.",
+    );
+  }
   const used = result.lines.filter((l) => l.used);
   const unvalidated = used.filter((l) => l.reference.positionStatus === "not-validated").length;
   if (unvalidated > 0) {
