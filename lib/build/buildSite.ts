@@ -1,15 +1,16 @@
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync, cpSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { atlasEntry, standardTemperaturesK, type AtlasEntry } from "../atlas/index.ts";
+import { atlasEntry, defaultFindMinRelative, entryLines, standardTemperaturesK, type AtlasEntry } from "../atlas/index.ts";
 import { linesCsv, linesDocument } from "../format/index.ts";
 import { loadMoleculesOrThrow, type Molecule } from "../molecules/index.ts";
 import { bandOverviewDescription, bandOverviewSvg } from "../plot/index.ts";
-import { lineIndexBytesPerLine } from "../shared/lineIndexCodec.ts";
 import { contentDir, runEleventy } from "../site/runEleventy.ts";
-import { siteData, type EntryPlots } from "../site/pageData.ts";
-import { lineIndex, nameIndexJson } from "../site/searchIndexes.ts";
-import { benchModelPath, downloadPath, temperatureToken } from "../shared/sitePaths.ts";
+import { accuracyRows, siteData, type BenchInput, type EntryPlots, type SiteDataInput } from "../site/pageData.ts";
+import { nearInfraredRowsOf, type NearInfraredRow } from "../site/nearInfraredIndex.ts";
+import { nameIndexJson } from "../site/searchIndexes.ts";
+import { LineIndexBuilder, lineIndexBytesPerLine } from "../shared/lineIndexCodec.ts";
+import { benchModelPath, downloadPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 import { startBenchData, type BenchDataRun } from "./benchDataPool.ts";
 import { bundleBenchScript, bundleBrowserScript, bundleCalibrateScript } from "./bundleBrowser.ts";
 import type { BuildCache } from "./buildCache.ts";
@@ -28,6 +29,8 @@ export interface BuildOptions {
   sheets?: boolean;
   /** Results kept between rebuilds of one `bandatlas serve` session (entries and plots of unchanged molecules). */
   cache?: BuildCache;
+  /** Molecules per batch (default moleculesPerBatch); the output does not depend on it. */
+  moleculesPerBatch?: number;
   /** Progress lines for the person running the build. */
   log?: (line: string) => void;
 }
@@ -40,7 +43,7 @@ export interface BuildReport {
   sheets: number;
   lineIndex: Array<{ temperatureK: number; lines: number; bytes: number }>;
   build: BuildIdentity;
-  /** Wall time of each stage in ms, for `npm run bench` (stages run one after another). */
+  /** Wall time of each stage in ms, for `npm run bench`, summed over the batches of molecules. */
   timings: BuildTimings;
 }
 
@@ -70,6 +73,13 @@ export class BuildError extends Error {
   }
 }
 
+/**
+ * Molecules whose pages, plots, downloads and sheets are made together before the next ones:
+ * the build's peak memory is about one batch's (a molecule's entries, plots and pages take a
+ * few MB), whatever the size of the atlas; each batch costs one more Eleventy run (≈0.2 s).
+ */
+export const moleculesPerBatch = 16;
+
 type StartBenchSheets = typeof import("../sheet/index.ts").startBenchSheets;
 
 /** Loaded only when sheets are wanted: PDFKit and the fonts take about 0.4 s to load, which page-only builds (the tests) skip. */
@@ -85,9 +95,10 @@ function writeFile(root: string, path: string, text: string) {
 
 /**
  * The whole atlas: every molecule loaded and validated first (a bad file stops the build before
- * anything is written), each AtlasEntry computed once and shared by pages, plots, downloads and
- * sheets, everything written into a fresh folder beside the target and swapped in only when all
- * of it succeeded.
+ * anything is written), then batch by batch of molecules each AtlasEntry computed once and shared
+ * by that batch's pages, plots, downloads and sheets, and dropped before the next batch; the
+ * pages about the whole atlas come last, from small tables gathered on the way. Everything is
+ * written into a fresh folder beside the target and swapped in only when all of it succeeded.
  */
 export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   const log = options.log ?? (() => {});
@@ -104,114 +115,141 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   const loadingMs = lap();
   const cache = options.cache;
   const perMolecule = <T>(kind: string, molecule: Molecule, compute: () => T): T => (cache ? cache.forMolecule(kind, molecule, compute) : compute());
-  const entriesOf = new Map(
-    molecules.map((molecule) => [
-      molecule.id,
-      perMolecule("entries", molecule, () =>
-        molecule.species.flatMap((species) => standardTemperaturesK.map((temperatureK) => atlasEntry(molecule, species, temperatureK))),
-      ),
-    ]),
-  );
-  const entries: AtlasEntry[] = [...entriesOf.values()].flat();
-  const entriesMs = lap();
   const build = options.build ?? buildIdentity(repoDir);
   const startBenchSheets = options.sheets === false ? null : await loadSheetWriter();
 
   const outDir = resolve(options.outDir);
   mkdirSync(dirname(outDir), { recursive: true });
   const work = mkdtempSync(join(dirname(outDir), ".site-build-"));
-  // The sheets start on a worker thread as soon as the calibration marks are known, beside the
-  // indexes and pages on this thread; this thread joins in once the pages are written (the
-  // entries are shared, never recomputed).
+  const timings = { physicsMs: 0, plotsMs: 0, filesMs: 0, pagesMs: 0, sheetsMs: 0 };
+  let entryCount = 0;
+  let pageCount = 0;
+  const sheets: string[] = [];
+  // What outlives a batch: the small cross-molecule tables and each molecule's bench input.
+  const lineIndexes = new Map(standardTemperaturesK.map((t) => [t, new LineIndexBuilder(t, defaultFindMinRelative)]));
+  const accuracy: SiteDataInput["accuracy"] = [];
+  const nearInfrared: NearInfraredRow[] = [];
+  const bench = new Map<string, BenchInput>();
+  const nameIndexPath = "assets/search/names.json";
+  const lineIndexPaths = standardTemperaturesK.map((temperatureK) => ({ temperatureK, path: `assets/search/lines-${temperatureToken(temperatureK)}K.json` }));
+  const siteInput = (): SiteDataInput => ({
+    molecules,
+    build,
+    sheetsAvailable: startBenchSheets !== null,
+    developersMarkdownPath: join(repoDir, "DEVELOPERS.md"),
+    nameIndexPath,
+    lineIndexPaths,
+    bench,
+    accuracy,
+    nearInfraredRows: nearInfrared,
+  });
   let sheetRun: ReturnType<StartBenchSheets> | null = null;
   let benchRun: BenchDataRun | null = null;
   try {
-    // Calibration marks and the bench page's cell model: once per molecule, shared by pages and
-    // sheets; computed on a worker beside the plots, this thread joining in after them.
-    const benchMissing = molecules.filter((m) => !cache?.has("bench", m));
-    benchRun = startBenchData(benchMissing);
-    const plots = new Map<AtlasEntry, EntryPlots>();
-    for (const molecule of molecules) {
-      const moleculeEntries = entriesOf.get(molecule.id)!;
-      const moleculePlots = await perMolecule("plots", molecule, async () => {
-        const made: EntryPlots[] = [];
-        for (const entry of moleculeEntries)
-          made.push({
-            linearSvg: await bandOverviewSvg(entry, "linear"),
-            logSvg: await bandOverviewSvg(entry, "log"),
-            description: bandOverviewDescription(entry, "linear"),
-          });
-        return made;
-      });
-      moleculeEntries.forEach((entry, i) => plots.set(entry, moleculePlots[i]));
-    }
-    log(`plots: ${plots.size * 2} SVGs`);
-    const plotsMs = lap();
-    const computedBench = await benchRun.finish();
-    const benchById = new Map(benchMissing.map((m, i) => [m.id, computedBench[i]]));
-    const bench = new Map(molecules.map((m) => [m.id, perMolecule("bench", m, () => benchById.get(m.id)!)]));
-    const physicsMs = entriesMs + lap();
-    sheetRun = startBenchSheets ? startBenchSheets({ molecules, entries, outDir: work, build, calibration: [...bench.values()].map((b) => b.marks) }) : null;
+    // Molecule by molecule, a batch at a time, from file to pages, plots, downloads and sheets:
+    // memory holds one batch's entries, plots and pages (plus one batch of sheets in flight), not
+    // the atlas. Batches are whole molecules in id order, so every output is that of one pass.
+    const perBatch = Math.max(1, options.moleculesPerBatch ?? moleculesPerBatch);
+    for (let first = 0; first < molecules.length; first += perBatch) {
+      const batch = molecules.slice(first, first + perBatch);
+      lap();
+      const entriesOf = new Map(
+        batch.map((molecule) => [
+          molecule.id,
+          perMolecule("entries", molecule, () =>
+            molecule.species.flatMap((species) => standardTemperaturesK.map((temperatureK) => atlasEntry(molecule, species, temperatureK))),
+          ),
+        ]),
+      );
+      const entries: AtlasEntry[] = [...entriesOf.values()].flat();
+      entryCount += entries.length;
+      timings.physicsMs += lap();
 
-    const nameIndexPath = "assets/search/names.json";
+      // Calibration marks and the bench page's cell model: once per molecule, shared by pages and
+      // sheets; computed on a worker beside the plots, this thread joining in after them.
+      const benchMissing = batch.filter((m) => !cache?.has("bench", m));
+      benchRun = startBenchData(benchMissing);
+      const plots = new Map<AtlasEntry, EntryPlots>();
+      for (const molecule of batch) {
+        const moleculeEntries = entriesOf.get(molecule.id)!;
+        const moleculePlots = await perMolecule("plots", molecule, async () => {
+          const made: EntryPlots[] = [];
+          for (const entry of moleculeEntries)
+            made.push({
+              linearSvg: await bandOverviewSvg(entry, "linear"),
+              logSvg: await bandOverviewSvg(entry, "log"),
+              description: bandOverviewDescription(entry, "linear"),
+            });
+          return made;
+        });
+        moleculeEntries.forEach((entry, i) => plots.set(entry, moleculePlots[i]));
+      }
+      timings.plotsMs += lap();
+      const computedBench = await benchRun.finish();
+      benchRun = null;
+      const benchById = new Map(benchMissing.map((m, i) => [m.id, computedBench[i]]));
+      const batchBench = batch.map((m) => perMolecule("bench", m, () => benchById.get(m.id)!));
+      for (const b of batchBench) {
+        bench.set(b.moleculeId, { marks: b.marks, defaultRangeCm: b.defaultRangeCm });
+        writeFile(work, benchModelPath(b.moleculeId), JSON.stringify(b.model));
+      }
+      timings.physicsMs += lap();
+      sheetRun = startBenchSheets ? startBenchSheets({ molecules: batch, entries, outDir: work, build, calibration: batchBench.map((b) => b.marks) }) : null;
+
+      for (const temperatureK of standardTemperaturesK) {
+        lineIndexes
+          .get(temperatureK)!
+          .add(entryLines(entries, temperatureK, defaultFindMinRelative), (l) => speciesPagePath(l.molecule, l.species, temperatureK));
+      }
+      accuracy.push(...accuracyRows(batch, entries));
+      nearInfrared.push(...nearInfraredRowsOf(batch, entries));
+      for (const molecule of batch) {
+        const downloads = perMolecule("downloads", molecule, () =>
+          entriesOf.get(molecule.id)!.flatMap((entry) =>
+            entry.bands.flatMap((band) => [
+              [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"), linesCsv(band.lines, molecule.limitations)],
+              [
+                downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"),
+                JSON.stringify(linesDocument(entry.moleculeId, band.lines, molecule.limitations), null, 2) + "\n",
+              ],
+            ]),
+          ),
+        );
+        for (const [path, text] of downloads) writeFile(work, path, text);
+      }
+      timings.filesMs += lap();
+
+      pageCount += await runEleventy(work, siteData(siteInput(), { molecules: batch, entries, plots }), "molecules");
+      timings.pagesMs += lap();
+      if (sheetRun) {
+        sheets.push(...(await sheetRun.finish()));
+        sheetRun = null;
+        timings.sheetsMs += lap();
+      }
+    }
+    log(`atlas: ${entryCount} entries of ${molecules.length} molecules, in batches of ${perBatch}`);
+    log(startBenchSheets ? `bench sheets: ${sheets.length} PDFs` : "bench sheets: not requested");
+
     writeFile(work, nameIndexPath, nameIndexJson(molecules));
-    const lineIndexPaths = [];
     const lineIndexReport = [];
-    for (const temperatureK of standardTemperaturesK) {
-      const path = `assets/search/lines-${temperatureToken(temperatureK)}K.json`;
-      const file = lineIndex(molecules, temperatureK, entries);
+    for (const { temperatureK, path } of lineIndexPaths) {
+      const file = lineIndexes.get(temperatureK)!.finish();
       const text = JSON.stringify(file);
       writeFile(work, path, text);
-      lineIndexPaths.push({ temperatureK, path });
       lineIndexReport.push({ temperatureK, lines: file.count, bytes: Buffer.byteLength(text) });
     }
+    lineIndexes.clear();
     log(
       `search index: ${lineIndexReport.map((r) => `${r.lines} lines at ${r.temperatureK} K`).join(", ")} (${lineIndexBytesPerLine} bytes a line before base64)`,
     );
-
-    for (const molecule of molecules) {
-      const downloads = perMolecule("downloads", molecule, () =>
-        entriesOf.get(molecule.id)!.flatMap((entry) =>
-          entry.bands.flatMap((band) => [
-            [downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "csv"), linesCsv(band.lines, molecule.limitations)],
-            [
-              downloadPath(entry.moleculeId, entry.species, entry.temperatureK, band.label, "json"),
-              JSON.stringify(linesDocument(entry.moleculeId, band.lines, molecule.limitations), null, 2) + "\n",
-            ],
-          ]),
-        ),
-      );
-      for (const [path, text] of downloads) writeFile(work, path, text);
-    }
-
     await bundleBrowserScript(join(work, "assets/search.js"));
-    for (const b of bench.values()) writeFile(work, benchModelPath(b.moleculeId), JSON.stringify(b.model));
     await bundleBenchScript(join(work, "assets/bench.js"));
     await bundleCalibrateScript(join(work, "assets/calibrate.js"));
     for (const asset of ["site.css", "favicon.svg"]) cpSync(join(contentDir, "assets", asset), join(work, "assets", asset));
+    timings.filesMs += lap();
 
-    const filesMs = lap();
-    const data = siteData({
-      molecules,
-      entries,
-      plots,
-      build,
-      sheetsAvailable: startBenchSheets !== null,
-      developersMarkdownPath: join(repoDir, "DEVELOPERS.md"),
-      nameIndexPath,
-      lineIndexPaths,
-      bench,
-    });
-    await runEleventy(work, data);
-    const pagesMs = lap();
-
-    let sheets: string[] = [];
-    if (sheetRun) {
-      sheets = await sheetRun.finish();
-      log(`bench sheets: ${sheets.length} PDFs`);
-    } else log("bench sheets: not requested");
-
-    const sheetsMs = sheetRun ? lap() : 0;
+    pageCount += await runEleventy(work, siteData(siteInput(), null), "site");
+    timings.pagesMs += lap();
     const links = checkInternalLinks(work);
     if (links.broken.length) {
       const sample = links.broken
@@ -226,16 +264,16 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     swapDirectory(work, outDir);
     cache?.endBuild();
     const finishMs = lap();
-    const timings = { loadingMs, physicsMs, plotsMs, filesMs, pagesMs, sheetsMs, finishMs, totalMs: performance.now() - started };
+    const finished = { loadingMs, ...timings, finishMs, totalMs: performance.now() - started };
     return {
       outDir,
       molecules: molecules.length,
       pages: links.pages,
-      entries: entries.length,
+      entries: entryCount,
       sheets: sheets.length,
       lineIndex: lineIndexReport,
       build,
-      timings,
+      timings: finished,
     };
   } catch (error) {
     await Promise.all([sheetRun?.cancel(), benchRun?.cancel()]);

@@ -27,8 +27,8 @@ interface FontkitFont {
   layout(text: string, ...rest: unknown[]): { glyphs: unknown[]; positions: GlyphPosition[] };
 }
 
-/** Shaped texts kept per font; a bound so a very large build cannot grow it without end. */
-const maxShapedTexts = 50_000;
+/** Shaped texts kept per font: the shared headings and one entry's A4 and Letter pair fit; a build of any size stays within a few MB. */
+const maxShapedTexts = 4_000;
 
 /**
  * The font with its text shaping remembered across documents. PDFKit remembers shaped words only

@@ -13,7 +13,8 @@ export const nearInfraredLimitNm = 2500;
  * wavelength. Diatomic overtones and linear-molecule bands appear alike: the rows come from the
  * atlas entries, whatever kind of molecule made them.
  */
-export function nearInfraredRows(molecules: Molecule[], entries: AtlasEntry[]) {
+/** The rows of some molecules' entries, unsorted (a build adds them batch by batch). */
+export function nearInfraredRowsOf(molecules: Molecule[], entries: AtlasEntry[]) {
   const byId = new Map(molecules.map((m) => [m.id, m]));
   const rows = [];
   for (const entry of entries) {
@@ -45,6 +46,16 @@ export function nearInfraredRows(molecules: Molecule[], entries: AtlasEntry[]) {
       });
     }
   }
-  rows.sort((a, b) => a.originNmValue - b.originNmValue || a.species.localeCompare(b.species));
-  return rows.map(({ originNmValue: _omit, ...row }) => row);
+  return rows;
+}
+
+export type NearInfraredRow = ReturnType<typeof nearInfraredRowsOf>[number];
+
+/** Shortest wavelength first (a stable sort: ties keep the molecules' order). */
+export function sortedNearInfraredRows(rows: NearInfraredRow[]) {
+  return [...rows].sort((a, b) => a.originNmValue - b.originNmValue || a.species.localeCompare(b.species)).map(({ originNmValue: _omit, ...row }) => row);
+}
+
+export function nearInfraredRows(molecules: Molecule[], entries: AtlasEntry[]) {
+  return sortedNearInfraredRows(nearInfraredRowsOf(molecules, entries));
 }

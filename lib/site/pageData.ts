@@ -10,7 +10,7 @@ import { accuracyRows, citationOf } from "./accuracyRows.ts";
 import { bandView } from "./bandView.ts";
 import { speciesDisplay } from "./formatCells.ts";
 import { ghsPictogramName } from "../shared/ghsPictograms.ts";
-import { nearInfraredLimitNm, nearInfraredRows } from "./nearInfraredIndex.ts";
+import { nearInfraredLimitNm, sortedNearInfraredRows, type NearInfraredRow } from "./nearInfraredIndex.ts";
 import { benchModelPath, benchPagePath, calibratePagePath, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 
 /** Plots of one entry, rendered beforehand (lib/plot) and inlined by the template. */
@@ -215,10 +215,9 @@ export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: En
 
 export type SpeciesPageView = ReturnType<typeof speciesPageView>;
 
+/** What the whole atlas contributes to the pages: every molecule, and the small cross-molecule tables. */
 export interface SiteDataInput {
   molecules: Molecule[];
-  entries: AtlasEntry[];
-  plots: Map<AtlasEntry, EntryPlots>;
   build: BuildIdentity;
   sheetsAvailable: boolean;
   developersMarkdownPath: string;
@@ -226,27 +225,44 @@ export interface SiteDataInput {
   lineIndexPaths: Array<{ temperatureK: number; path: string }>;
   /** Per molecule id: calibration marks and bench-page defaults, computed once by the build. */
   bench?: Map<string, BenchInput>;
+  /** The method page's accuracy table and the near-infrared index, gathered molecule by molecule. */
+  accuracy: ReturnType<typeof accuracyRows>;
+  nearInfraredRows: NearInfraredRow[];
 }
 
+/** One batch of molecules whose own pages (molecule, species, bench) are rendered together. */
+export interface MoleculeBatch {
+  molecules: Molecule[];
+  /** The batch's atlas entries, every species at every temperature. */
+  entries: AtlasEntry[];
+  plots: Map<AtlasEntry, EntryPlots>;
+}
 
-/** Everything the templates read, as one global data object. */
-export function siteData(input: SiteDataInput) {
-  const byId = new Map(input.molecules.map((m) => [m.id, m]));
+/**
+ * Everything the templates read, as one global data object. With a batch, the per-molecule lists
+ * (molecule pages, species pages, bench pages) hold that batch only, so a build renders the
+ * molecules' own pages batch by batch and never holds the whole atlas; without one, the lists
+ * describe every molecule for the pages about the whole atlas (home, cautions, method, indexes).
+ */
+export function siteData(input: SiteDataInput, batch: MoleculeBatch | null) {
+  const molecules = batch ? batch.molecules : input.molecules;
+  const entries = batch?.entries ?? [];
+  const byId = new Map(molecules.map((m) => [m.id, m]));
   return {
     cautions: { hazardSummaryDeferral, allGasesCaution, predictionNotice },
     build: { ...input.build, text: describeBuild(input.build) },
-    molecules: input.molecules.map((m) => moleculeView(m, input.bench?.has(m.id) ?? false)),
+    molecules: molecules.map((m) => moleculeView(m, input.bench?.has(m.id) ?? false)),
     // Species pages are the bulk of the site: their views are made per batch of pages as
-    // runEleventy renders them (it sets `speciesPages`), so a large atlas never holds all at once.
+    // runEleventy renders them (it sets `speciesPages`), so even one batch is not held at once.
     speciesPageViews: {
-      count: input.entries.length,
+      count: entries.length,
       views: (from: number, to: number) =>
-        input.entries.slice(from, to).map((e) => speciesPageView(byId.get(e.moleculeId)!, e, input.plots.get(e)!, input.sheetsAvailable, input.entries, input.bench?.get(e.moleculeId))),
+        entries.slice(from, to).map((e) => speciesPageView(byId.get(e.moleculeId)!, e, batch!.plots.get(e)!, input.sheetsAvailable, entries, input.bench?.get(e.moleculeId))),
     },
     calibratePage: calibratePageView(input.molecules, input.bench),
-    benchPages: input.molecules.filter((m) => input.bench?.has(m.id)).map((m) => benchPageView(m, input.bench!.get(m.id)!)),
-    accuracy: accuracyRows(input.molecules, input.entries),
-    nearInfrared: { rows: nearInfraredRows(input.molecules, input.entries), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },
+    benchPages: molecules.filter((m) => input.bench?.has(m.id)).map((m) => benchPageView(m, input.bench!.get(m.id)!)),
+    accuracy: input.accuracy,
+    nearInfrared: { rows: sortedNearInfraredRows(input.nearInfraredRows), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },
     temperatures: standardTemperaturesK.map((t) => ({ value: t, token: temperatureToken(t), isDefault: t === defaultTemperatureK })),
     find: { windowCm: defaultFindWindowCm, minRelative: defaultFindMinRelative, temperatureK: defaultTemperatureK },
     search: { nameIndex: input.nameIndexPath, lineIndexes: input.lineIndexPaths.map((x) => ({ token: temperatureToken(x.temperatureK), path: x.path })) },

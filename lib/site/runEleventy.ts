@@ -11,27 +11,38 @@ export const contentDir = fileURLToPath(new URL("../../content", import.meta.url
 type PageData = Omit<SiteData, "speciesPageViews"> & { speciesPages: SpeciesPageView[] };
 
 const speciesTemplate = "species.njk";
+/** The templates of a molecule's own pages; a batch run renders these, the site run all others. */
+export const moleculeTemplates: readonly string[] = ["molecule.njk", speciesTemplate, "bench.njk"];
 
 /**
  * Species pages rendered per Eleventy run. Eleventy keeps every page it rendered in memory until
  * its run ends (toJSON returns them all), and species pages are large (tables and two inline
- * SVGs), so a large atlas is rendered in batches: the peak memory then stays near one batch's.
+ * SVGs), so a large batch is rendered in parts: the peak memory then stays near one part's.
  */
 export const speciesPagesPerRun = 250;
 
-/** Renders content/ with templates/ into outDir, the atlas's data as the global `atlas`. */
-export async function runEleventy(outDir: string, data: SiteData, options: { speciesPagesPerRun?: number } = {}): Promise<number> {
+/**
+ * Renders content/ with templates/ into outDir, the atlas's data as the global `atlas`:
+ * "molecules" renders the batch's molecule, species and bench pages (the species pages in parts
+ * of speciesPagesPerRun), "site" every other page.
+ */
+export async function runEleventy(outDir: string, data: SiteData, pages: "molecules" | "site", options: { speciesPagesPerRun?: number } = {}): Promise<number> {
   const perRun = Math.max(1, options.speciesPagesPerRun ?? speciesPagesPerRun);
   const { speciesPageViews, ...rest } = data;
-  // The first run renders every page, with the first batch of species pages; later runs render
-  // the species template alone with the next batches.
-  const others = readdirSync(contentDir).filter((f) => /\.(njk|md)$/.test(f) && f !== speciesTemplate);
-  let pages = await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(0, perRun) }, []);
-  for (let start = perRun; start < speciesPageViews.count; start += perRun) pages += await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(start, start + perRun) }, others);
-  return pages;
+  const templates = readdirSync(contentDir).filter((f) => /\.(njk|md)$/.test(f));
+  if (pages === "site") return runOnce(outDir, { ...rest, speciesPages: [] }, moleculeTemplates);
+  const notMolecule = templates.filter((f) => !moleculeTemplates.includes(f));
+  // The first run renders the molecule and bench pages with the first part of the species pages;
+  // later runs render the species template alone with the next parts.
+  let count = await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(0, perRun) }, notMolecule);
+  const speciesOnly = templates.filter((f) => f !== speciesTemplate);
+  for (let start = perRun; start < speciesPageViews.count; start += perRun) {
+    count += await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(start, start + perRun) }, speciesOnly);
+  }
+  return count;
 }
 
-async function runOnce(outDir: string, data: PageData, ignored: string[]): Promise<number> {
+async function runOnce(outDir: string, data: PageData, ignored: readonly string[]): Promise<number> {
   const eleventy = new Eleventy(contentDir, outDir, {
     quietMode: true,
     config(config: any) {
