@@ -9,6 +9,7 @@ import { contentDir, runEleventy } from "../site/runEleventy.ts";
 import { accuracyRows, siteData, type BenchInput, type EntryPlots, type SiteDataInput } from "../site/pageData.ts";
 import { nearInfraredRowsOf, type NearInfraredRow } from "../site/nearInfraredIndex.ts";
 import { nameIndexJson } from "../site/searchIndexes.ts";
+import { forgetBandErrors } from "../core/index.ts";
 import { LineIndexBuilder, lineIndexBytesPerLine } from "../shared/lineIndexCodec.ts";
 import { benchModelPath, downloadPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 import { startBenchData, type BenchDataRun } from "./benchDataPool.ts";
@@ -226,6 +227,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
         sheetRun = null;
         timings.sheetsMs += lap();
       }
+      // The batch is done: the band errors cached on its species go, like its entries.
+      for (const molecule of batch) for (const species of molecule.species) forgetBandErrors(species.model);
     }
     log(`atlas: ${entryCount} entries of ${molecules.length} molecules, in batches of ${perBatch}`);
     log(startBenchSheets ? `bench sheets: ${sheets.length} PDFs` : "bench sheets: not requested");

@@ -24,6 +24,7 @@ export * from "./vibrationalPartitionFunction.ts";
 export * from "./speciesPartitionFunction.ts";
 export * from "./bandAccuracy.ts";
 export * from "./positionErrors.ts";
+export { forgetBandErrors } from "./positionUncertainty.ts";
 export * from "./nearbyLines.ts";
 export * from "./faddeeva.ts";
 export * from "./voigtProfile.ts";

@@ -82,6 +82,14 @@ const bandErrors = new WeakMap<object, Map<string, BandErrors>>();
  * Made once per species and band and kept (the atlas computes every band at several temperatures,
  * and the CLI and benchmarks many times), for diatomic and linear species alike.
  */
+/**
+ * Drops a species' cached band errors: a build that is done with a molecule's pages releases
+ * them, so its memory does not grow with the atlas (they are made again if asked for).
+ */
+export function forgetBandErrors(species: object): void {
+  bandErrors.delete(species);
+}
+
 export function cachedBandErrors(species: object, bandKey: string, make: () => BandErrors): BandErrors {
   let byBand = bandErrors.get(species);
   if (!byBand) bandErrors.set(species, (byBand = new Map()));

@@ -95,10 +95,11 @@ function undoDeltaBits(deltas: Uint32Array): void {
  * all at the end exactly as if they had come in one list.
  */
 export class LineIndexBuilder {
-  private wavenumbers: number[] = [];
-  private intensities: number[] = [];
-  private groupOf: number[] = [];
-  private labelOf: number[] = [];
+  private n = 0;
+  private wavenumbers = new Float64Array(1024);
+  private intensities = new Float64Array(1024);
+  private groupOf = new Uint32Array(1024);
+  private labelOf = new Uint32Array(1024);
   private groups: LineIndexFile["groups"] = [];
   private groupIds = new Map<string, number>();
   private labels: string[] = [];
@@ -125,15 +126,30 @@ export class LineIndexBuilder {
         this.labels.push(line.label);
         this.labelIds.set(line.label, l);
       }
-      this.wavenumbers.push(line.wavenumber);
-      this.intensities.push(line.relativeIntensity);
-      this.groupOf.push(g);
-      this.labelOf.push(l);
+      if (this.n === this.wavenumbers.length) this.grow();
+      this.wavenumbers[this.n] = line.wavenumber;
+      this.intensities[this.n] = line.relativeIntensity;
+      this.groupOf[this.n] = g;
+      this.labelOf[this.n] = l;
+      this.n++;
     }
   }
 
+  private grow(): void {
+    const size = 2 * this.wavenumbers.length;
+    const bigger = <T extends Float64Array | Uint32Array>(old: T, make: (n: number) => T): T => {
+      const out = make(size);
+      out.set(old as never);
+      return out;
+    };
+    this.wavenumbers = bigger(this.wavenumbers, (k) => new Float64Array(k));
+    this.intensities = bigger(this.intensities, (k) => new Float64Array(k));
+    this.groupOf = bigger(this.groupOf, (k) => new Uint32Array(k));
+    this.labelOf = bigger(this.labelOf, (k) => new Uint32Array(k));
+  }
+
   get count(): number {
-    return this.wavenumbers.length;
+    return this.n;
   }
 
   /**
@@ -141,7 +157,7 @@ export class LineIndexBuilder {
    * labels numbered in the order the sorted lines first use them.
    */
   finish(): LineIndexFile {
-    const n = this.wavenumbers.length;
+    const n = this.n;
     const { wavenumbers: w, groups: g, labels: lb, groupOf, labelOf } = this;
     const order = Array.from({ length: n }, (_, i) => i);
     order.sort((a, b) => {
