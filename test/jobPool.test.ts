@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { startJobs, workerJob } from "../lib/shared/jobPool.ts";
+import { sharedWorkers, startJobs, workerJob } from "../lib/shared/jobPool.ts";
 
 const workerEntry = new URL("./helpers/doublingWorker.mjs", import.meta.url);
 const double = (n: number) => ({ doubled: 2 * n, thread: "main" });
@@ -32,6 +32,23 @@ describe("startJobs", () => {
       throw new TypeError("not here");
     };
     await expect(startJobs({ jobs: [1], workers: 0, workerEntry, runHere: refuse, errorOf }).finish()).rejects.toThrow(TypeError);
+  });
+});
+
+describe("sharedWorkers", () => {
+  it("keeps one pool across runs (a build's batches) until closed", async () => {
+    const shared = sharedWorkers();
+    const first = await startJobs({ jobs: [1, 2, 3, 4], workers: 1, workerEntry, runHere: double, errorOf, shared }).finish();
+    const pool = shared.poolFor(workerEntry, 1);
+    const second = await startJobs({ jobs: [5, 6, 7, 8], workers: 1, workerEntry, runHere: double, errorOf, shared }).finish();
+    expect([...first, ...second].map((r) => r.doubled)).toEqual([2, 4, 6, 8, 10, 12, 14, 16]);
+    expect(second.some((r) => r.thread === "worker")).toBe(true);
+    // The same pool served both runs and is still up; close stops it, and the next use makes a new one.
+    expect(shared.poolFor(workerEntry, 1)).toBe(pool);
+    expect(pool.threads.length).toBe(1);
+    await shared.close();
+    expect(shared.poolFor(workerEntry, 1)).not.toBe(pool);
+    await shared.close();
   });
 });
 

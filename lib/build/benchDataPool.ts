@@ -1,6 +1,6 @@
 import { availableParallelism } from "node:os";
 import type { Molecule } from "../molecules/index.ts";
-import { startJobs, type JobRun } from "../shared/jobPool.ts";
+import { startJobs, type JobRun, type SharedWorkers } from "../shared/jobPool.ts";
 import { moleculeBenchData, type MoleculeBenchData } from "./benchData.ts";
 
 /**
@@ -21,8 +21,10 @@ export type BenchDataRun = JobRun<MoleculeBenchData>;
 export function startBenchData(
   molecules: Molecule[],
   threads = Math.min(2, availableParallelism(), 1 + Math.floor(molecules.length / moleculesPerExtraThread)),
+  shared?: SharedWorkers,
 ): BenchDataRun {
   return startJobs({
+    ...(shared ? { shared } : {}),
     jobs: molecules,
     workers: threads >= 2 && molecules.length >= 2 ? 1 : 0,
     workerEntry: new URL("./benchDataWorkerEntry.mjs", import.meta.url),

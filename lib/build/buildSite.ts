@@ -13,6 +13,7 @@ import { forgetBandErrors } from "../core/index.ts";
 import { LineIndexBuilder, lineIndexBytesPerLine } from "../shared/lineIndexCodec.ts";
 import { benchModelPath, downloadPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 import { startBenchData, type BenchDataRun } from "./benchDataPool.ts";
+import { sharedWorkers } from "../shared/jobPool.ts";
 import { bundleBenchScript, bundleBrowserScript, bundleCalibrateScript } from "./bundleBrowser.ts";
 import type { BuildCache } from "./buildCache.ts";
 import { buildIdentity, type BuildIdentity } from "../shared/buildIdentity.ts";
@@ -146,6 +147,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   });
   let sheetRun: ReturnType<StartBenchSheets> | null = null;
   let benchRun: BenchDataRun | null = null;
+  // One worker per kind for the whole build, not one per batch.
+  const workers = sharedWorkers();
   try {
     // Molecule by molecule, a batch at a time, from file to pages, plots, downloads and sheets:
     // memory holds one batch's entries, plots and pages (plus one batch of sheets in flight), not
@@ -169,7 +172,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       // Calibration marks and the bench page's cell model: once per molecule, shared by pages and
       // sheets; computed on a worker beside the plots, this thread joining in after them.
       const benchMissing = batch.filter((m) => !cache?.has("bench", m));
-      benchRun = startBenchData(benchMissing);
+      benchRun = startBenchData(benchMissing, undefined, workers);
       const plots = new Map<AtlasEntry, EntryPlots>();
       for (const molecule of batch) {
         const moleculeEntries = entriesOf.get(molecule.id)!;
@@ -195,7 +198,9 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
         writeFile(work, benchModelPath(b.moleculeId), JSON.stringify(b.model));
       }
       timings.physicsMs += lap();
-      sheetRun = startBenchSheets ? startBenchSheets({ molecules: batch, entries, outDir: work, build, calibration: batchBench.map((b) => b.marks) }) : null;
+      sheetRun = startBenchSheets
+        ? startBenchSheets({ molecules: batch, entries, outDir: work, build, calibration: batchBench.map((b) => b.marks), shared: workers })
+        : null;
 
       for (const temperatureK of standardTemperaturesK) {
         lineIndexes
@@ -282,5 +287,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     await Promise.all([sheetRun?.cancel(), benchRun?.cancel()]);
     rmSync(work, { recursive: true, force: true });
     throw error;
+  } finally {
+    await workers.close();
   }
 }

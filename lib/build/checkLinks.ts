@@ -17,6 +17,8 @@ function htmlFiles(dir: string): string[] {
   return out;
 }
 
+const maxCachedPages = 64;
+
 const decodeEntities = (s: string) =>
   s
     .replace(/&amp;/g, "&")
@@ -32,11 +34,14 @@ const decodeEntities = (s: string) =>
 export function checkInternalLinks(siteDir: string): { pages: number; links: number; broken: BrokenLink[] } {
   const root = resolve(siteDir);
   const pages = htmlFiles(root);
+  // The ids of recently targeted pages: links mostly point into their own page or a sibling, so
+  // a small cache serves nearly all of them, and the check's memory does not grow with the site.
   const idsOf = new Map<string, Set<string>>();
   const ids = (file: string) => {
     let set = idsOf.get(file);
     if (!set) {
       set = new Set([...readFileSync(file, "utf8").matchAll(/\sid="([^"]+)"/g)].map((m) => decodeEntities(m[1])));
+      if (idsOf.size >= maxCachedPages) idsOf.delete(idsOf.keys().next().value!);
       idsOf.set(file, set);
     }
     return set;

@@ -24,6 +24,36 @@ export interface JobPoolOptions<J, R> {
   runHere: (job: J) => R | Promise<R>;
   /** The error to report for a job that failed on a worker. */
   errorOf: (failure: JobFailure, job: J) => Error;
+  /** Worker threads kept across runs (a build's batches); without, the run starts and stops its own. */
+  shared?: SharedWorkers;
+}
+
+/**
+ * Worker threads that outlive one run: starting a worker (tsx, then the modules it needs) costs
+ * about a second of CPU, and a build in batches would otherwise pay it for every batch. One
+ * piscina pool per worker module, made at first use with the threads asked for then; `close`
+ * stops them all.
+ */
+export interface SharedWorkers {
+  poolFor(workerEntry: URL, threads: number): Piscina;
+  close(): Promise<void>;
+}
+
+export function sharedWorkers(): SharedWorkers {
+  const pools = new Map<string, Piscina>();
+  return {
+    poolFor(workerEntry, threads) {
+      const key = workerEntry.href;
+      let pool = pools.get(key);
+      if (!pool) pools.set(key, (pool = new Piscina({ filename: fileURLToPath(workerEntry), minThreads: threads, maxThreads: threads })));
+      return pool;
+    },
+    async close() {
+      const all = [...pools.values()];
+      pools.clear();
+      await Promise.all(all.map((pool) => pool.destroy()));
+    },
+  };
 }
 
 /**
@@ -40,12 +70,15 @@ export function startJobs<J, R>(options: JobPoolOptions<J, R>): JobRun<R> {
   const fail = (error: Error) => {
     failure ??= error;
   };
-  const pool =
-    options.workers > 0 && jobs.length > 0
-      ? new Piscina({ filename: fileURLToPath(options.workerEntry), minThreads: options.workers, maxThreads: options.workers })
-      : null;
+  const useWorkers = options.workers > 0 && jobs.length > 0;
+  const pool = !useWorkers
+    ? null
+    : options.shared
+      ? options.shared.poolFor(options.workerEntry, options.workers)
+      : new Piscina({ filename: fileURLToPath(options.workerEntry), minThreads: options.workers, maxThreads: options.workers });
   let stopped: Promise<void> | null = null;
-  const stop = () => (stopped ??= pool ? pool.destroy() : Promise.resolve());
+  // A shared pool stays up for the next run: stopping means handing out no more jobs and waiting for those out.
+  const stop = () => (stopped ??= pool && !options.shared ? pool.destroy() : Promise.resolve());
   const onWorker = async (workerPool: Piscina) => {
     for (let i = take(); i < jobs.length; i = take()) {
       try {
@@ -77,6 +110,7 @@ export function startJobs<J, R>(options: JobPoolOptions<J, R>): JobRun<R> {
     async cancel() {
       fail(new Error("cancelled"));
       await stop();
+      if (options.shared) await onWorkers;
     },
   };
 }

@@ -3,7 +3,7 @@ import { join } from "node:path";
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { SheetInputError, type SheetBuildIdentity } from "./sheetInput.ts";
-import { startJobs, type JobRun } from "../shared/jobPool.ts";
+import { startJobs, type JobRun, type SharedWorkers } from "../shared/jobPool.ts";
 import { sheetPath } from "../shared/sitePaths.ts";
 import { runBenchSheetJob, type BenchSheetJob } from "./benchSheetJob.ts";
 import { paperNames, type PaperName } from "./paper.ts";
@@ -21,6 +21,8 @@ export interface WriteBenchSheetsOptions {
   papers?: PaperName[];
   /** Threads to render on, the main thread included; default 2 (both cores) when there are enough sheets to pay for starting a worker. */
   threads?: number;
+  /** Worker threads kept across calls (a build's batches). */
+  shared?: SharedWorkers;
 }
 
 /**
@@ -57,6 +59,7 @@ export function startBenchSheets(options: WriteBenchSheetsOptions): BenchSheetRu
   const jobs = sheetJobs(options);
   const threads = options.threads ?? Math.min(2, availableParallelism(), 1 + Math.floor(jobs.length / sheetsPerExtraThread));
   return startJobs({
+    ...(options.shared ? { shared: options.shared } : {}),
     jobs,
     workers: threads >= 2 && jobs.length >= 2 ? Math.min(threads, jobs.length) - 1 : 0,
     workerEntry: new URL("./sheetWorkerEntry.mjs", import.meta.url),
