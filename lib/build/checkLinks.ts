@@ -1,4 +1,4 @@
-import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
+import { closeSync, existsSync, fstatSync, openSync, readdirSync, readSync, statSync } from "node:fs";
 import { dirname, join, relative, resolve } from "node:path";
 
 export interface BrokenLink {
@@ -18,6 +18,37 @@ function htmlFiles(dir: string): string[] {
 }
 
 const maxCachedPages = 64;
+
+/** One page's bytes, read into a buffer reused from page to page: a site of any size makes no garbage per page but its attribute values. */
+let pageBuffer = Buffer.alloc(1 << 20);
+function readPage(file: string): Buffer {
+  const fd = openSync(file, "r");
+  try {
+    const size = fstatSync(fd).size;
+    if (size > pageBuffer.length) pageBuffer = Buffer.alloc(Math.max(size, 2 * pageBuffer.length));
+    let read = 0;
+    while (read < size) read += readSync(fd, pageBuffer, read, size - read, read);
+    return pageBuffer.subarray(0, size);
+  } finally {
+    closeSync(fd);
+  }
+}
+
+const whitespace = new Set([0x20, 0x09, 0x0a, 0x0d, 0x0c]);
+
+/** The values of every `name="…"` attribute preceded by whitespace, as the regex /\sname="([^"]*)"/g would find them. */
+function attributeValues(page: Buffer, name: string): string[] {
+  const marker = Buffer.from(`${name}="`);
+  const out: string[] = [];
+  for (let at = page.indexOf(marker, 1); at >= 0; at = page.indexOf(marker, at + 1)) {
+    if (!whitespace.has(page[at - 1])) continue;
+    const start = at + marker.length;
+    const end = page.indexOf(0x22, start);
+    if (end < 0) break;
+    out.push(page.toString("utf8", start, end));
+  }
+  return out;
+}
 
 const decodeEntities = (s: string) =>
   s
@@ -40,7 +71,11 @@ export function checkInternalLinks(siteDir: string): { pages: number; links: num
   const ids = (file: string) => {
     let set = idsOf.get(file);
     if (!set) {
-      set = new Set([...readFileSync(file, "utf8").matchAll(/\sid="([^"]+)"/g)].map((m) => decodeEntities(m[1])));
+      set = new Set(
+        attributeValues(readPage(file), "id")
+          .filter((id) => id !== "")
+          .map(decodeEntities),
+      );
       if (idsOf.size >= maxCachedPages) idsOf.delete(idsOf.keys().next().value!);
       idsOf.set(file, set);
     }
@@ -49,10 +84,11 @@ export function checkInternalLinks(siteDir: string): { pages: number; links: num
   const broken: BrokenLink[] = [];
   let links = 0;
   for (const page of pages) {
-    const html = readFileSync(page, "utf8");
+    const html = readPage(page);
+    const values = [...attributeValues(html, "href"), ...attributeValues(html, "src")];
     const rel = relative(root, page);
-    for (const m of html.matchAll(/\s(?:href|src)="([^"]*)"/g)) {
-      const href = decodeEntities(m[1]);
+    for (const value of values) {
+      const href = decodeEntities(value);
       if (/^[a-z][a-z0-9+.-]*:/i.test(href) || href.startsWith("//")) continue;
       links++;
       const [pathPart, fragment] = href.split("#", 2);
