@@ -108,10 +108,15 @@ function resolutionOf(
  */
 const lastSpectrum = new WeakMap<CellModel, { key: string; spectrum: CellSpectrum }>();
 
-/** The gas as named inside a sentence. */
-function gasName(cell: CellModel): string {
-  return cell.moleculeName.charAt(0).toLowerCase() + cell.moleculeName.slice(1);
+/** A gas as named inside a sentence ("Hydrogen chloride" → "hydrogen chloride"). */
+export function gasNameInSentence(name: string): string {
+  return name.charAt(0).toLowerCase() + name.slice(1);
 }
+
+const gasName = (cell: CellModel) => gasNameInSentence(cell.moleculeName);
+
+/** The coarsest resolution a calibration accepts: beyond 16 cm⁻¹ no rotational line is resolved. */
+export const maxCalibrationResolutionCm = 16;
 
 /** Fraction of the points in [fromCm, toCm] more than `level` above the baseline (the 5th percentile there). */
 function saturatedFraction(measured: MeasuredAbsorbance, fromCm: number, toCm: number, level: number): number {

@@ -1,7 +1,7 @@
 // The calibrate page's form read into what `bandatlas calibrate` gets from its options: the same
 // defaults, the same limits and the same unit factors, so a page result can be reproduced on the
 // command line. Each bad field gives one sentence; nothing is computed until all are good.
-import { lengthUnitsCm, maxCellPressurePa, pressureUnitsPa, type MeasuredCalibrationSettings } from "../atlas/index.ts";
+import { lengthUnitsCm, maxCalibrationResolutionCm, maxCellPressurePa, pressureUnitsPa, type MeasuredCalibrationSettings } from "../atlas/index.ts";
 import { apodizations, correctionModels, type Apodization, type CellConditions, type CorrectionModel } from "../core/index.ts";
 import type { AbscissaUnit, OrdinateKind, SpectrumReadOptions } from "../spectrumFile/index.ts";
 
@@ -11,8 +11,6 @@ export interface CalibrateSettings {
   calibration: MeasuredCalibrationSettings;
 }
 
-/** The CLI's limit for --resolution: coarser than 16 cm⁻¹ no rotational line is resolved. */
-const maxResolutionCm = 16;
 const abscissas: readonly AbscissaUnit[] = ["cm-1", "um", "nm"];
 const ordinates: readonly OrdinateKind[] = ["absorbance", "transmittance", "percent-transmittance"];
 
@@ -46,8 +44,8 @@ export function readCalibrateSettings(form: FormData): { settings: CalibrateSett
           form,
           "resolutionCm",
           "Resolution",
-          (v) => v > 0 && v <= maxResolutionCm,
-          `give a resolution above 0 and at most ${maxResolutionCm} cm⁻¹, or leave it blank`,
+          (v) => v > 0 && v <= maxCalibrationResolutionCm,
+          `give a resolution above 0 and at most ${maxCalibrationResolutionCm} cm⁻¹, or leave it blank`,
           problems,
         );
   const apodization = choiceField<Apodization>(form, "apodization", "Apodization", apodizations, problems);

@@ -1,5 +1,5 @@
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
-import { calibrationResolutionsCm, defaultCellConditions, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
+import { calibrationResolutionsCm, defaultCellConditions, gasNameInSentence, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
 import { constantsOriginText, correctionModelWords, moleculeCaution, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
 import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
 import { apodizations, correctionModels, standardAtmospherePa } from "../core/index.ts";
@@ -164,7 +164,7 @@ export function calibratePageView(molecules: Molecule[], bench: Map<string, Benc
     name: view.moleculeName,
     formula: view.formula,
     modelPath: view.modelPath,
-    gasName: molecule.name.charAt(0).toLowerCase() + molecule.name.slice(1),
+    gasName: gasNameInSentence(molecule.name),
     caution: moleculeCaution(molecule),
     sources: molecule.sources.map((s) => s.citation),
   }));

@@ -1,7 +1,7 @@
 import { createHash } from "node:crypto";
 import { readFileSync, statSync } from "node:fs";
 import { basename } from "node:path";
-import { calibrateMeasuredSpectrum, cellModel, selectSpecies, type CellModel } from "../../atlas/index.ts";
+import { calibrateMeasuredSpectrum, cellModel, gasNameInSentence, maxCalibrationResolutionCm, selectSpecies, type CellModel } from "../../atlas/index.ts";
 import { apodizations, correctionModels, type Apodization, type CorrectionModel } from "../../core/index.ts";
 import { calibrationDocument, calibrationText, moleculeCaution, type CalibrationRun } from "../../format/index.ts";
 import { checkSpectrumFileSize, readSpectrumText, SpectrumFileError, type AbscissaUnit, type OrdinateKind } from "../../spectrumFile/index.ts";
@@ -105,8 +105,8 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
   const abscissaText = values.x as string | undefined;
   if (abscissaText !== undefined && !(abscissaText.toLowerCase() in abscissas)) throw new UsageError(`--x ${abscissaText}: use cm-1, um or nm`);
   const resolutionCm = values.resolution === undefined ? undefined : numberOption("resolution", values.resolution as string, 0, "cm-1");
-  if (resolutionCm !== undefined && !(resolutionCm > 0 && resolutionCm <= 16))
-    throw new UsageError(`--resolution ${values.resolution}: give a resolution above 0 and at most 16 cm⁻¹`);
+  if (resolutionCm !== undefined && !(resolutionCm > 0 && resolutionCm <= maxCalibrationResolutionCm))
+    throw new UsageError(`--resolution ${values.resolution}: give a resolution above 0 and at most ${maxCalibrationResolutionCm} cm⁻¹`);
   const reportPath = values.report as string | undefined;
   if (reportPath !== undefined && !/\.pdf$/i.test(reportPath)) throw new UsageError(`--report ${reportPath}: give a file name ending in .pdf`);
   const conditions = cellConditionsFromOptions(values);
@@ -133,7 +133,7 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
     );
     const run: CalibrationRun = {
       gas: molecule.id,
-      gasName: molecule.name.charAt(0).toLowerCase() + molecule.name.slice(1),
+      gasName: gasNameInSentence(molecule.name),
       fileName,
       sha256,
       spectrum,
