@@ -3,12 +3,17 @@ import { defaultCellConditions, lengthUnitsCm, maxCellPressurePa, pressureUnitsP
 import { numberOption, temperatureOption, type OptionSpec } from "./options.ts";
 import { UsageError } from "./usageError.ts";
 
-/** Options shared by `spectrum` and `calibration-lines`. */
-export const cellOptionSpec: OptionSpec = {
+/** The gas in the cell (cellConditionsFromOptions reads them): `spectrum`, `calibration-lines`, `calibrate`. */
+export const cellConditionOptionSpec: OptionSpec = {
   temperature: { type: "string" },
   pressure: { type: "string" },
   path: { type: "string" },
   "mole-fraction": { type: "string" },
+};
+
+/** Options shared by `spectrum` and `calibration-lines`. */
+export const cellOptionSpec: OptionSpec = {
+  ...cellConditionOptionSpec,
   resolution: { type: "string" },
   apodization: { type: "string" },
   instrument: { type: "string" },
@@ -18,10 +23,12 @@ export const cellOptionSpec: OptionSpec = {
   molecules: { type: "string" },
 };
 
-export const cellOptionsHelp = `  --temperature <K>       gas temperature (default 296 K)
+export const cellConditionsHelp = `  --temperature <K>       gas temperature (default 296 K)
   --pressure <p unit>     total pressure: Pa, kPa, hPa, mbar, Torr or atm, e.g. "20 Torr" (default 20 Torr)
   --path <l unit>         cell path length: m, cm or mm, e.g. "10 cm" (default 10 cm)
-  --mole-fraction <x>     fraction of the gas in the cell, the rest air (default 1)
+  --mole-fraction <x>     fraction of the gas in the cell, the rest air (default 1)`;
+
+export const cellOptionsHelp = `${cellConditionsHelp}
   --instrument ft|grating Fourier-transform (default) or grating with a Gaussian slit
   --resolution <cm⁻¹>     FT: maximum optical path difference is 1/resolution;
                           grating: slit-function FWHM
@@ -103,10 +110,15 @@ export function instrumentFromOptions(values: Record<string, string | boolean | 
     return { kind: "grating", resolutionCm };
   }
   if (kind !== "ft") throw new UsageError(`--instrument ${kind}: use ft or grating`);
+  return { kind: "fourier-transform", resolutionCm, apodization: apodizationOption(values) };
+}
+
+/** --apodization, triangular when not given. */
+export function apodizationOption(values: Record<string, string | boolean | undefined>): Apodization {
   const apodization = ((values.apodization as string | undefined) ?? "triangular").toLowerCase();
   if (!(apodizations as readonly string[]).includes(apodization))
     throw new UsageError(`--apodization ${values.apodization}: use one of ${apodizations.join(", ")}`);
-  return { kind: "fourier-transform", resolutionCm, apodization: apodization as Apodization };
+  return apodization as Apodization;
 }
 
 export function rangeFromOptions(values: Record<string, string | boolean | undefined>): { fromCm?: number; toCm?: number } {

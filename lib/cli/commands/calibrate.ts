@@ -2,10 +2,10 @@ import { createHash } from "node:crypto";
 import { readFileSync, statSync } from "node:fs";
 import { basename } from "node:path";
 import { calibrateMeasuredSpectrum, cellModel, gasNameInSentence, maxCalibrationResolutionCm, selectSpecies, type CellModel } from "../../atlas/index.ts";
-import { apodizations, correctionModels, type Apodization, type CorrectionModel } from "../../core/index.ts";
+import { apodizations, correctionModels, type CorrectionModel } from "../../core/index.ts";
 import { calibrationDocument, calibrationText, moleculeCaution, type CalibrationRun } from "../../format/index.ts";
 import { checkSpectrumFileSize, readSpectrumText, SpectrumFileError, type AbscissaUnit, type OrdinateKind } from "../../spectrumFile/index.ts";
-import { cellConditionsFromOptions, joinUnitWords } from "../cellOptions.ts";
+import { apodizationOption, cellConditionOptionSpec, cellConditionsFromOptions, cellConditionsHelp, joinUnitWords } from "../cellOptions.ts";
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine } from "../options.ts";
 import { UsageError } from "../usageError.ts";
@@ -27,10 +27,7 @@ least squares. Refuses when the data do not support a correction.
                             offset     true = measured + c
                             linear     true = measured × (1 + k) + c
                             quadratic  true = measured × (1 + k) + c + q·(measured − centre)²
-  --temperature <K>       gas temperature (default 296 K)
-  --pressure <p unit>     total pressure in the cell, e.g. "20 Torr" (default 20 Torr)
-  --path <l unit>         cell path length, e.g. "10 cm" (default 10 cm)
-  --mole-fraction <x>     fraction of the gas in the cell, the rest air (default 1)
+${cellConditionsHelp}
   --resolution <cm⁻¹>     FT resolution (1/max. OPD); default: the file's, else estimated from the peak widths
   --apodization <name>    ${apodizations.join(", ")} (default triangular)
   --x cm-1|um|nm          unit of the file's x values when it does not say
@@ -76,10 +73,7 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
       gas: { type: "string" },
       species: { type: "string" },
       model: { type: "string" },
-      temperature: { type: "string" },
-      pressure: { type: "string" },
-      path: { type: "string" },
-      "mole-fraction": { type: "string" },
+      ...cellConditionOptionSpec,
       resolution: { type: "string" },
       apodization: { type: "string" },
       x: { type: "string" },
@@ -96,9 +90,7 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
   const format = formatOption(values.format as string | undefined, ["table", "json"]) as "table" | "json";
   const model = ((values.model as string | undefined) ?? "scale").toLowerCase();
   if (!(correctionModels as readonly string[]).includes(model)) throw new UsageError(`--model ${values.model}: use one of ${correctionModels.join(", ")}`);
-  const apodization = ((values.apodization as string | undefined) ?? "triangular").toLowerCase();
-  if (!(apodizations as readonly string[]).includes(apodization))
-    throw new UsageError(`--apodization ${values.apodization}: use one of ${apodizations.join(", ")}`);
+  const apodization = apodizationOption(values);
   const ordinateText = values.y as string | undefined;
   if (ordinateText !== undefined && !(ordinateText.toLowerCase() in ordinates))
     throw new UsageError(`--y ${ordinateText}: use transmittance, percent or absorbance`);
@@ -129,7 +121,7 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
     const calibration = calibrateMeasuredSpectrum(
       cell,
       { wavenumberCm: spectrum.wavenumberCm, absorbance: spectrum.absorbance, resolutionCm: spectrum.resolutionCm },
-      { conditions, apodization: apodization as Apodization, model: model as CorrectionModel, ...(resolutionCm !== undefined ? { resolutionCm } : {}) },
+      { conditions, apodization, model: model as CorrectionModel, ...(resolutionCm !== undefined ? { resolutionCm } : {}) },
     );
     const run: CalibrationRun = {
       gas: molecule.id,
