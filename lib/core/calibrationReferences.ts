@@ -1,7 +1,7 @@
 import type { AbsorbingLine } from "./absorbingLines.ts";
 import { apparentPeak, nearestNeighbourCm } from "./calibrationLines.ts";
 import { observedSignal, type CellSpectrum } from "./cellTransmittance.ts";
-import type { Line, WavenumberCm } from "./types.ts";
+import type { WavenumberCm } from "./types.ts";
 
 /** Which predicted lines may serve as references when a measured spectrum is calibrated. */
 export interface ReferenceCriteria {
@@ -29,14 +29,8 @@ export const defaultReferenceCriteria: ReferenceCriteria = {
   peakShiftUncertaintyFraction: 0.25,
 };
 
-export interface CalibrationReference {
-  species: string;
-  band: string;
-  label: string;
-  /** Zero-pressure line position, cm⁻¹, and its standard uncertainty. */
-  wavenumber: WavenumberCm;
-  wavenumberUncertainty: WavenumberCm;
-  positionStatus: Line["positionStatus"];
+/** A line of the gas (zero-pressure position, its ± and validation status) as a reference for a measured peak. */
+export interface CalibrationReference extends Pick<AbsorbingLine, "species" | "band" | "label" | "wavenumber" | "wavenumberUncertainty" | "positionStatus"> {
   relativeToStrongest: number;
   /** Where the instrument should show the peak (the apparent peak), cm⁻¹; null when it shows none of its own. */
   referenceCm: WavenumberCm | null;
