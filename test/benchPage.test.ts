@@ -2,19 +2,16 @@
 // lib/atlas + lib/core, against the CLI's numbers (bandatlas spectrum / calibration-lines,
 // in-process). Also: the cell model JSON gives the CLI's lines, the species pages carry the
 // calibration marks. Chromium must be installed (scripts/ensure-test-tools.sh); no skipping.
-import { mkdtempSync, readFileSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import type { Browser, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { calibrationMarks, cellLineSet, cellLinesOfModel, cellModel, defaultCellConditions } from "../lib/atlas/index.ts";
-import { buildSite } from "../lib/build/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { runCli } from "../lib/cli/main.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
 import { peakShiftDigits } from "../lib/format/index.ts";
-import { launchChromium, recordPageProblems } from "./helpers/chromium.ts";
-import { serveFolder } from "./helpers/staticServer.ts";
+import { openBuiltSite, type BuiltSiteSession } from "./helpers/chromium.ts";
 
 async function cli(...args: string[]): Promise<string> {
   const { stdout, stderr, exitCode } = await runCli(args);
@@ -39,27 +36,20 @@ describe("the cell model the build writes for the bench page", () => {
   });
 });
 
+let session: BuiltSiteSession;
+let base: string;
 let work: string;
 let site: string;
-let server: { base: string; close: () => Promise<void> };
-let browser: Browser;
 let page: Page;
 const problems: string[] = [];
 
 beforeAll(async () => {
-  work = mkdtempSync(join(tmpdir(), "bandatlas-bench-"));
-  site = join(work, "site");
-  await buildSite({ moleculesDir: shippedMoleculesDir, outDir: site, sheets: false });
-  server = await serveFolder(site);
-  browser = await launchChromium();
-  page = await browser.newPage();
-  recordPageProblems(page, problems);
+  session = await openBuiltSite("bench", problems);
+  ({ work, site, page, base } = session);
 }, 120_000);
 
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-  if (work) rmSync(work, { recursive: true, force: true });
+  await session?.close();
 });
 
 const ready = (resolution: string) =>
@@ -74,7 +64,7 @@ const ready = (resolution: string) =>
 
 describe("the CO bench page in Chromium", () => {
   it("shows the hazard caution, the defaults of a 10 cm cell, and a plot with the calibration-grade list", async () => {
-    await page.goto(server.base + "molecules/co/bench/index.html?fromCm=2100&toCm=2200");
+    await page.goto(base + "molecules/co/bench/index.html?fromCm=2100&toCm=2200");
     await ready("0.5");
     await expect(page.locator(".caution h2").textContent()).resolves.toContain("Carbon monoxide");
     await expect(page.locator("#temperatureK").inputValue()).resolves.toBe("296");
@@ -143,7 +133,7 @@ describe("the CO bench page in Chromium", () => {
   });
 
   it("refuses an impossible setting with a plain message", async () => {
-    await page.goto(server.base + "molecules/co/bench/index.html?moleFraction=1.5");
+    await page.goto(base + "molecules/co/bench/index.html?moleFraction=1.5");
     await page.waitForFunction(() => document.getElementById("bench")!.dataset.state === "error");
     await expect(page.locator("#bench-status").textContent()).resolves.toContain("Mole fraction “1.5”: must be above 0 and at most 1.");
   });
@@ -152,7 +142,7 @@ describe("the CO bench page in Chromium", () => {
 describe("a molecule without cited intensities", () => {
   it("says no transmittance can be given and shows the relative absorbance, labelled", async () => {
     // Hydrogen iodide: no band intensity could be cited for it (molecules/SOURCES-NOTES.md).
-    await page.goto(server.base + "molecules/hi/bench/index.html");
+    await page.goto(base + "molecules/hi/bench/index.html");
     await ready("0.5");
     await expect(page.locator("#bench-relative").textContent()).resolves.toContain("No transmittance for Hydrogen iodide.");
     await expect(page.locator(".spectrum-plot .axis-label").nth(1).textContent()).resolves.toBe("relative absorbance (peak = 1)");

@@ -1,16 +1,12 @@
 // The built site in a real Chromium: search by formula, CAS number and wavenumber, the plot, the
 // CSV download. Chromium must be installed (scripts/ensure-test-tools.sh); without it this test
 // fails, it does not skip.
-import { mkdtempSync, readFileSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import type { Browser, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildSite } from "../lib/build/index.ts";
-import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { runCli } from "../lib/cli/main.ts";
-import { launchChromium, recordPageProblems } from "./helpers/chromium.ts";
-import { serveFolder } from "./helpers/staticServer.ts";
+import { openBuiltSite, type BuiltSiteSession } from "./helpers/chromium.ts";
 
 // The command line's own entry (what bin/bandatlas.js runs), in-process to keep the test fast.
 async function cli(...args: string[]): Promise<string> {
@@ -19,29 +15,20 @@ async function cli(...args: string[]): Promise<string> {
   return stdout;
 }
 
+let session: BuiltSiteSession;
 let work: string;
 let site: string;
-let server: { base: string; close: () => Promise<void> };
 let base: string;
-let browser: Browser;
 let page: Page;
 const problems: string[] = [];
 
 beforeAll(async () => {
-  work = mkdtempSync(join(tmpdir(), "bandatlas-browser-"));
-  site = join(work, "site");
-  await buildSite({ moleculesDir: shippedMoleculesDir, outDir: site, sheets: false });
-  server = await serveFolder(site);
-  base = server.base;
-  browser = await launchChromium();
-  page = await (await browser.newContext({ acceptDownloads: true })).newPage();
-  recordPageProblems(page, problems);
-});
+  session = await openBuiltSite("browser", problems, { acceptDownloads: true });
+  ({ work, site, base, page } = session);
+}, 120_000);
 
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-  if (work) rmSync(work, { recursive: true, force: true });
+  await session?.close();
 });
 
 describe("the site in Chromium", () => {

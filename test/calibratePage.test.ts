@@ -3,16 +3,14 @@
 // and lib/format, and must give what `bandatlas calibrate` gives (in-process): the same correction
 // box line, the same JSON and text downloads byte for byte. A file that is no spectrum and a wrong
 // gas show their one sentence in the alert area. Chromium must be installed; no skipping.
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import type { Browser, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { buildSite, repoDir } from "../lib/build/index.ts";
-import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
+import { repoDir } from "../lib/build/index.ts";
 import { runCli } from "../lib/cli/main.ts";
-import { launchChromium, recordPageProblems } from "./helpers/chromium.ts";
-import { serveFolder } from "./helpers/staticServer.ts";
+import { openBuiltSite, type BuiltSiteSession } from "./helpers/chromium.ts";
 
 const spectrumFile = join(repoDir, "test/fixtures/spectra/hcl-dcl-hunter/HCl_spectrum.csv");
 const moleculeFile = join(repoDir, "molecules/hcl.yaml");
@@ -30,25 +28,19 @@ async function cliRefusal(...args: string[]): Promise<string> {
   return stderr.replace(/^bandatlas calibrate: /, "").trim();
 }
 
+let session: BuiltSiteSession;
+let base: string;
 let work: string;
-let server: { base: string; close: () => Promise<void> };
-let browser: Browser;
 let page: Page;
 const problems: string[] = [];
 
 beforeAll(async () => {
-  work = mkdtempSync(join(tmpdir(), "bandatlas-calibrate-"));
-  await buildSite({ moleculesDir: shippedMoleculesDir, outDir: join(work, "site"), sheets: false });
-  server = await serveFolder(join(work, "site"));
-  browser = await launchChromium();
-  page = await (await browser.newContext({ acceptDownloads: true, viewport: { width: 1200, height: 900 } })).newPage();
-  recordPageProblems(page, problems);
+  session = await openBuiltSite("calibrate", problems, { acceptDownloads: true, viewport: { width: 1200, height: 900 } });
+  ({ work, page, base } = session);
 }, 120_000);
 
 afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-  if (work) rmSync(work, { recursive: true, force: true });
+  await session?.close();
 });
 
 /** Runs an action that recalculates and waits until that calculation has ended (ready or error). */
@@ -73,13 +65,13 @@ async function download(selector: string): Promise<string> {
 
 describe("the calibrate page in Chromium", () => {
   it("is linked from the navigation and the home page, and shows the general caution before a gas is chosen", async () => {
-    await page.goto(server.base);
+    await page.goto(base);
     await page.click("nav >> text=Calibrate a spectrum");
     await page.waitForURL(/calibrate\//);
     await expect(page.locator("h1").textContent()).resolves.toContain("wavenumber scale");
-    await page.goto(server.base);
+    await page.goto(base);
     expect(await page.locator("main a[href='calibrate/index.html']").count()).toBe(1);
-    await page.goto(server.base + "calibrate/");
+    await page.goto(base + "calibrate/");
     await expect(page.locator("#calibrate-cautions aside:visible").count()).resolves.toBe(1);
     await expect(page.locator("#calibrate-cautions aside:visible").textContent()).resolves.toContain("the atlas does not certify an instrument");
     for (const id of ["gas", "temperatureK", "pressure", "path", "moleFraction", "resolutionCm", "apodization", "model", "calibrate-file", "x", "y"])
