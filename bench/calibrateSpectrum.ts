@@ -1,3 +1,4 @@
+import { timedRuns } from "./timedRuns.ts";
 import { calibrateMeasuredSpectrum, cellModel, defaultCellConditions } from "../lib/atlas/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
@@ -44,18 +45,9 @@ export function benchCalibrateSpectrum(): string[] {
       { conditions: defaultCellConditions, apodization: "triangular", model: "scale" },
     );
   };
-  for (let i = 0; i < 2; i++) run();
-  const times: number[] = [];
-  let last = run();
-  for (let i = 0; i < 7; i++) {
-    const t0 = performance.now();
-    last = run();
-    times.push(performance.now() - t0);
-  }
-  times.sort((a, b) => a - b);
-  const median = times[Math.floor(times.length / 2)];
+  const { last, summary } = timedRuns(run, 2, 7);
   const k = last.result.correction;
   return [
-    `${median.toFixed(0)} ms median (min ${times[0].toFixed(0)}, max ${times[times.length - 1].toFixed(0)}) for ${calibrateBenchPoints} points, ${last.result.usedCount} lines used, k = ${(k.scale * 1e6).toFixed(2)} ± ${(k.scaleUncertainty * 1e6).toFixed(2)} ppm (true +80); target ≤ 300 ms`,
+    `${summary} for ${calibrateBenchPoints} points, ${last.result.usedCount} lines used, k = ${(k.scale * 1e6).toFixed(2)} ± ${(k.scaleUncertainty * 1e6).toFixed(2)} ppm (true +80); target ≤ 300 ms`,
   ];
 }

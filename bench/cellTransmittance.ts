@@ -1,3 +1,4 @@
+import { timedRuns } from "./timedRuns.ts";
 import { cellLineSet, defaultCellConditions, moleculeCellSpectrum } from "../lib/atlas/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
@@ -18,17 +19,6 @@ export function benchCellTransmittance(): string[] {
     stepCm: 0.002,
   };
   const run = () => moleculeCellSpectrum(co, settings, cellLineSet(co, settings.conditions));
-  for (let i = 0; i < 3; i++) run();
-  const times: number[] = [];
-  let last = run();
-  for (let i = 0; i < 9; i++) {
-    const t0 = performance.now();
-    last = run();
-    times.push(performance.now() - t0);
-  }
-  times.sort((a, b) => a - b);
-  const median = times[Math.floor(times.length / 2)];
-  return [
-    `${median.toFixed(0)} ms median (min ${times[0].toFixed(0)}, max ${times[times.length - 1].toFixed(0)}) for ${last.spectrum.grid.count} grid points, ${last.set.lines.length} lines; target ≤ 200 ms`,
-  ];
+  const { last, summary } = timedRuns(run, 3, 9);
+  return [`${summary} for ${last.spectrum.grid.count} grid points, ${last.set.lines.length} lines; target ≤ 200 ms`];
 }
