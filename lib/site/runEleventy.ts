@@ -1,5 +1,5 @@
 import { mkdirSync, readdirSync, writeFileSync } from "node:fs";
-import { dirname, join, resolve, sep } from "node:path";
+import { dirname, join, relative, resolve, sep } from "node:path";
 import { fileURLToPath } from "node:url";
 import Eleventy from "@11ty/eleventy";
 import eleventyConfig from "../../eleventy.config.ts";
@@ -47,7 +47,8 @@ async function runOnce(outDir: string, data: PageData, ignored: readonly string[
     quietMode: true,
     config(config: any) {
       eleventyConfig(config);
-      for (const file of ignored) config.ignores.add(join(contentDir, file));
+      // Eleventy matches ignores as paths relative to the working directory (an absolute path never matches).
+      for (const file of ignored) config.ignores.add(relative(process.cwd(), join(contentDir, file)));
       config.addGlobalData("atlas", data);
     },
   });
