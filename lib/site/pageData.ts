@@ -259,10 +259,12 @@ export function siteData(input: SiteDataInput, batch: MoleculeBatch | null) {
       views: (from: number, to: number) =>
         entries.slice(from, to).map((e) => speciesPageView(byId.get(e.moleculeId)!, e, batch!.plots.get(e)!, input.sheetsAvailable, entries, input.bench?.get(e.moleculeId))),
     },
-    calibratePage: calibratePageView(input.molecules, input.bench),
+    calibratePath: calibratePagePath(),
+    // The pages about the whole atlas are rendered once, after the batches: their tables are made for that run only.
+    calibratePage: batch ? null : calibratePageView(input.molecules, input.bench),
     benchPages: molecules.filter((m) => input.bench?.has(m.id)).map((m) => benchPageView(m, input.bench!.get(m.id)!)),
-    accuracy: input.accuracy,
-    nearInfrared: { rows: sortedNearInfraredRows(input.nearInfraredRows), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },
+    accuracy: batch ? [] : input.accuracy,
+    nearInfrared: { rows: batch ? [] : sortedNearInfraredRows(input.nearInfraredRows), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },
     temperatures: standardTemperaturesK.map((t) => ({ value: t, token: temperatureToken(t), isDefault: t === defaultTemperatureK })),
     find: { windowCm: defaultFindWindowCm, minRelative: defaultFindMinRelative, temperatureK: defaultTemperatureK },
     search: { nameIndex: input.nameIndexPath, lineIndexes: input.lineIndexPaths.map((x) => ({ token: temperatureToken(x.temperatureK), path: x.path })) },
