@@ -5,7 +5,7 @@ import { cpSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writ
 import { tmpdir } from "node:os";
 import { join, relative } from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
-import { BuildCache, buildSite } from "../lib/build/index.ts";
+import { BuildCache, buildSite, keptPagesKind } from "../lib/build/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 
 const work = mkdtempSync(join(tmpdir(), "bandatlas-cache-test-"));
@@ -51,5 +51,13 @@ describe("rebuilds with a build cache", () => {
     expect([...served.keys()].sort()).toEqual([...cold.keys()].sort());
     for (const [path, bytes] of cold) expect(Buffer.compare(served.get(path)!, bytes), path).toBe(0);
     expect(served.get("molecules/hf/index.html")!.toString()).toContain("(edited)");
+
+    // A changed template (serve forgets the kept pages) renders both molecules' pages again, and
+    // nothing else: one result per molecule computed, the same bytes written.
+    cache.forget(keptPagesKind);
+    await buildSite({ moleculesDir: molecules, outDir: join(work, "served"), sheets: false, build, cache });
+    expect(cache.lastBuild.computed).toBe(2);
+    const again = files(join(work, "served"));
+    for (const [path, bytes] of cold) expect(Buffer.compare(again.get(path)!, bytes), path).toBe(0);
   }, 120_000);
 });

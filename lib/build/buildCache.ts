@@ -39,6 +39,28 @@ export class BuildCache {
     return value;
   }
 
+  /**
+   * A result that depends on no molecule file and cannot change within the session (the browser
+   * bundles: their sources load with the code). Not counted in lastBuild.
+   */
+  forSession<T>(kind: string, compute: () => T): T {
+    const key = `session\u0000${kind}`;
+    const hit = this.values.get(key);
+    if (hit) {
+      hit.build = this.build;
+      return hit.value as T;
+    }
+    const value = compute();
+    this.values.set(key, { value, build: this.build });
+    if (value instanceof Promise) value.catch(() => this.values.delete(key));
+    return value;
+  }
+
+  /** Drops every kept result whose kind starts with `kindPrefix` (rendered pages, when a template changed). */
+  forget(kindPrefix: string): void {
+    for (const key of this.values.keys()) if (key.startsWith(kindPrefix)) this.values.delete(key);
+  }
+
   /** Forgets what the build just finished did not use, and starts counting the next one. */
   endBuild(): void {
     for (const [key, entry] of this.values) if (entry.build !== this.build) this.values.delete(key);

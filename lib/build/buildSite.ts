@@ -14,7 +14,7 @@ import { LineIndexBuilder, lineIndexBytesPerLine } from "../shared/lineIndexCode
 import { benchModelPath, downloadPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
 import { startBenchData, type BenchDataRun } from "./benchDataPool.ts";
 import { sharedWorkers } from "../shared/jobPool.ts";
-import { bundleBenchScript, bundleBrowserScript, bundleCalibrateScript } from "./bundleBrowser.ts";
+import { browserScripts, bundleBrowserScript } from "./bundleBrowser.ts";
 import type { BuildCache } from "./buildCache.ts";
 import { buildIdentity, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { checkInternalLinks } from "./checkLinks.ts";
@@ -89,10 +89,42 @@ async function loadSheetWriter(): Promise<StartBenchSheets> {
   return (await import("../sheet/index.ts")).startBenchSheets;
 }
 
-function writeFile(root: string, path: string, text: string) {
+function writeFile(root: string, path: string, text: string | Uint8Array) {
   const full = join(root, path);
   mkdirSync(dirname(full), { recursive: true });
   writeFileSync(full, text);
+}
+
+/** The BuildCache kind of a molecule's rendered pages; `bandatlas serve` forgets it when a template changes. */
+export const keptPagesKind = "pages";
+
+/**
+ * The pages of a batch's molecules while serving: each molecule's rendered pages are kept with its
+ * content, and only the molecules without kept pages are rendered (in one Eleventy run). Every
+ * page of a molecules run lies under its molecule's folder, molecules/<id>/.
+ */
+async function renderKeptPages(
+  cache: BuildCache,
+  kind: string,
+  batch: Molecule[],
+  entries: AtlasEntry[],
+  render: (stale: Molecule[], staleEntries: AtlasEntry[], write: (path: string, content: string) => void) => Promise<number>,
+): Promise<Array<[string, string]>> {
+  const stale = batch.filter((m) => !cache.has(kind, m));
+  const rendered = new Map<string, Array<[string, string]>>(stale.map((m) => [m.id, []]));
+  if (stale.length) {
+    const ids = new Set(stale.map((m) => m.id));
+    await render(
+      stale,
+      entries.filter((e) => ids.has(e.moleculeId)),
+      (path, content) => {
+        const owner = rendered.get(/^molecules\/([^/]+)\//.exec(path)?.[1] ?? "");
+        if (!owner) throw new Error(`a molecule page outside its molecule's folder: ${path}`);
+        owner.push([path, content]);
+      },
+    );
+  }
+  return batch.flatMap((m) => cache.forMolecule(kind, m, () => rendered.get(m.id)!));
 }
 
 /**
@@ -119,6 +151,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   const perMolecule = <T>(kind: string, molecule: Molecule, compute: () => T): T => (cache ? cache.forMolecule(kind, molecule, compute) : compute());
   const build = options.build ?? buildIdentity(repoDir);
   const startBenchSheets = options.sheets === false ? null : await loadSheetWriter();
+  // A molecule's pages also carry the build identity (footers) and whether sheets are linked.
+  const pagesKind = `${keptPagesKind} ${JSON.stringify({ build, sheets: startBenchSheets !== null })}`;
 
   const outDir = resolve(options.outDir);
   mkdirSync(dirname(outDir), { recursive: true });
@@ -225,7 +259,14 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       }
       timings.filesMs += lap();
 
-      pageCount += await runEleventy(work, siteData(siteInput(), { molecules: batch, entries, plots }), "molecules");
+      pageCount += cache
+        ? await renderKeptPages(cache, pagesKind, batch, entries, (stale, staleEntries, write) =>
+            runEleventy(work, siteData(siteInput(), { molecules: stale, entries: staleEntries, plots }), "molecules", { write }),
+          ).then((pages) => {
+            for (const [path, text] of pages) writeFile(work, path, text);
+            return pages.length;
+          })
+        : await runEleventy(work, siteData(siteInput(), { molecules: batch, entries, plots }), "molecules");
       timings.pagesMs += lap();
       if (sheetRun) {
         sheets.push(...(await sheetRun.finish()));
@@ -250,9 +291,10 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     log(
       `search index: ${lineIndexReport.map((r) => `${r.lines} lines at ${r.temperatureK} K`).join(", ")} (${lineIndexBytesPerLine} bytes a line before base64)`,
     );
-    await bundleBrowserScript(join(work, "assets/search.js"));
-    await bundleBenchScript(join(work, "assets/bench.js"));
-    await bundleCalibrateScript(join(work, "assets/calibrate.js"));
+    for (const script of browserScripts) {
+      const bytes = await (cache ? cache.forSession(`bundle ${script.path}`, () => bundleBrowserScript(script.entry)) : bundleBrowserScript(script.entry));
+      writeFile(work, script.path, bytes);
+    }
     for (const asset of ["site.css", "favicon.svg"]) cpSync(join(contentDir, "assets", asset), join(work, "assets", asset));
     timings.filesMs += lap();
 

@@ -1,29 +1,24 @@
 import { fileURLToPath } from "node:url";
 import { build } from "esbuild";
 
-const entry = fileURLToPath(new URL("../browser/siteSearch.ts", import.meta.url));
-const benchEntry = fileURLToPath(new URL("../browser/benchPage.ts", import.meta.url));
-const calibrateEntry = fileURLToPath(new URL("../browser/calibratePage.ts", import.meta.url));
+const source = (file: string) => fileURLToPath(new URL(`../browser/${file}`, import.meta.url));
 
-/** The site's search script, bundled from lib/browser (which imports lib/core's nearbyLines). */
-export async function bundleBrowserScript(outFile: string): Promise<void> {
-  await bundle(entry, outFile);
-}
+/**
+ * The site's scripts, each bundled from one lib/browser entry with what it imports:
+ * search.js (lib/core's nearbyLines), bench.js (lib/atlas's cellLinesOfModel and lib/core's cell
+ * spectrum), calibrate.js (lib/spectrumFile's readers and lib/atlas's calibrateMeasuredSpectrum).
+ */
+export const browserScripts: ReadonlyArray<{ path: string; entry: string }> = [
+  { path: "assets/search.js", entry: source("siteSearch.ts") },
+  { path: "assets/bench.js", entry: source("benchPage.ts") },
+  { path: "assets/calibrate.js", entry: source("calibratePage.ts") },
+];
 
-/** The bench pages' script: lib/atlas's cellLinesOfModel and lib/core's cell spectrum, in the browser. */
-export async function bundleBenchScript(outFile: string): Promise<void> {
-  await bundle(benchEntry, outFile);
-}
-
-/** The calibrate page's script: lib/spectrumFile's readers and lib/atlas's calibrateMeasuredSpectrum, in the browser. */
-export async function bundleCalibrateScript(outFile: string): Promise<void> {
-  await bundle(calibrateEntry, outFile);
-}
-
-async function bundle(entryPoint: string, outFile: string): Promise<void> {
-  await build({
+/** One script's bundle, minified, as bytes to write. */
+export async function bundleBrowserScript(entryPoint: string): Promise<Uint8Array> {
+  const result = await build({
     entryPoints: [entryPoint],
-    outfile: outFile,
+    write: false,
     bundle: true,
     format: "iife",
     target: ["es2020"],
@@ -33,4 +28,5 @@ async function bundle(entryPoint: string, outFile: string): Promise<void> {
     // No source paths or timestamps end up in the bundle, so it is byte-identical between builds.
     sourcemap: false,
   });
+  return result.outputFiles[0].contents;
 }

@@ -26,23 +26,38 @@ export const speciesPagesPerRun = 250;
  * "molecules" renders the batch's molecule, species and bench pages (the species pages in parts
  * of speciesPagesPerRun), "site" every other page.
  */
-export async function runEleventy(outDir: string, data: SiteData, pages: "molecules" | "site", options: { speciesPagesPerRun?: number } = {}): Promise<number> {
+export async function runEleventy(outDir: string, data: SiteData, pages: "molecules" | "site", options: RunOptions = {}): Promise<number> {
   const perRun = Math.max(1, options.speciesPagesPerRun ?? speciesPagesPerRun);
+  const write = options.write ?? writePage(outDir);
   const { speciesPageViews, ...rest } = data;
   const templates = readdirSync(contentDir).filter((f) => /\.(njk|md)$/.test(f));
-  if (pages === "site") return runOnce(outDir, { ...rest, speciesPages: [] }, moleculeTemplates);
+  if (pages === "site") return runOnce(outDir, { ...rest, speciesPages: [] }, moleculeTemplates, write);
   const notMolecule = templates.filter((f) => !moleculeTemplates.includes(f));
   // The first run renders the molecule and bench pages with the first part of the species pages;
   // later runs render the species template alone with the next parts.
-  let count = await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(0, perRun) }, notMolecule);
+  let count = await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(0, perRun) }, notMolecule, write);
   const speciesOnly = templates.filter((f) => f !== speciesTemplate);
   for (let start = perRun; start < speciesPageViews.count; start += perRun) {
-    count += await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(start, start + perRun) }, speciesOnly);
+    count += await runOnce(outDir, { ...rest, speciesPages: speciesPageViews.views(start, start + perRun) }, speciesOnly, write);
   }
   return count;
 }
 
-async function runOnce(outDir: string, data: PageData, ignored: readonly string[]): Promise<number> {
+export interface RunOptions {
+  speciesPagesPerRun?: number;
+  /** Where each rendered page goes, by its path relative to outDir (default: written there). */
+  write?: (path: string, content: string) => void;
+}
+
+function writePage(outDir: string) {
+  return (path: string, content: string) => {
+    const target = join(outDir, path);
+    mkdirSync(dirname(target), { recursive: true });
+    writeFileSync(target, content);
+  };
+}
+
+async function runOnce(outDir: string, data: PageData, ignored: readonly string[], write: (path: string, content: string) => void): Promise<number> {
   const eleventy = new Eleventy(contentDir, outDir, {
     quietMode: true,
     config(config: any) {
@@ -53,15 +68,14 @@ async function runOnce(outDir: string, data: PageData, ignored: readonly string[
     },
   });
   // toJSON renders without writing (and without Eleventy's forced console summary); the pages
-  // are written here, each inside outDir.
+  // are handed on here, each checked to lie inside outDir.
   const pages = (await eleventy.toJSON()) as Array<{ url: string | false; outputPath: string | false; content: string }>;
   const root = resolve(outDir);
   for (const page of pages) {
     if (page.outputPath === false) continue;
     const target = resolve(page.outputPath);
     if (!target.startsWith(root + sep)) throw new Error(`Eleventy page ${String(page.url)} would be written outside the site: ${target}`);
-    mkdirSync(dirname(target), { recursive: true });
-    writeFileSync(target, page.content);
+    write(relative(root, target).split(sep).join("/"), page.content);
   }
   return pages.length;
 }

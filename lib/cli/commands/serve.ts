@@ -1,7 +1,7 @@
 import { watch, type FSWatcher } from "node:fs";
 import { join } from "node:path";
 import EleventyDevServer from "@11ty/eleventy-dev-server";
-import { BuildCache, buildSite, repoDir } from "../../build/index.ts";
+import { BuildCache, buildSite, keptPagesKind, repoDir } from "../../build/index.ts";
 import { formatProblem, MoleculeFileError } from "../../molecules/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
 import { numberOption, parseCommandLine } from "../options.ts";
@@ -21,6 +21,12 @@ function describeFailure(error: unknown): string {
   if (error instanceof MoleculeFileError) return error.problems.map(formatProblem).join("\n");
   return error instanceof Error ? error.message : String(error);
 }
+
+/**
+ * How long a watched file must stay quiet before the rebuild starts: editors save in a few
+ * events (truncate, write, rename) within milliseconds, and one rebuild should follow them all.
+ */
+const saveSettleMs = 100;
 
 export async function runServe(args: string[]): Promise<string> {
   const { values } = parseCommandLine("serve", args, { port: { type: "string" }, molecules: { type: "string" }, out: { type: "string" } }, 0);
@@ -51,19 +57,30 @@ export async function runServe(args: string[]): Promise<string> {
   server.serve(port);
 
   let timer: NodeJS.Timeout | undefined;
+  let templatesChanged = false;
   let running: Promise<void> = Promise.resolve();
   const schedule = (what: string) => {
     clearTimeout(timer);
     timer = setTimeout(() => {
       running = running.then(async () => {
         say(`${what} changed, rebuilding …`);
+        // Kept molecule pages were rendered with the old templates. Consumed here, when the
+        // rebuild starts, so a template saved during a running build still counts for the next.
+        if (templatesChanged) cache.forget(keptPagesKind);
+        templatesChanged = false;
         if (await rebuild()) server.reload({ files: [], build: {} });
       });
-    }, 250);
+    }, saveSettleMs);
   };
   const watchers: FSWatcher[] = [
     watch(molecules, (_event, name) => name && /\.ya?ml$/.test(name) && schedule(name)),
-    ...["content", "templates"].map((dir) => watch(join(repoDir, dir), { recursive: true }, (_event, name) => name && schedule(`${dir}/${name}`))),
+    ...["content", "templates"].map((dir) =>
+      watch(join(repoDir, dir), { recursive: true }, (_event, name) => {
+        if (!name) return;
+        templatesChanged = true;
+        schedule(`${dir}/${name}`);
+      }),
+    ),
   ];
 
   await new Promise<void>((resolve) => process.once("SIGINT", resolve));
