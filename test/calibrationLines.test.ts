@@ -14,6 +14,7 @@ const line = (wavenumber: number, intensity: number, label: string): AbsorbingLi
   label,
   wavenumber,
   wavenumberUncertainty: 1e-5,
+  pressureShiftCm: 0,
   positionStatus: "validated",
   intensity,
   dopplerHwhmCm: 0.0025,

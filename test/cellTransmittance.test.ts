@@ -81,6 +81,7 @@ describe("CO cell spectrum", () => {
       label: "R(0)",
       wavenumber: 2110,
       wavenumberUncertainty: 1e-5,
+      pressureShiftCm: 0,
       positionStatus: "validated" as const,
       intensity: 2e-19,
       dopplerHwhmCm: 0.0025,

@@ -41,8 +41,9 @@ describe("bandatlas lines", () => {
   it("prints CSV with units in the header for another species, band and temperature", async () => {
     const { stdout, exitCode } = await cli("lines", "hcl", "--species", "H37Cl", "--band", "2-0", "--temperature", "500", "--format", "csv");
     expect(exitCode).toBe(0);
-    const [comment, header, ...rows] = stdout.trim().split("\n");
+    const [comment, positions, header, ...rows] = stdout.trim().split("\n");
     expect(comment).toMatch(/^# accuracy: not validated/);
+    expect(positions).toMatch(/^# positions: zero-pressure line centres/);
     expect(header).toContain("wavenumber (cm-1)");
     expect(header).toContain("wavelengthAir (nm)");
     // The HCl first overtone lies near 5668 cm⁻¹ for H35Cl (Huber & Herzberg 1979, from memory); H37Cl ~4 cm⁻¹ lower.

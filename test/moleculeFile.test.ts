@@ -46,6 +46,8 @@ const cases: Array<[string, number | null, RegExp]> = [
   ["control-characters", 4, /invisible control character U\+202E/],
   ["wrong-type", 7, /`aliases`: expected a list of other names, got a mapping/],
   ["negative-mass-number", 28, /`species\[1\]\.massNumbers\[0\]`: a mass number is positive/],
+  ["shift-uncertainty-negative", 15, /`pressureShift\.self\.uncertaintyCmPerAtm`: an uncertainty cannot be negative/],
+  ["shift-unknown-source", 15, /`pressureShift\.air\.source`: source "swann2000" is not listed under `sources`/],
 ];
 
 describe("malformed molecule files", () => {

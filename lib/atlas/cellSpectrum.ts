@@ -4,6 +4,8 @@ import {
   bandLines,
   broadeningIsTypical,
   cellSpectrum,
+  lineCentreShift,
+  noPressureShift,
   scaleTransitionDipoleToIsotopologue,
   speciesPartitionFunction,
   typicalBroadening,
@@ -12,6 +14,7 @@ import {
   type CellConditions,
   type CellSpectrum,
   type GasBroadening,
+  type GasPressureShift,
   type Instrument,
   type IntensityScale,
   type SpeciesModel,
@@ -45,6 +48,8 @@ export interface CellLineSet {
   /** True when a typical (not cited) broadening coefficient was used: every output must say so. */
   broadeningTypical: boolean;
   broadening: GasBroadening;
+  /** The pressure shift in every line's centre, its ±, and the perturbers with no cited shift. */
+  pressureShift: ReturnType<typeof lineCentreShift>;
   /** Plain sentences every output that shows these lines must carry. */
   notes: string[];
 }
@@ -87,6 +92,7 @@ export interface CellModel {
   moleculeName: string;
   intensityScale: IntensityScale;
   broadening: GasBroadening;
+  pressureShift: GasPressureShift;
   species: Array<{ model: SpeciesModel; bands: Band[] }>;
 }
 
@@ -97,6 +103,7 @@ export function cellModel(molecule: Molecule): CellModel {
     moleculeName: molecule.name,
     intensityScale: scale,
     broadening: molecule.broadening ?? typicalBroadening,
+    pressureShift: molecule.pressureShift ?? noPressureShift,
     species: molecule.species.map((species) => ({
       model: scale === "absolute" ? species.model : unitDipoleModel(species, molecule.species[0]),
       bands: speciesBands(species).map((b) => b.band),
@@ -113,6 +120,7 @@ export function cellLineSet(molecule: Molecule, conditions: CellConditions): Cel
 export function cellLinesOfModel(cell: CellModel, conditions: CellConditions): CellLineSet {
   const scale = cell.intensityScale;
   const broadening = cell.broadening;
+  const shift = lineCentreShift(cell.pressureShift, conditions.pressurePa, conditions.moleFraction);
   const used: CellBand[] = [];
   const leftOut: CellLineSet["bandsLeftOut"] = [];
   let lines: AbsorbingLine[] = [];
@@ -135,7 +143,7 @@ export function cellLinesOfModel(cell: CellModel, conditions: CellConditions): C
               ? "unit-dipole, harmonic hot band"
               : "unit-dipole",
       });
-      lines = lines.concat(absorbingLines(model, result, conditions, broadening, (l) => l.lineIntensity));
+      lines = lines.concat(absorbingLines(model, result, conditions, broadening, shift, (l) => l.lineIntensity));
     }
   }
   let strongest = 0;
@@ -149,8 +157,37 @@ export function cellLinesOfModel(cell: CellModel, conditions: CellConditions): C
     );
   }
   if (typical) notes.push("Line widths use a typical pressure-broadening coefficient (0.07 cm⁻¹/atm, n = 0.75), not a measured one for this gas.");
+  notes.push(pressureShiftNote(shift));
   if (leftOut.length) notes.push(`Left out for want of intensity data: ${leftOut.map((b) => `${b.species} ${b.band}`).join(", ")}.`);
-  return { moleculeId: cell.moleculeId, intensityScale: scale, lines, bandsUsed: used, bandsLeftOut: leftOut, broadeningTypical: typical, broadening, notes };
+  return {
+    moleculeId: cell.moleculeId,
+    intensityScale: scale,
+    lines,
+    bandsUsed: used,
+    bandsLeftOut: leftOut,
+    broadeningTypical: typical,
+    broadening,
+    pressureShift: shift,
+    notes,
+  };
+}
+
+/** What every output of cell lines says about their centres: the cited shift in them, or none. */
+export function pressureShiftNote(shift: ReturnType<typeof lineCentreShift>): string {
+  const uncited = shift.uncited.length
+    ? `no shift is cited for ${shift.uncited.map((w) => (w === "self" ? "the gas itself" : "air")).join(" or ")}, so none is applied for it`
+    : "";
+  if (shift.shiftCm === 0 && shift.uncertaintyCm === 0)
+    return `Line centres are zero-pressure positions: no pressure shift is cited for ${shift.uncited.map((w) => (w === "self" ? "the gas itself" : "air")).join(" or ")}, so none is applied.`;
+  return (
+    `Line centres include the cited pressure shift at this pressure, ${formatShift(shift.shiftCm)} ± ${formatShift(shift.uncertaintyCm, false)} cm⁻¹, its ± added to every position's` +
+    (uncited ? `; ${uncited}.` : ".")
+  );
+}
+
+function formatShift(valueCm: number, signed = true): string {
+  const text = valueCm.toExponential(1).replace(/^-/, "−");
+  return signed && valueCm > 0 ? `+${text}` : text;
 }
 
 export interface CellSpectrumSettings {

@@ -1,17 +1,15 @@
 import { fileURLToPath } from "node:url";
 import { build } from "esbuild";
 
-const source = (file: string) => fileURLToPath(new URL(`../browser/${file}`, import.meta.url));
-
 /**
  * The site's scripts, each bundled from one lib/browser entry with what it imports:
  * search.js (lib/core's nearbyLines), bench.js (lib/atlas's cellLinesOfModel and lib/core's cell
  * spectrum), calibrate.js (lib/spectrumFile's readers and lib/atlas's calibrateMeasuredSpectrum).
  */
 export const browserScripts: ReadonlyArray<{ path: string; entry: string }> = [
-  { path: "assets/search.js", entry: source("siteSearch.ts") },
-  { path: "assets/bench.js", entry: source("benchPage.ts") },
-  { path: "assets/calibrate.js", entry: source("calibratePage.ts") },
+  { path: "assets/search.js", entry: fileURLToPath(new URL("../browser/siteSearch.ts", import.meta.url)) },
+  { path: "assets/bench.js", entry: fileURLToPath(new URL("../browser/benchPage.ts", import.meta.url)) },
+  { path: "assets/calibrate.js", entry: fileURLToPath(new URL("../browser/calibratePage.ts", import.meta.url)) },
 ];
 
 /** One script's bundle, minified, as bytes to write. */

@@ -2,6 +2,7 @@ import { bandLabel } from "./band.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { dopplerHwhmCm, molecularMassU } from "./dopplerWidth.ts";
 import { lorentzHwhmCm, runningM, type GasBroadening } from "./pressureBroadening.ts";
+import type { LineCentreShift } from "./pressureShift.ts";
 import type { BandLines, Line, SpeciesModel, TemperatureK, WavenumberCm } from "./types.ts";
 
 /** The state of the gas in the cell. */
@@ -19,9 +20,12 @@ export interface AbsorbingLine {
   species: string;
   band: string;
   label: string;
+  /** The line centre in the cell: the zero-pressure position plus the pressure shift. */
   wavenumber: WavenumberCm;
-  /** The predicted position's standard uncertainty and how it was validated (see Line). */
+  /** The centre's standard uncertainty: the position's (see Line) and the shift's, combined. */
   wavenumberUncertainty: WavenumberCm;
+  /** The pressure shift included in `wavenumber` (0 where none is cited). */
+  pressureShiftCm: WavenumberCm;
   positionStatus: Line["positionStatus"];
   /** cm/molecule of the molecule at its isotopic mix (or relative units, see the spectrum's scale). */
   intensity: number;
@@ -40,7 +44,8 @@ export function checkCellConditions(c: CellConditions): void {
 }
 
 /**
- * The lines of one band of one species with their Doppler and Lorentz HWHM in the cell.
+ * The lines of one band of one species with their Doppler and Lorentz HWHM in the cell, their
+ * centres moved by the cell's pressure shift (one shift for the gas, see pressureShift.ts).
  * `intensityOf` picks the strength (absolute lineIntensity, or a relative stand-in chosen by the
  * caller); a line for which it returns null is left out.
  */
@@ -49,6 +54,7 @@ export function absorbingLines(
   lines: BandLines,
   conditions: CellConditions,
   broadening: GasBroadening,
+  shift: LineCentreShift,
   intensityOf: (line: BandLines["lines"][number]) => number | null,
 ): AbsorbingLine[] {
   checkCellConditions(conditions);
@@ -62,8 +68,9 @@ export function absorbingLines(
       species: species.label,
       band,
       label: line.label,
-      wavenumber: line.wavenumber,
-      wavenumberUncertainty: line.wavenumberUncertainty,
+      wavenumber: line.wavenumber + shift.shiftCm,
+      wavenumberUncertainty: Math.hypot(line.wavenumberUncertainty, shift.uncertaintyCm),
+      pressureShiftCm: shift.shiftCm,
       positionStatus: line.positionStatus,
       intensity,
       dopplerHwhmCm: dopplerHwhmCm(line.wavenumber, conditions.temperatureK, mass),

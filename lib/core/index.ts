@@ -30,6 +30,7 @@ export * from "./faddeeva.ts";
 export * from "./voigtProfile.ts";
 export * from "./dopplerWidth.ts";
 export * from "./pressureBroadening.ts";
+export * from "./pressureShift.ts";
 export * from "./numberDensity.ts";
 export * from "./spectralGrid.ts";
 export * from "./absorbingLines.ts";

@@ -3,6 +3,13 @@ import { accuracyRecord, accuracyText } from "./accuracyText.ts";
 import { csvRow, numeric } from "./csv.ts";
 import { csvLineColumns, lineColumns } from "./lineColumns.ts";
 
+/**
+ * What every line table says of its positions: the pressure shift of a filled cell is left out
+ * here and applied by the cell outputs (spectrum, calibration lines), where it is cited.
+ */
+export const positionsAre =
+  "zero-pressure line centres in vacuum wavenumbers; a filled cell moves them by its pressure shift, which the cell spectrum and calibration lines apply where one is cited";
+
 /** The JSON contract of `bandatlas lines --format json`, shared by the CLI and the site's downloads. */
 export interface LinesDocument {
   molecule: string;
@@ -11,6 +18,8 @@ export interface LinesDocument {
   temperatureK: number;
   bandOrigin: number;
   partitionFunction: number;
+  /** What the positions are (positionsAre): zero-pressure line centres. */
+  positions: string;
   /** How the band's positions were validated against cited measured lines. */
   accuracy: ReturnType<typeof accuracyRecord>;
   /** Known limitations of the molecule's constants, from its file. */
@@ -43,6 +52,7 @@ export function linesDocument(moleculeId: string, result: BandLines, limitations
     temperatureK: result.temperatureK,
     bandOrigin: result.bandOrigin,
     partitionFunction: result.partitionFunction,
+    positions: positionsAre,
     accuracy: accuracyRecord(result.accuracy),
     limitations: [...limitations],
     lines: result.lines.map((l) => Object.fromEntries(csvLineColumns.map((c) => [c.key, l[c.key]])) as LinesDocument["lines"][number]),
@@ -64,7 +74,7 @@ export function lineCells(l: Line): Record<keyof Line & string, string> {
  * a molecule file can start a second cell that a spreadsheet would read as a formula.
  */
 export function linesCsv(result: BandLines, limitations: readonly string[] = []): string {
-  const comments = [`# accuracy: ${accuracyText(result.accuracy)}`, ...limitations.map((l) => `# known limitation: ${l}`)];
+  const comments = [`# accuracy: ${accuracyText(result.accuracy)}`, `# positions: ${positionsAre}`, ...limitations.map((l) => `# known limitation: ${l}`)];
   const rows = [...comments.map((c) => c.replace(/,/g, ";").replace(/["\r\n]+/g, " ")), csvRow(linesCsvHeader)];
   for (const l of result.lines) rows.push(csvRow(csvLineColumns.map((c) => (c.numeric ? numeric(c.cell(l)) : c.cell(l)))));
   return rows.join("\n") + "\n";

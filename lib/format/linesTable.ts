@@ -1,6 +1,7 @@
 import { bandLabel, type BandLines } from "../core/index.ts";
 import { accuracyText } from "./accuracyText.ts";
 import { lineColumns } from "./lineColumns.ts";
+import { positionsAre } from "./lineRecords.ts";
 import { significant } from "./numbers.ts";
 
 /** How a band's transition dipole was obtained, in words for the table header. */
@@ -39,6 +40,7 @@ export function linesTable(result: BandLines, context: LinesTableContext): strin
     `${context.moleculeName} (${context.formula}), species ${result.species}, band ${bandLabel(result.band)}, T = ${result.temperatureK} K`,
     `band origin ${result.bandOrigin.toFixed(4)} cm⁻¹; partition function Q = ${significant(result.partitionFunction, 6)}; ${result.lines.length} lines, J'' up to ${result.jLowerMax}`,
     context.constantsNote,
+    `positions: ${positionsAre}`,
     intensity,
     `accuracy: ${accuracyText(result.accuracy)}`,
     ...(context.limitations ?? []).map((l) => `KNOWN LIMITATION: ${l}`),

@@ -83,7 +83,7 @@ export function calibrationRulesText(run: CalibrationRun): string {
     `a line is used when its reference ± is at most ${k.maxUncertaintyFraction} × resolution, no line ≥ ${100 * k.blendFraction} % as strong lies within one resolution, ` +
     `its peak is ≥ ${r.minSignalToNoise} × the noise, below absorbance ${r.saturationAbsorbance} without a flat top, and no peak twice as high (and ≥ ${r.saturationAbsorbance / 2}) lies within ${r.strongNeighbourResolutions} resolutions; ` +
     `the worst line is rejected while, refitted without it, it lies more than 3 × max(1, √(χ²/ν)) of its σ from the fit. ` +
-    `References are the apparent peaks predicted for this cell and resolution (${Math.round(100 * k.peakShiftUncertaintyFraction)} % of the predicted peak shift is added to their ±); no pressure shift is applied.`
+    `References are the apparent peaks predicted for this cell and resolution (${Math.round(100 * k.peakShiftUncertaintyFraction)} % of the predicted peak shift is added to their ±), their centres moved by the cited pressure shift where there is one (see the notes).`
   );
 }
 

@@ -12,7 +12,7 @@ import { split } from "./givenConstants.ts";
 import { buildLinearMolecule } from "./linearMolecule.ts";
 import type { LinearFileFit } from "./linearFit.ts";
 import type { MoleculeFile } from "./linearSchema.ts";
-import { gasBroadening, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
+import { gasBroadening, gasPressureShift, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
 import { isotope } from "./isotopes.ts";
 import type { DiatomicMoleculeFile } from "./schema.ts";
 import { speciesConstants } from "./speciesConstants.ts";
@@ -106,6 +106,7 @@ export function buildDiatomicMolecule(file: DiatomicMoleculeFile, fileName: stri
     species: models,
     structure: "diatomic",
     broadening: file.broadening ? gasBroadening(file.broadening) : null,
+    pressureShift: file.pressureShift ? gasPressureShift(file.pressureShift) : null,
   };
 }
 

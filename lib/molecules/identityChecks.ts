@@ -49,5 +49,9 @@ export function identityProblems(file: IdentityFields, expectedId: string | null
   if (file.broadening) {
     for (const which of ["self", "air"] as const) checkSource(["broadening", which, "source"], file.broadening[which].source);
   }
+  for (const which of ["self", "air"] as const) {
+    const shift = file.pressureShift?.[which];
+    if (shift) checkSource(["pressureShift", which, "source"], shift.source);
+  }
   return out;
 }

@@ -1,5 +1,5 @@
 import { moleculeValidation, transitionDipoleFromBandStrength, type LinearSpeciesData, type LinearState, type LinearSpeciesModel } from "../core/index.ts";
-import { gasBroadening, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
+import { gasBroadening, gasPressureShift, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
 import { linearFitErrors, type LinearFileFit } from "./linearFit.ts";
 import type { GivenConstant } from "./givenConstants.ts";
 import { isotope } from "./isotopes.ts";
@@ -111,5 +111,6 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string, 
     species,
     structure: "linear",
     broadening: file.broadening ? gasBroadening(file.broadening) : null,
+    pressureShift: file.pressureShift ? gasPressureShift(file.pressureShift) : null,
   };
 }

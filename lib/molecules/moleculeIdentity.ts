@@ -1,4 +1,12 @@
-import { parseLineLabel, type Band, type GasBroadening, type MeasuredLineObservation, type ReferenceLine, type SpeciesModel } from "../core/index.ts";
+import {
+  parseLineLabel,
+  type Band,
+  type GasBroadening,
+  type GasPressureShift,
+  type MeasuredLineObservation,
+  type ReferenceLine,
+  type SpeciesModel,
+} from "../core/index.ts";
 import type { GivenConstant } from "./givenConstants.ts";
 import type { IdentityFields, referenceLineSchema } from "./schema.ts";
 import type { z } from "zod";
@@ -36,6 +44,8 @@ export interface Molecule {
   structure: "diatomic" | "linear";
   /** Cited self and air broadening from the file; absent or null: none given (spectra use a flagged typical value). */
   broadening?: GasBroadening | null;
+  /** Cited pressure shifts from the file; absent or null: none given (centres are zero-pressure positions). */
+  pressureShift?: GasPressureShift | null;
 }
 
 type IdentityKeys = "id" | "file" | "name" | "formula" | "casNumber" | "aliases" | "limitations" | "electronicState" | "atoms" | "hazard" | "sources";
@@ -65,6 +75,12 @@ export function gasBroadening(block: NonNullable<IdentityFields["broadening"]>):
 function broadeningOf(block: NonNullable<IdentityFields["broadening"]>["self"]): GasBroadening["self"] {
   const table = block.byAbsM ? [...block.byAbsM].sort((a, b) => a.absM - b.absM) : null;
   return { hwhmCmPerAtm: block.hwhmCmPerAtm, byAbsM: table, temperatureExponent: block.temperatureExponent, sourceKey: block.source, origin: "cited" };
+}
+
+/** Cited pressure shifts of a file; a perturber left out has none. */
+export function gasPressureShift(block: NonNullable<IdentityFields["pressureShift"]>): GasPressureShift {
+  const of = (c: (typeof block)["self"]) => (c ? { cmPerAtm: c.cmPerAtm, uncertaintyCmPerAtm: c.uncertaintyCmPerAtm, sourceKey: c.source } : null);
+  return { self: of(block.self), air: of(block.air) };
 }
 
 type FileLine = z.infer<typeof referenceLineSchema>;

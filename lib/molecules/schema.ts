@@ -67,6 +67,21 @@ const broadeningCoefficientSchema = mapping(
   "a broadening coefficient",
 );
 
+const pressureShiftCoefficientSchema = mapping(
+  {
+    source: sourceKey,
+    cmPerAtm: numberIn("cm⁻¹/atm near room temperature (negative: towards lower wavenumber)"),
+    uncertaintyCmPerAtm: numberIn("cm⁻¹/atm").nonnegative({ error: "an uncertainty cannot be negative" }),
+  },
+  "a pressure-shift coefficient",
+);
+
+/** Pressure shift of the line centres by the gas itself and by air; either may be left out (then none is applied for it). */
+export const pressureShiftSchema = mapping(
+  { self: pressureShiftCoefficientSchema.optional(), air: pressureShiftCoefficientSchema.optional() },
+  "a pressure-shift block",
+);
+
 /** Pressure broadening of the molecule's lines by itself and by air (HWHM per atm at 296 K). */
 export const broadeningSchema = mapping({ self: broadeningCoefficientSchema, air: broadeningCoefficientSchema }, "a broadening block");
 
@@ -108,6 +123,7 @@ export const identityShape = {
     error: (issue) => `expected the sources as a mapping of key: { citation, url, doi }, got ${describeInput(issue.input)}`,
   }),
   broadening: broadeningSchema.optional(),
+  pressureShift: pressureShiftSchema.optional(),
 };
 
 /** A group of measured lines of one band (`"0-0"` for pure rotation) of one species. */

@@ -1,6 +1,16 @@
 import { defaultCalibrationCriteria, type CalibrationCriteria } from "../../core/index.ts";
 import { moleculeCalibrationLines } from "../../atlas/index.ts";
-import { calibrationWavenumberDigits, criteriaPhrase, csvRow, moleculeCaution, numeric, peakShiftDigits, significant, textTable } from "../../format/index.ts";
+import {
+  calibrationWavenumberDigits,
+  criteriaPhrase,
+  csvRow,
+  moleculeCaution,
+  numeric,
+  peakShiftDigits,
+  pressureShiftRecord,
+  significant,
+  textTable,
+} from "../../format/index.ts";
 import {
   cellConditionsFromOptions,
   cellOptionSpec,
@@ -69,6 +79,7 @@ export function runCalibrationLines(args: string[]): string {
           criteria,
           intensityScale: result.set.intensityScale,
           broadeningTypical: result.set.broadeningTypical,
+          pressureShift: pressureShiftRecord(result.set.pressureShift),
           notes: result.set.notes,
           caution: moleculeCaution(molecule),
           lines: result.lines.map((l) => ({

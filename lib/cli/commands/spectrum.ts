@@ -7,6 +7,7 @@ import {
   numeric,
   opticalDepthDigits,
   predictionNotice,
+  pressureShiftRecord,
   spectrumWavenumberDigits,
   transmittanceDigits,
 } from "../../format/index.ts";
@@ -108,6 +109,7 @@ export function runSpectrum(args: string[]): string {
           bandsUsed: set.bandsUsed,
           bandsLeftOut: set.bandsLeftOut,
           broadeningTypical: set.broadeningTypical,
+          pressureShift: pressureShiftRecord(set.pressureShift),
           notes: set.notes,
           caution: moleculeCaution(molecule),
           samples: indices.map((i) => ({
