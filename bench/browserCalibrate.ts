@@ -4,7 +4,7 @@ import { join } from "node:path";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { launchChromium, serveSite } from "./benchBrowser.ts";
 import { calibrateBenchCsv, calibrateBenchPoints } from "./calibrateSpectrum.ts";
-import { runChild, seconds } from "./childProcess.ts";
+import { runBuildChild, seconds } from "./childProcess.ts";
 
 /**
  * The website's calibrate page in Chromium on the invented 65 536-point CO spectrum of the Node
@@ -17,7 +17,7 @@ export async function benchBrowserCalibrate(runs: number): Promise<string[]> {
   const site = join(work, "site");
   const { server, base } = await serveSite(site);
   try {
-    const built = await runChild<{ wallMs: number }>("./buildChild.ts", { moleculesDir: shippedMoleculesDir, outDir: site, sheets: false });
+    const built = await runBuildChild<{ wallMs: number }>({ moleculesDir: shippedMoleculesDir, outDir: site, sheets: false });
     const file = join(work, "bench-co.csv");
     writeFileSync(file, calibrateBenchCsv());
     const browser = await launchChromium();

@@ -8,7 +8,7 @@ import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
 import { lineIndex } from "../lib/site/searchIndexes.ts";
 import { temperatureToken } from "../lib/shared/sitePaths.ts";
-import { loadNote, runChild, seconds } from "./childProcess.ts";
+import { loadNote, runBuildChild, seconds } from "./childProcess.ts";
 import { writeSyntheticMolecules } from "./syntheticMolecules.ts";
 
 /**
@@ -24,7 +24,7 @@ export async function benchBrowserSearch(n: number, queries: number): Promise<st
   const site = join(work, "site");
   const { server, base } = await serveSite(site);
   try {
-    const built = await runChild<{ lines: Array<{ temperatureK: number; lines: number }> }>("./buildChild.ts", {
+    const built = await runBuildChild<{ lines: Array<{ temperatureK: number; lines: number }> }>({
       moleculesDir: shippedMoleculesDir,
       outDir: site,
       sheets: false,

@@ -1,5 +1,6 @@
 import { spawn } from "node:child_process";
 import { fileURLToPath } from "node:url";
+import { heapCapArgs } from "../bin/heapCap.js";
 
 export const repoDir = fileURLToPath(new URL("..", import.meta.url));
 
@@ -51,4 +52,9 @@ export async function loadNote(): Promise<string> {
   const { loadavg, cpus } = await import("node:os");
   const [one, five] = loadavg();
   return `load average ${one.toFixed(2)} (1 min), ${five.toFixed(2)} (5 min) on ${cpus().length} cores`;
+}
+
+/** A cold build in a fresh Node with the heap cap `bandatlas build` runs under (bin/heapCap.js). */
+export function runBuildChild<T>(args: { moleculesDir: string; outDir: string; sheets: boolean }): Promise<ChildResult<T>> {
+  return runChild<T>("./buildChild.ts", args, heapCapArgs(process.execArgv, process.env.NODE_OPTIONS));
 }

@@ -2,7 +2,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { BuildTimings } from "../lib/build/index.ts";
-import { loadNote, mb, runChild, seconds } from "./childProcess.ts";
+import { loadNote, mb, runBuildChild, seconds } from "./childProcess.ts";
 import { writeSyntheticMolecules } from "./syntheticMolecules.ts";
 
 /** Full builds (site and sheets) of N invented molecules, each in a fresh process. */
@@ -13,7 +13,7 @@ export async function benchScale(sizes: number[]): Promise<string[]> {
     const runs: Array<{ n: number; wallMs: number; maxRssMb: number }> = [];
     for (const n of sizes) {
       const moleculesDir = writeSyntheticMolecules(join(work, `molecules-${n}`), n);
-      const r = await runChild<{ timings: BuildTimings; pages: number; sheets: number }>("./buildChild.ts", {
+      const r = await runBuildChild<{ timings: BuildTimings; pages: number; sheets: number }>({
         moleculesDir,
         outDir: join(work, `site-${n}`),
         sheets: true,

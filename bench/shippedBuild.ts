@@ -3,7 +3,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { BuildTimings } from "../lib/build/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
-import { loadNote, mb, runChild, seconds } from "./childProcess.ts";
+import { loadNote, mb, runBuildChild, runChild, seconds } from "./childProcess.ts";
 
 interface BuildChildValue {
   timings: BuildTimings;
@@ -21,12 +21,12 @@ export async function benchShippedBuild(): Promise<string[]> {
   const work = mkdtempSync(join(tmpdir(), "bandatlas-bench-shipped-"));
   try {
     const before = await loadNote();
-    const full = await runChild<BuildChildValue>("./buildChild.ts", { moleculesDir: shippedMoleculesDir, outDir: join(work, "full"), sheets: true });
+    const full = await runBuildChild<BuildChildValue>({ moleculesDir: shippedMoleculesDir, outDir: join(work, "full"), sheets: true });
     // Site and baseline twice, interleaved, the faster of each counted: the machine is shared.
     const sites = [];
     const bares = [];
     for (let round = 0; round < 2; round++) {
-      sites.push(await runChild<BuildChildValue>("./buildChild.ts", { moleculesDir: shippedMoleculesDir, outDir: join(work, `site-${round}`), sheets: false }));
+      sites.push(await runBuildChild<BuildChildValue>({ moleculesDir: shippedMoleculesDir, outDir: join(work, `site-${round}`), sheets: false }));
       bares.push(await runChild<{ inProcessMs: number }>("./bareEleventyChild.ts", { pages: sites[0].value.pages }));
     }
     const site = sites.reduce((a, b) => (b.wallMs < a.wallMs ? b : a));

@@ -4,6 +4,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import { runCli } from "../lib/cli/main.ts";
+import { buildHeapCapMb, heapCapArgs } from "../bin/heapCap.js";
 
 const root = join(import.meta.dirname, "..");
 const cli = (...args: string[]) => runCli(args);
@@ -156,5 +157,18 @@ describe("the installed command", () => {
     const failed = spawnSync(process.execPath, [join(root, "bin/bandatlas.js"), "lines", "co", "--temperature", "0"], { encoding: "utf8" });
     expect(failed.status).toBe(2);
     expect(failed.stderr).toMatch(/above 0 K/);
+  });
+
+  it("builds under the heap cap in a second Node, passing on its message and exit code", () => {
+    // bin/heapCap.js: build and serve run with --max-old-space-size unless the user chose a size.
+    expect(heapCapArgs([], "")).toEqual([`--max-old-space-size=${buildHeapCapMb}`]);
+    expect(heapCapArgs(["--max-old-space-size=2048"], "")).toEqual([]);
+    expect(heapCapArgs([], "--max-old-space-size=100 --trace-warnings")).toEqual([]);
+    const bad = spawnSync(process.execPath, [join(root, "bin/bandatlas.js"), "build", "--molecules", join(root, "test/fixtures/bad/negative-b.yaml")], {
+      encoding: "utf8",
+    });
+    expect(bad.status).not.toBe(0);
+    expect(bad.stderr).toMatch(/negative-b\.yaml/);
+    expect(bad.stderr).not.toMatch(/\n\s+at /);
   });
 });

@@ -83,7 +83,8 @@ export async function runServe(args: string[]): Promise<string> {
     ),
   ];
 
-  await new Promise<void>((resolve) => process.once("SIGINT", resolve));
+  // A Ctrl-C may arrive twice (from the terminal and passed on by bin/bandatlas.js): both stop.
+  await new Promise<void>((resolve) => process.on("SIGINT", () => resolve()));
   for (const w of watchers) w.close();
   clearTimeout(timer);
   await server.close();
