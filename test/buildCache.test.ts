@@ -36,8 +36,11 @@ describe("rebuilds with a build cache", () => {
     const first = cache.lastBuild;
     const hf = join(molecules, "hf.yaml");
     writeFileSync(hf, readFileSync(hf, "utf8").replace(/^name: (.*)$/m, "name: $1 (edited)"));
-    await buildSite({ moleculesDir: molecules, outDir: join(work, "served"), sheets: false, build, cache });
+    const report = await buildSite({ moleculesDir: molecules, outDir: join(work, "served"), sheets: false, build, cache });
     const second = cache.lastBuild;
+    // Unchanged files (all of hi's) are linked from the site being replaced, hf's written again.
+    expect(report.files.linked).toBeGreaterThan(report.files.written);
+    expect(report.files.written).toBeGreaterThan(0);
     await buildSite({ moleculesDir: molecules, outDir: join(work, "cold"), sheets: false, build });
 
     // Every per-molecule result of both molecules was computed the first time; the second time

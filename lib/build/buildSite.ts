@@ -1,4 +1,4 @@
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync, cpSync } from "node:fs";
+import { existsSync, mkdirSync, mkdtempSync, rmSync, cpSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 import { atlasEntry, defaultFindMinRelative, entryLines, standardTemperaturesK, type AtlasEntry } from "../atlas/index.ts";
@@ -19,6 +19,7 @@ import type { BuildCache } from "./buildCache.ts";
 import { buildIdentity, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { checkInternalLinks } from "./checkLinks.ts";
 import { swapDirectory } from "./swapDirectory.ts";
+import { SiteWriter } from "./siteWriter.ts";
 
 export const repoDir = fileURLToPath(new URL("../..", import.meta.url));
 
@@ -45,6 +46,8 @@ export interface BuildReport {
   sheets: number;
   lineIndex: Array<{ temperatureK: number; lines: number; bytes: number }>;
   build: BuildIdentity;
+  /** Files this process wrote, and files linked unchanged from the site it replaced (serving only). */
+  files: { written: number; linked: number };
   /** Wall time of each stage in ms, for `npm run bench`, summed over the batches of molecules. */
   timings: BuildTimings;
 }
@@ -87,12 +90,6 @@ type StartBenchSheets = typeof import("../sheet/index.ts").startBenchSheets;
 /** Loaded only when sheets are wanted: PDFKit and the fonts take about 0.4 s to load, which page-only builds (the tests) skip. */
 async function loadSheetWriter(): Promise<StartBenchSheets> {
   return (await import("../sheet/index.ts")).startBenchSheets;
-}
-
-function writeFile(root: string, path: string, text: string | Uint8Array) {
-  const full = join(root, path);
-  mkdirSync(dirname(full), { recursive: true });
-  writeFileSync(full, text);
 }
 
 /** The BuildCache kind of a molecule's rendered pages; `bandatlas serve` forgets it when a template changes. */
@@ -157,6 +154,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   const outDir = resolve(options.outDir);
   mkdirSync(dirname(outDir), { recursive: true });
   const work = mkdtempSync(join(dirname(outDir), ".site-build-"));
+  // While serving, unchanged files are linked from the site being replaced (see SiteWriter).
+  const site = new SiteWriter(work, cache && existsSync(outDir) ? outDir : null);
   const timings = { physicsMs: 0, plotsMs: 0, filesMs: 0, pagesMs: 0, sheetsMs: 0 };
   let entryCount = 0;
   let pageCount = 0;
@@ -229,7 +228,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       const batchBench = batch.map((m) => perMolecule("bench", m, () => benchById.get(m.id)!));
       for (const b of batchBench) {
         bench.set(b.moleculeId, { marks: b.marks, defaultRangeCm: b.defaultRangeCm });
-        writeFile(work, benchModelPath(b.moleculeId), JSON.stringify(b.model));
+        site.write(benchModelPath(b.moleculeId), JSON.stringify(b.model));
       }
       timings.physicsMs += lap();
       sheetRun = startBenchSheets
@@ -255,7 +254,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
             ]),
           ),
         );
-        for (const [path, text] of downloads) writeFile(work, path, text);
+        for (const [path, text] of downloads) site.write(path, text);
       }
       timings.filesMs += lap();
 
@@ -263,7 +262,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
         ? await renderKeptPages(cache, pagesKind, batch, entries, (stale, staleEntries, write) =>
             runEleventy(work, siteData(siteInput(), { molecules: stale, entries: staleEntries, plots }), "molecules", { write }),
           ).then((pages) => {
-            for (const [path, text] of pages) writeFile(work, path, text);
+            for (const [path, text] of pages) site.write(path, text);
             return pages.length;
           })
         : await runEleventy(work, siteData(siteInput(), { molecules: batch, entries, plots }), "molecules");
@@ -279,12 +278,12 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     log(`atlas: ${entryCount} entries of ${molecules.length} molecules, in batches of ${perBatch}`);
     log(startBenchSheets ? `bench sheets: ${sheets.length} PDFs` : "bench sheets: not requested");
 
-    writeFile(work, nameIndexPath, nameIndexJson(molecules));
+    site.write(nameIndexPath, nameIndexJson(molecules));
     const lineIndexReport = [];
     for (const { temperatureK, path } of lineIndexPaths) {
       const file = lineIndexes.get(temperatureK)!.finish();
       const text = JSON.stringify(file);
-      writeFile(work, path, text);
+      site.write(path, text);
       lineIndexReport.push({ temperatureK, lines: file.count, bytes: Buffer.byteLength(text) });
     }
     lineIndexes.clear();
@@ -293,12 +292,12 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     );
     for (const script of browserScripts) {
       const bytes = await (cache ? cache.forSession(`bundle ${script.path}`, () => bundleBrowserScript(script.entry)) : bundleBrowserScript(script.entry));
-      writeFile(work, script.path, bytes);
+      site.write(script.path, bytes);
     }
     for (const asset of ["site.css", "favicon.svg"]) cpSync(join(contentDir, "assets", asset), join(work, "assets", asset));
     timings.filesMs += lap();
 
-    pageCount += await runEleventy(work, siteData(siteInput(), null), "site");
+    pageCount += await runEleventy(work, siteData(siteInput(), null), "site", { write: (path, text) => site.write(path, text) });
     timings.pagesMs += lap();
     const links = checkInternalLinks(work);
     if (links.broken.length) {
@@ -323,6 +322,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       sheets: sheets.length,
       lineIndex: lineIndexReport,
       build,
+      files: { ...site.counts },
       timings: finished,
     };
   } catch (error) {
