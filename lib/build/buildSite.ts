@@ -92,6 +92,13 @@ async function loadSheetWriter(): Promise<StartBenchSheets> {
   return (await import("../sheet/index.ts")).startBenchSheets;
 }
 
+/** Base64 of `bytes` in pieces that join to the base64 of the whole (each a multiple of 3 bytes). */
+function* base64Pieces(bytes: Uint8Array): Generator<string> {
+  const piece = 3 << 16;
+  for (let at = 0; at < bytes.length; at += piece)
+    yield Buffer.from(bytes.buffer, bytes.byteOffset + at, Math.min(piece, bytes.length - at)).toString("base64");
+}
+
 /** The BuildCache kind of a molecule's rendered pages; `bandatlas serve` forgets it when a template changes. */
 export const keptPagesKind = "pages";
 
@@ -281,12 +288,15 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     site.write(nameIndexPath, nameIndexJson(molecules));
     const lineIndexReport = [];
     for (const { temperatureK, path } of lineIndexPaths) {
-      const file = lineIndexes.get(temperatureK)!.finish();
-      const text = JSON.stringify(file);
-      site.write(path, text);
-      lineIndexReport.push({ temperatureK, lines: file.count, bytes: Buffer.byteLength(text) });
+      // Written a piece at a time: the same bytes as JSON.stringify(builder.finish()) without
+      // holding the base64 text, its JSON copy and their UTF-8 copy at once (about 50 MB each
+      // at one temperature of 2000 molecules).
+      const { head, packed } = lineIndexes.get(temperatureK)!.finishPacked();
+      lineIndexes.delete(temperatureK);
+      const [before, after] = JSON.stringify({ ...head, data: "" }).split(/(?<="data":")(?="\}$)/);
+      const bytes = site.writeParts(path, [before, ...base64Pieces(packed), after]);
+      lineIndexReport.push({ temperatureK, lines: head.count, bytes });
     }
-    lineIndexes.clear();
     log(
       `search index: ${lineIndexReport.map((r) => `${r.lines} lines at ${r.temperatureK} K`).join(", ")} (${lineIndexBytesPerLine} bytes a line before base64)`,
     );

@@ -1,4 +1,4 @@
-import { linkSync, mkdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
+import { closeSync, linkSync, mkdirSync, openSync, readFileSync, statSync, writeFileSync, writeSync } from "node:fs";
 import { dirname, join } from "node:path";
 
 /**
@@ -31,6 +31,25 @@ export class SiteWriter {
     }
     writeFileSync(target, data);
     this.counts.written++;
+  }
+
+  /** A large file written piece by piece (never linked); returns its size in bytes. */
+  writeParts(path: string, parts: Iterable<string | Uint8Array>): number {
+    const target = join(this.root, path);
+    mkdirSync(dirname(target), { recursive: true });
+    const fd = openSync(target, "w");
+    let size = 0;
+    try {
+      for (const part of parts) {
+        const bytes = typeof part === "string" ? Buffer.from(part) : part;
+        for (let at = 0; at < bytes.byteLength;) at += writeSync(fd, bytes, at);
+        size += bytes.byteLength;
+      }
+    } finally {
+      closeSync(fd);
+    }
+    this.counts.written++;
+    return size;
   }
 
   private linkIfSame(previous: string, target: string, data: string | Uint8Array): boolean {

@@ -42,14 +42,6 @@ function fromBase64(text: string): Uint8Array {
   return bytes;
 }
 
-/** Byte planes of `width`-byte items: item i's byte b goes to b·count + i. */
-function toPlanes(bytes: Uint8Array, width: number): Uint8Array {
-  const count = bytes.length / width;
-  const out = new Uint8Array(bytes.length);
-  for (let i = 0; i < count; i++) for (let b = 0; b < width; b++) out[b * count + i] = bytes[i * width + b];
-  return out;
-}
-
 function fromPlanes(planes: Uint8Array, width: number, out: Uint8Array): void {
   const count = planes.length / width;
   for (let b = 0; b < width; b++) {
@@ -58,22 +50,22 @@ function fromPlanes(planes: Uint8Array, width: number, out: Uint8Array): void {
   }
 }
 
-/** Sorted positive doubles as differences of their bit patterns (little-endian 32-bit halves, exact). */
-function deltaBits(values: Float64Array): Uint32Array {
-  const halves = new Uint32Array(values.buffer.slice(values.byteOffset, values.byteOffset + values.byteLength));
-  const out = new Uint32Array(halves.length);
-  let lo = 0;
-  let hi = 0;
-  for (let i = 0; i < values.length; i++) {
+/**
+ * Sorted positive doubles as differences of their bit patterns (little-endian 32-bit halves,
+ * exact), in place: from the last line down, each line's pattern less the one before it.
+ */
+function deltaBitsInPlace(values: Float64Array): Uint32Array {
+  const halves = new Uint32Array(values.buffer, values.byteOffset, 2 * values.length);
+  for (let i = values.length - 1; i >= 0; i--) {
+    const lo = i > 0 ? halves[2 * i - 2] : 0;
+    const hi = i > 0 ? halves[2 * i - 1] : 0;
     const l = halves[2 * i];
     const h = halves[2 * i + 1];
     const borrow = l < lo ? 1 : 0;
-    out[2 * i] = (l - lo) >>> 0;
-    out[2 * i + 1] = (h - hi - borrow) >>> 0;
-    lo = l;
-    hi = h;
+    halves[2 * i] = (l - lo) >>> 0;
+    halves[2 * i + 1] = (h - hi - borrow) >>> 0;
   }
-  return out;
+  return halves;
 }
 
 function undoDeltaBits(deltas: Uint32Array): void {
@@ -89,17 +81,36 @@ function undoDeltaBits(deltas: Uint32Array): void {
   }
 }
 
+/** Byte planes of `width`-byte items written straight into `out` (item i's byte b at b·count + i). */
+function planesInto(bytes: Uint8Array, width: number, out: Uint8Array): void {
+  const count = bytes.length / width;
+  for (let i = 0; i < count; i++) for (let b = 0; b < width; b++) out[b * count + i] = bytes[i * width + b];
+}
+
+/** Lines per storage chunk of a builder: columns grow a chunk at a time, never copied. */
+const chunkLines = 1 << 16;
+
+interface Chunk {
+  wavenumbers: Float64Array;
+  intensities: Float64Array;
+  groupOf: Uint16Array;
+  labelOf: Uint16Array;
+}
+
+/** The index file without its data, and the packed bytes the data encodes (see LineIndexBuilder.finishPacked). */
+export interface PackedLineIndex {
+  head: Omit<LineIndexFile, "data">;
+  packed: Uint8Array;
+}
+
 /**
  * Gathers an index's lines a few at a time (a build adds each batch of molecules and drops their
- * entries) in compact columns, about 24 bytes a line instead of a line object, and encodes them
+ * entries) in compact columns, 20 bytes a line in chunks that are never copied, and encodes them
  * all at the end exactly as if they had come in one list.
  */
 export class LineIndexBuilder {
   private n = 0;
-  private wavenumbers = new Float64Array(1024);
-  private intensities = new Float64Array(1024);
-  private groupOf = new Uint32Array(1024);
-  private labelOf = new Uint32Array(1024);
+  private chunks: Chunk[] = [];
   private groups: LineIndexFile["groups"] = [];
   private groupIds = new Map<string, number>();
   private labels: string[] = [];
@@ -116,6 +127,7 @@ export class LineIndexBuilder {
       let g = this.groupIds.get(key);
       if (g === undefined) {
         g = this.groups.length;
+        if (g > 0xffff) throw new Error("line index: more than 65536 bands of species at one temperature");
         // Every line of a group shares its band's factor: gas-relative = band-relative × factor.
         this.groups.push([line.molecule, line.species, line.band, pageOf(line), line.bandToGas]);
         this.groupIds.set(key, g);
@@ -123,29 +135,25 @@ export class LineIndexBuilder {
       let l = this.labelIds.get(line.label);
       if (l === undefined) {
         l = this.labels.length;
+        if (l > 0xffff) throw new Error("line index: more than 65536 line labels");
         this.labels.push(line.label);
         this.labelIds.set(line.label, l);
       }
-      if (this.n === this.wavenumbers.length) this.grow();
-      this.wavenumbers[this.n] = line.wavenumber;
-      this.intensities[this.n] = line.relativeIntensity;
-      this.groupOf[this.n] = g;
-      this.labelOf[this.n] = l;
+      const at = this.n & (chunkLines - 1);
+      if (at === 0)
+        this.chunks.push({
+          wavenumbers: new Float64Array(chunkLines),
+          intensities: new Float64Array(chunkLines),
+          groupOf: new Uint16Array(chunkLines),
+          labelOf: new Uint16Array(chunkLines),
+        });
+      const chunk = this.chunks[this.chunks.length - 1];
+      chunk.wavenumbers[at] = line.wavenumber;
+      chunk.intensities[at] = line.relativeIntensity;
+      chunk.groupOf[at] = g;
+      chunk.labelOf[at] = l;
       this.n++;
     }
-  }
-
-  private grow(): void {
-    const size = 2 * this.wavenumbers.length;
-    const bigger = <T extends Float64Array | Uint32Array>(old: T, make: (n: number) => T): T => {
-      const out = make(size);
-      out.set(old as never);
-      return out;
-    };
-    this.wavenumbers = bigger(this.wavenumbers, (k) => new Float64Array(k));
-    this.intensities = bigger(this.intensities, (k) => new Float64Array(k));
-    this.groupOf = bigger(this.groupOf, (k) => new Uint32Array(k));
-    this.labelOf = bigger(this.labelOf, (k) => new Uint32Array(k));
   }
 
   get count(): number {
@@ -157,53 +165,70 @@ export class LineIndexBuilder {
    * labels numbered in the order the sorted lines first use them.
    */
   finish(): LineIndexFile {
+    const { head, packed } = this.finishPacked();
+    return { ...head, data: toBase64(packed) };
+  }
+
+  /**
+   * finish() before its base64 step, so a writer can encode the data a piece at a time. The
+   * builder's columns are released: it cannot be finished twice.
+   */
+  finishPacked(): PackedLineIndex {
     const n = this.n;
-    const { wavenumbers: w, groups: g, labels: lb, groupOf, labelOf } = this;
-    const order = Array.from({ length: n }, (_, i) => i);
+    const { chunks, groups: g, labels: lb } = this;
+    this.chunks = [];
+    const col = <K extends keyof Chunk>(key: K, i: number): number => chunks[i >>> 16][key][i & (chunkLines - 1)];
+    const order = new Uint32Array(n);
+    for (let i = 0; i < n; i++) order[i] = i;
     order.sort((a, b) => {
-      const ga = g[groupOf[a]];
-      const gb = g[groupOf[b]];
+      const ga = g[col("groupOf", a)];
+      const gb = g[col("groupOf", b)];
       return (
-        w[a] - w[b] || ga[0].localeCompare(gb[0]) || ga[1].localeCompare(gb[1]) || ga[2].localeCompare(gb[2]) || lb[labelOf[a]].localeCompare(lb[labelOf[b]])
+        col("wavenumbers", a) - col("wavenumbers", b) ||
+        ga[0].localeCompare(gb[0]) ||
+        ga[1].localeCompare(gb[1]) ||
+        ga[2].localeCompare(gb[2]) ||
+        lb[col("labelOf", a)].localeCompare(lb[col("labelOf", b)])
       );
     });
     const groups: LineIndexFile["groups"] = [];
     const groupIds = new Map<number, number>();
     const labels: string[] = [];
     const labelIds = new Map<number, number>();
-    const buffer = new ArrayBuffer(n * lineIndexBytesPerLine);
-    const wavenumbers = new Float64Array(buffer, 0, n);
-    const intensities = new Float64Array(buffer, 8 * n, n);
-    const groupColumn = new Uint16Array(buffer, 16 * n, n);
-    const labelColumn = new Uint16Array(buffer, 18 * n, n);
-    order.forEach((from, i) => {
-      let group = groupIds.get(groupOf[from]);
+    const groupColumn = new Uint16Array(n);
+    const labelColumn = new Uint16Array(n);
+    for (let i = 0; i < n; i++) {
+      const from = order[i];
+      const fromGroup = col("groupOf", from);
+      let group = groupIds.get(fromGroup);
       if (group === undefined) {
         group = groups.length;
-        groups.push(g[groupOf[from]]);
-        groupIds.set(groupOf[from], group);
+        groups.push(g[fromGroup]);
+        groupIds.set(fromGroup, group);
       }
-      let label = labelIds.get(labelOf[from]);
+      const fromLabel = col("labelOf", from);
+      let label = labelIds.get(fromLabel);
       if (label === undefined) {
         label = labels.length;
-        labels.push(lb[labelOf[from]]);
-        labelIds.set(labelOf[from], label);
+        labels.push(lb[fromLabel]);
+        labelIds.set(fromLabel, label);
       }
-      if (group > 0xffff || label > 0xffff) throw new Error("line index: more than 65536 groups or labels");
-      wavenumbers[i] = w[from];
-      intensities[i] = this.intensities[from];
       groupColumn[i] = group;
       labelColumn[i] = label;
-    });
-    if (n > 0 && !(wavenumbers[0] > 0)) throw new Error("line index: wavenumbers must be positive");
+    }
     // Typed arrays use the platform's byte order; every browser and Node platform we target is
-    // little-endian, and decodeLineIndex refuses to run on any other.
+    // little-endian, and decodeLineIndex refuses to run on any other. One double column at a
+    // time is sorted, packed into its byte planes and dropped.
     const packed = new Uint8Array(n * lineIndexBytesPerLine);
-    packed.set(toPlanes(new Uint8Array(deltaBits(wavenumbers).buffer), 8), 0);
-    packed.set(toPlanes(new Uint8Array(buffer, 8 * n, 8 * n), 8), 8 * n);
-    packed.set(toPlanes(new Uint8Array(buffer, 16 * n, 2 * n), 2), 16 * n);
-    packed.set(toPlanes(new Uint8Array(buffer, 18 * n, 2 * n), 2), 18 * n);
-    return { format: lineIndexFormat, temperatureK: this.temperatureK, minRelative: this.minRelative, count: n, groups, labels, data: toBase64(packed) };
+    const sorted = new Float64Array(n);
+    for (let i = 0; i < n; i++) sorted[i] = col("wavenumbers", order[i]);
+    if (n > 0 && !(sorted[0] > 0)) throw new Error("line index: wavenumbers must be positive");
+    planesInto(new Uint8Array(deltaBitsInPlace(sorted).buffer), 8, packed.subarray(0, 8 * n));
+    for (let i = 0; i < n; i++) sorted[i] = col("intensities", order[i]);
+    planesInto(new Uint8Array(sorted.buffer), 8, packed.subarray(8 * n, 16 * n));
+    planesInto(new Uint8Array(groupColumn.buffer), 2, packed.subarray(16 * n, 18 * n));
+    planesInto(new Uint8Array(labelColumn.buffer), 2, packed.subarray(18 * n, 20 * n));
+    return { head: { format: lineIndexFormat, temperatureK: this.temperatureK, minRelative: this.minRelative, count: n, groups, labels }, packed };
   }
 }
 
