@@ -61,6 +61,8 @@ export interface CalibrationMarks {
   criteria: CalibrationCriteria;
   intensityScale: IntensityScale;
   broadeningTypical: boolean;
+  /** The cited pressure shift in the marked lines' centres at these conditions (0 where none is cited). */
+  pressureShift: { shiftCm: number; uncertaintyCm: number };
   notes: string[];
   byResolution: Array<{
     resolutionCm: number;
@@ -104,6 +106,7 @@ export function calibrationMarks(molecule: Molecule, conditions: CellConditions 
     criteria: defaultCalibrationCriteria,
     intensityScale: set.intensityScale,
     broadeningTypical: set.broadeningTypical,
+    pressureShift: { shiftCm: set.pressureShift.shiftCm, uncertaintyCm: set.pressureShift.uncertaintyCm },
     notes: set.notes,
     byResolution,
   };

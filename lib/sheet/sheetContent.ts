@@ -103,6 +103,9 @@ function calibrationMarksNote(marks: CalibrationMarks, entry: AtlasEntry, band: 
   const flags = [
     marks.broadeningTypical ? " Line widths use a typical (not measured) pressure-broadening coefficient." : "",
     marks.intensityScale !== "absolute" ? " No cited band intensity: an optically thin cell is assumed." : "",
+    marks.pressureShift.uncertaintyCm > 0
+      ? ` In this cell the cited pressure shift moves every centre by ${significant(marks.pressureShift.shiftCm, 2)} ± ${significant(marks.pressureShift.uncertaintyCm, 2)} cm⁻¹; the table gives zero-pressure positions.`
+      : "",
   ].join("");
   return (
     `Recommended for calibration (${criteriaPhrase(k)}) for ${calibrationConditionsText(marks)}; ` +
