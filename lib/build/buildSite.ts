@@ -1,5 +1,6 @@
 import { existsSync, mkdirSync, mkdtempSync, rmSync, cpSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
+import { tmpdir } from "node:os";
 import { fileURLToPath } from "node:url";
 import { atlasEntry, defaultFindMinRelative, entryLines, standardTemperaturesK, type AtlasEntry } from "../atlas/index.ts";
 import { linesCsv, linesDocument } from "../format/index.ts";
@@ -20,6 +21,7 @@ import { buildIdentity, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { checkInternalLinks } from "./checkLinks.ts";
 import { swapDirectory } from "./swapDirectory.ts";
 import { SiteWriter } from "./siteWriter.ts";
+import { fileChunkStore } from "./lineIndexSpill.ts";
 
 export const repoDir = fileURLToPath(new URL("../..", import.meta.url));
 
@@ -168,7 +170,11 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   let pageCount = 0;
   const sheets: string[] = [];
   // What outlives a batch: the small cross-molecule tables and each molecule's bench input.
-  const lineIndexes = new Map(standardTemperaturesK.map((t) => [t, new LineIndexBuilder(t, defaultFindMinRelative)]));
+  // The search index's full chunks wait in files outside the site until the index is written.
+  const spillDir = mkdtempSync(join(tmpdir(), "bandatlas-line-index-"));
+  const lineIndexes = new Map(
+    standardTemperaturesK.map((t) => [t, new LineIndexBuilder(t, defaultFindMinRelative, fileChunkStore(join(spillDir, `lines-${temperatureToken(t)}K.bin`)))]),
+  );
   const accuracy: SiteDataInput["accuracy"] = [];
   const nearInfrared: NearInfraredRow[] = [];
   const bench = new Map<string, BenchInput>();
@@ -282,6 +288,8 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       // The batch is done: the band errors cached on its species go, like its entries.
       for (const molecule of batch) for (const species of molecule.species) forgetBandErrors(species.model);
     }
+    // The workers have no more jobs: their memory goes before the whole-atlas part begins.
+    await workers.close();
     log(`atlas: ${entryCount} entries of ${molecules.length} molecules, in batches of ${perBatch}`);
     log(startBenchSheets ? `bench sheets: ${sheets.length} PDFs` : "bench sheets: not requested");
 
@@ -341,5 +349,6 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     throw error;
   } finally {
     await workers.close();
+    rmSync(spillDir, { recursive: true, force: true });
   }
 }

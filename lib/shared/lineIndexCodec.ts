@@ -90,11 +90,25 @@ function planesInto(bytes: Uint8Array, width: number, out: Uint8Array): void {
 /** Lines per storage chunk of a builder: columns grow a chunk at a time, never copied. */
 const chunkLines = 1 << 16;
 
-interface Chunk {
+/** One chunk of a builder's columns (chunkLines lines; the last may be part full). */
+export interface LineIndexChunk {
   wavenumbers: Float64Array;
   intensities: Float64Array;
   groupOf: Uint16Array;
   labelOf: Uint16Array;
+}
+type Chunk = LineIndexChunk;
+
+export const lineIndexChunkLines = chunkLines;
+
+/**
+ * Where a builder may put its full chunks until it is finished (a build keeps them in a file, so
+ * an atlas of thousands of molecules does not hold every temperature's lines in memory at once).
+ */
+export interface LineIndexChunkStore {
+  save(chunk: LineIndexChunk): void;
+  /** Every saved chunk, in the order saved. */
+  loadAll(): LineIndexChunk[];
 }
 
 /** The index file without its data, and the packed bytes the data encodes (see LineIndexBuilder.finishPacked). */
@@ -119,6 +133,8 @@ export class LineIndexBuilder {
   constructor(
     private readonly temperatureK: number,
     private readonly minRelative: number,
+    /** Where full chunks go until finish (default: kept in memory). */
+    private readonly store: LineIndexChunkStore | null = null,
   ) {}
 
   add(lines: readonly LocatedLine[], pageOf: (line: LocatedLine) => string): void {
@@ -140,6 +156,7 @@ export class LineIndexBuilder {
         this.labelIds.set(line.label, l);
       }
       const at = this.n & (chunkLines - 1);
+      if (at === 0 && this.store && this.chunks.length) this.store.save(this.chunks.pop()!);
       if (at === 0)
         this.chunks.push({
           wavenumbers: new Float64Array(chunkLines),
@@ -175,7 +192,8 @@ export class LineIndexBuilder {
    */
   finishPacked(): PackedLineIndex {
     const n = this.n;
-    const { chunks, groups: g, labels: lb } = this;
+    const { groups: g, labels: lb } = this;
+    const chunks = [...(this.store?.loadAll() ?? []), ...this.chunks];
     this.chunks = [];
     const col = <K extends keyof Chunk>(key: K, i: number): number => chunks[i >>> 16][key][i & (chunkLines - 1)];
     const order = new Uint32Array(n);
