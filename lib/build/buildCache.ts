@@ -24,19 +24,7 @@ export class BuildCache {
 
   /** The value of `kind` for this molecule, computed once per distinct molecule content. */
   forMolecule<T>(kind: string, molecule: Molecule, compute: () => T): T {
-    const key = this.key(kind, molecule);
-    const hit = this.values.get(key);
-    if (hit) {
-      hit.build = this.build;
-      this.counts.reused++;
-      return hit.value as T;
-    }
-    const value = compute();
-    this.counts.computed++;
-    this.values.set(key, { value, build: this.build });
-    // A failed computation is not remembered: the next build tries again.
-    if (value instanceof Promise) value.catch(() => this.values.delete(key));
-    return value;
+    return this.remember(this.key(kind, molecule), compute, true);
   }
 
   /**
@@ -44,14 +32,20 @@ export class BuildCache {
    * bundles: their sources load with the code). Not counted in lastBuild.
    */
   forSession<T>(kind: string, compute: () => T): T {
-    const key = `session\u0000${kind}`;
+    return this.remember(`session\u0000${kind}`, compute, false);
+  }
+
+  private remember<T>(key: string, compute: () => T, counted: boolean): T {
     const hit = this.values.get(key);
     if (hit) {
       hit.build = this.build;
+      if (counted) this.counts.reused++;
       return hit.value as T;
     }
     const value = compute();
+    if (counted) this.counts.computed++;
     this.values.set(key, { value, build: this.build });
+    // A failed computation is not remembered: the next build tries again.
     if (value instanceof Promise) value.catch(() => this.values.delete(key));
     return value;
   }

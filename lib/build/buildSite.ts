@@ -165,6 +165,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
   const work = mkdtempSync(join(dirname(outDir), ".site-build-"));
   // While serving, unchanged files are linked from the site being replaced (see SiteWriter).
   const site = new SiteWriter(work, cache && existsSync(outDir) ? outDir : null);
+  const writePage = (path: string, text: string) => site.write(path, text);
   const timings = { physicsMs: 0, plotsMs: 0, filesMs: 0, pagesMs: 0, sheetsMs: 0 };
   let entryCount = 0;
   let pageCount = 0;
@@ -271,14 +272,13 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
       }
       timings.filesMs += lap();
 
-      pageCount += cache
-        ? await renderKeptPages(cache, pagesKind, batch, entries, (stale, staleEntries, write) =>
-            runEleventy(work, siteData(siteInput(), { molecules: stale, entries: staleEntries, plots }), "molecules", { write }),
-          ).then((pages) => {
-            for (const [path, text] of pages) site.write(path, text);
-            return pages.length;
-          })
-        : await runEleventy(work, siteData(siteInput(), { molecules: batch, entries, plots }), "molecules");
+      if (cache) {
+        const pages = await renderKeptPages(cache, pagesKind, batch, entries, (stale, staleEntries, write) =>
+          runEleventy(work, siteData(siteInput(), { molecules: stale, entries: staleEntries, plots }), "molecules", { write }),
+        );
+        for (const [path, text] of pages) site.write(path, text);
+        pageCount += pages.length;
+      } else pageCount += await runEleventy(work, siteData(siteInput(), { molecules: batch, entries, plots }), "molecules", { write: writePage });
       timings.pagesMs += lap();
       if (sheetRun) {
         sheets.push(...(await sheetRun.finish()));
@@ -315,7 +315,7 @@ export async function buildSite(options: BuildOptions): Promise<BuildReport> {
     for (const asset of ["site.css", "favicon.svg"]) cpSync(join(contentDir, "assets", asset), join(work, "assets", asset));
     timings.filesMs += lap();
 
-    pageCount += await runEleventy(work, siteData(siteInput(), null), "site", { write: (path, text) => site.write(path, text) });
+    pageCount += await runEleventy(work, siteData(siteInput(), null), "site", { write: writePage });
     timings.pagesMs += lap();
     const links = checkInternalLinks(work);
     if (links.broken.length) {

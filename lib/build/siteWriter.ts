@@ -18,13 +18,19 @@ export class SiteWriter {
     private readonly previousRoot: string | null = null,
   ) {}
 
-  write(path: string, data: string | Uint8Array): void {
+  /** The file's full path, its folder made (once per folder). */
+  private target(path: string): string {
     const target = join(this.root, path);
     const dir = dirname(target);
     if (!this.made.has(dir)) {
       mkdirSync(dir, { recursive: true });
       this.made.add(dir);
     }
+    return target;
+  }
+
+  write(path: string, data: string | Uint8Array): void {
+    const target = this.target(path);
     if (this.previousRoot && this.linkIfSame(join(this.previousRoot, path), target, data)) {
       this.counts.linked++;
       return;
@@ -35,9 +41,7 @@ export class SiteWriter {
 
   /** A large file written piece by piece (never linked); returns its size in bytes. */
   writeParts(path: string, parts: Iterable<string | Uint8Array>): number {
-    const target = join(this.root, path);
-    mkdirSync(dirname(target), { recursive: true });
-    const fd = openSync(target, "w");
+    const fd = openSync(this.target(path), "w");
     let size = 0;
     try {
       for (const part of parts) {

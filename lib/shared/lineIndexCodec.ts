@@ -87,6 +87,22 @@ function planesInto(bytes: Uint8Array, width: number, out: Uint8Array): void {
   for (let i = 0; i < count; i++) for (let b = 0; b < width; b++) out[b * count + i] = bytes[i * width + b];
 }
 
+/** Numbers distinct keys 0, 1, 2 … in the order they are first seen, keeping a value for each. */
+class FirstSeenNumbering<K, V> {
+  readonly values: V[] = [];
+  private ids = new Map<K, number>();
+
+  id(key: K, value: () => V): number {
+    let id = this.ids.get(key);
+    if (id === undefined) {
+      id = this.values.length;
+      this.values.push(value());
+      this.ids.set(key, id);
+    }
+    return id;
+  }
+}
+
 /** Lines per storage chunk of a builder: columns grow a chunk at a time, never copied. */
 const chunkLines = 1 << 16;
 
@@ -125,10 +141,8 @@ export interface PackedLineIndex {
 export class LineIndexBuilder {
   private n = 0;
   private chunks: Chunk[] = [];
-  private groups: LineIndexFile["groups"] = [];
-  private groupIds = new Map<string, number>();
-  private labels: string[] = [];
-  private labelIds = new Map<string, number>();
+  private groups = new FirstSeenNumbering<string, LineIndexFile["groups"][number]>();
+  private labels = new FirstSeenNumbering<string, string>();
 
   constructor(
     private readonly temperatureK: number,
@@ -139,22 +153,17 @@ export class LineIndexBuilder {
 
   add(lines: readonly LocatedLine[], pageOf: (line: LocatedLine) => string): void {
     for (const line of lines) {
-      const key = `${line.molecule}\u0000${line.species}\u0000${line.band}`;
-      let g = this.groupIds.get(key);
-      if (g === undefined) {
-        g = this.groups.length;
-        if (g > 0xffff) throw new Error("line index: more than 65536 bands of species at one temperature");
-        // Every line of a group shares its band's factor: gas-relative = band-relative × factor.
-        this.groups.push([line.molecule, line.species, line.band, pageOf(line), line.bandToGas]);
-        this.groupIds.set(key, g);
-      }
-      let l = this.labelIds.get(line.label);
-      if (l === undefined) {
-        l = this.labels.length;
-        if (l > 0xffff) throw new Error("line index: more than 65536 line labels");
-        this.labels.push(line.label);
-        this.labelIds.set(line.label, l);
-      }
+      // Every line of a group shares its band's factor: gas-relative = band-relative × factor.
+      const g = this.groups.id(`${line.molecule}\u0000${line.species}\u0000${line.band}`, () => [
+        line.molecule,
+        line.species,
+        line.band,
+        pageOf(line),
+        line.bandToGas,
+      ]);
+      if (g > 0xffff) throw new Error("line index: more than 65536 bands of species at one temperature");
+      const l = this.labels.id(line.label, () => line.label);
+      if (l > 0xffff) throw new Error("line index: more than 65536 line labels");
       const at = this.n & (chunkLines - 1);
       if (at === 0 && this.store && this.chunks.length) this.store.save(this.chunks.pop()!);
       if (at === 0)
@@ -192,7 +201,8 @@ export class LineIndexBuilder {
    */
   finishPacked(): PackedLineIndex {
     const n = this.n;
-    const { groups: g, labels: lb } = this;
+    const g = this.groups.values;
+    const lb = this.labels.values;
     const chunks = [...(this.store?.loadAll() ?? []), ...this.chunks];
     this.chunks = [];
     const col = <K extends keyof Chunk>(key: K, i: number): number => chunks[i >>> 16][key][i & (chunkLines - 1)];
@@ -209,30 +219,16 @@ export class LineIndexBuilder {
         lb[col("labelOf", a)].localeCompare(lb[col("labelOf", b)])
       );
     });
-    const groups: LineIndexFile["groups"] = [];
-    const groupIds = new Map<number, number>();
-    const labels: string[] = [];
-    const labelIds = new Map<number, number>();
+    // Groups and labels numbered again, in the order the sorted lines first use them.
+    const groups = new FirstSeenNumbering<number, LineIndexFile["groups"][number]>();
+    const labels = new FirstSeenNumbering<number, string>();
     const groupColumn = new Uint16Array(n);
     const labelColumn = new Uint16Array(n);
     for (let i = 0; i < n; i++) {
-      const from = order[i];
-      const fromGroup = col("groupOf", from);
-      let group = groupIds.get(fromGroup);
-      if (group === undefined) {
-        group = groups.length;
-        groups.push(g[fromGroup]);
-        groupIds.set(fromGroup, group);
-      }
-      const fromLabel = col("labelOf", from);
-      let label = labelIds.get(fromLabel);
-      if (label === undefined) {
-        label = labels.length;
-        labels.push(lb[fromLabel]);
-        labelIds.set(fromLabel, label);
-      }
-      groupColumn[i] = group;
-      labelColumn[i] = label;
+      const fromGroup = col("groupOf", order[i]);
+      const fromLabel = col("labelOf", order[i]);
+      groupColumn[i] = groups.id(fromGroup, () => g[fromGroup]);
+      labelColumn[i] = labels.id(fromLabel, () => lb[fromLabel]);
     }
     // Typed arrays use the platform's byte order; every browser and Node platform we target is
     // little-endian, and decodeLineIndex refuses to run on any other. One double column at a
@@ -246,7 +242,10 @@ export class LineIndexBuilder {
     planesInto(new Uint8Array(sorted.buffer), 8, packed.subarray(8 * n, 16 * n));
     planesInto(new Uint8Array(groupColumn.buffer), 2, packed.subarray(16 * n, 18 * n));
     planesInto(new Uint8Array(labelColumn.buffer), 2, packed.subarray(18 * n, 20 * n));
-    return { head: { format: lineIndexFormat, temperatureK: this.temperatureK, minRelative: this.minRelative, count: n, groups, labels }, packed };
+    return {
+      head: { format: lineIndexFormat, temperatureK: this.temperatureK, minRelative: this.minRelative, count: n, groups: groups.values, labels: labels.values },
+      packed,
+    };
   }
 }
 

@@ -1,5 +1,5 @@
-import { mkdirSync, readdirSync, writeFileSync } from "node:fs";
-import { dirname, join, relative, resolve, sep } from "node:path";
+import { readdirSync } from "node:fs";
+import { join, relative, resolve, sep } from "node:path";
 import { fileURLToPath } from "node:url";
 import Eleventy from "@11ty/eleventy";
 import eleventyConfig from "../../eleventy.config.ts";
@@ -26,9 +26,9 @@ export const speciesPagesPerRun = 250;
  * "molecules" renders the batch's molecule, species and bench pages (the species pages in parts
  * of speciesPagesPerRun), "site" every other page.
  */
-export async function runEleventy(outDir: string, data: SiteData, pages: "molecules" | "site", options: RunOptions = {}): Promise<number> {
+export async function runEleventy(outDir: string, data: SiteData, pages: "molecules" | "site", options: RunOptions): Promise<number> {
   const perRun = Math.max(1, options.speciesPagesPerRun ?? speciesPagesPerRun);
-  const write = options.write ?? writePage(outDir);
+  const write = options.write;
   const { speciesPageViews, ...rest } = data;
   const templates = readdirSync(contentDir).filter((f) => /\.(njk|md)$/.test(f));
   if (pages === "site") return runOnce(outDir, { ...rest, speciesPages: [] }, moleculeTemplates, write);
@@ -45,16 +45,8 @@ export async function runEleventy(outDir: string, data: SiteData, pages: "molecu
 
 export interface RunOptions {
   speciesPagesPerRun?: number;
-  /** Where each rendered page goes, by its path relative to outDir (default: written there). */
-  write?: (path: string, content: string) => void;
-}
-
-function writePage(outDir: string) {
-  return (path: string, content: string) => {
-    const target = join(outDir, path);
-    mkdirSync(dirname(target), { recursive: true });
-    writeFileSync(target, content);
-  };
+  /** Where each rendered page goes, by its path relative to outDir. */
+  write: (path: string, content: string) => void;
 }
 
 async function runOnce(outDir: string, data: PageData, ignored: readonly string[], write: (path: string, content: string) => void): Promise<number> {
