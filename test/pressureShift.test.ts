@@ -16,12 +16,12 @@ const pmPerKpaToCmPerAtm = (pmPerKpa: number, wavenumberCm: number) => -(wavenum
 describe("line centre shift", () => {
   const shift: GasPressureShift = { self: { cmPerAtm: -0.01, uncertaintyCmPerAtm: 0.004, sourceKey: "invented" }, air: null };
   it("is linear in the partial pressure of each perturber, and names the perturbers without a cited shift", () => {
-    expect(lineCentreShift(shift, standardAtmospherePa, 1)).toEqual({ shiftCm: -0.01, uncertaintyCm: 0.004, uncited: [] });
+    expect(lineCentreShift(shift, standardAtmospherePa, 1)).toEqual({ shiftCm: -0.01, uncertaintyCm: 0.004, uncited: [], sourceKeys: ["invented"] });
     const mixed = lineCentreShift(shift, 2 * standardAtmospherePa, 0.25);
     expect(mixed.shiftCm).toBeCloseTo(-0.005, 12);
     expect(mixed.uncertaintyCm).toBeCloseTo(0.002, 12);
     expect(mixed.uncited).toEqual(["air"]);
-    expect(lineCentreShift({ self: null, air: null }, standardAtmospherePa, 1)).toEqual({ shiftCm: 0, uncertaintyCm: 0, uncited: ["self"] });
+    expect(lineCentreShift({ self: null, air: null }, standardAtmospherePa, 1)).toEqual({ shiftCm: 0, uncertaintyCm: 0, uncited: ["self"], sourceKeys: [] });
   });
 });
 
@@ -62,7 +62,8 @@ describe("acetylene self shift against its source", () => {
     expect(high.pressureShift.shiftCm).toBe(printed(expected(50)));
     expect(low.pressureShift.shiftCm).toBe(printed(expected(1)));
     expect(high.pressureShift.uncertaintyCm).toBe(printed((self.uncertaintyCmPerAtm * 50) / 760));
-    expect(high.notes.join(" ")).toMatch(/include the cited pressure shift/);
+    expect(high.notes.join(" ")).toMatch(/include the pressure shift cited in \[swann2000\]/);
+    expect(high.pressureShift.sources).toEqual(["swann2000"]);
     expect(high.lines.length).toBeGreaterThan(10);
     for (const l of high.lines) {
       const zero = at(l.label);
@@ -77,7 +78,7 @@ describe("acetylene self shift against its source", () => {
 
   it("a gas without a cited shift says its centres are zero-pressure positions", async () => {
     const doc = JSON.parse((await runCli(["calibration-lines", "co", "--resolution", "0.125", "--format", "json"])).stdout);
-    expect(doc.pressureShift).toEqual({ shiftCm: 0, uncertaintyCm: 0, notCitedFor: ["self"] });
+    expect(doc.pressureShift).toEqual({ shiftCm: 0, uncertaintyCm: 0, notCitedFor: ["self"], sources: [] });
     expect(doc.notes.join(" ")).toMatch(/zero-pressure positions: no pressure shift is cited for the gas itself/);
   });
 });

@@ -62,7 +62,7 @@ export interface CalibrationMarks {
   intensityScale: IntensityScale;
   broadeningTypical: boolean;
   /** The cited pressure shift in the marked lines' centres at these conditions (0 where none is cited). */
-  pressureShift: { shiftCm: number; uncertaintyCm: number };
+  pressureShift: { shiftCm: number; uncertaintyCm: number; sourceKeys: string[] };
   notes: string[];
   byResolution: Array<{
     resolutionCm: number;
@@ -106,7 +106,7 @@ export function calibrationMarks(molecule: Molecule, conditions: CellConditions 
     criteria: defaultCalibrationCriteria,
     intensityScale: set.intensityScale,
     broadeningTypical: set.broadeningTypical,
-    pressureShift: { shiftCm: set.pressureShift.shiftCm, uncertaintyCm: set.pressureShift.uncertaintyCm },
+    pressureShift: { shiftCm: set.pressureShift.shiftCm, uncertaintyCm: set.pressureShift.uncertaintyCm, sourceKeys: set.pressureShift.sourceKeys },
     notes: set.notes,
     byResolution,
   };

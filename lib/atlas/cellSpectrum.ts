@@ -180,7 +180,7 @@ export function pressureShiftNote(shift: ReturnType<typeof lineCentreShift>): st
   if (shift.shiftCm === 0 && shift.uncertaintyCm === 0)
     return `Line centres are zero-pressure positions: no pressure shift is cited for ${shift.uncited.map((w) => (w === "self" ? "the gas itself" : "air")).join(" or ")}, so none is applied.`;
   return (
-    `Line centres include the cited pressure shift at this pressure, ${formatShift(shift.shiftCm)} ± ${formatShift(shift.uncertaintyCm, false)} cm⁻¹, its ± added to every position's` +
+    `Line centres include the pressure shift cited in ${shift.sourceKeys.map((k) => `[${k}]`).join(", ")} at this pressure, ${formatShift(shift.shiftCm)} ± ${formatShift(shift.uncertaintyCm, false)} cm⁻¹, its ± added to every position's` +
     (uncited ? `; ${uncited}.` : ".")
   );
 }

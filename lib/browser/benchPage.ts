@@ -125,7 +125,7 @@ function setup(page: HTMLElement, model: CellModel) {
       commands.spectrum + (c.set.intensityScale === "absolute" ? " --format csv" : " --relative --format csv");
     document.getElementById("bench-cli-calibration")!.textContent = commands.calibration;
     status.replaceChildren(
-      `Computed in ${Math.round(c.ms)} ms in your browser: ${c.set.lines.length} lines of ${c.set.bandsUsed.length} bands, ${s.windowLast - s.windowFirst + 1} points at ${s.grid.stepCm.toPrecision(3)} cm⁻¹.`,
+      `Computed in ${Math.round(c.ms)} ms in your browser: ${c.set.lines.length} lines of ${c.set.bandsUsed.length} band${c.set.bandsUsed.length === 1 ? "" : "s"}, ${s.windowLast - s.windowFirst + 1} points at ${s.grid.stepCm.toPrecision(3)} cm⁻¹.`,
     );
     status.classList.remove("error");
     page.dataset.state = "ready";

@@ -28,6 +28,8 @@ export interface LineCentreShift {
   uncertaintyCm: WavenumberCm;
   /** Perturbers present in the cell whose shift is not cited, so not in shiftCm. */
   uncited: Array<"self" | "air">;
+  /** Source keys of the shifts applied. */
+  sourceKeys: string[];
 }
 
 /**
@@ -42,6 +44,7 @@ export function lineCentreShift(shift: GasPressureShift, totalPressurePa: number
   let shiftCm = 0;
   let uncertaintyCm = 0;
   const uncited: LineCentreShift["uncited"] = [];
+  const sourceKeys: string[] = [];
   for (const [which, fraction] of [
     ["self", moleFraction],
     ["air", 1 - moleFraction],
@@ -54,6 +57,7 @@ export function lineCentreShift(shift: GasPressureShift, totalPressurePa: number
     }
     shiftCm += pAtm * fraction * c.cmPerAtm;
     uncertaintyCm += pAtm * fraction * c.uncertaintyCmPerAtm;
+    if (!sourceKeys.includes(c.sourceKey)) sourceKeys.push(c.sourceKey);
   }
-  return { shiftCm, uncertaintyCm, uncited };
+  return { shiftCm, uncertaintyCm, uncited, sourceKeys };
 }

@@ -15,11 +15,13 @@ export const calibrationWavenumberDigits = (v: number): string => fixed(v, 4);
 export const peakShiftDigits = (v: number | null): string => (v === null ? "" : fixed(v, 4) === "-0.0000" ? "0.0000" : fixed(v, 4));
 
 /** The pressure shift in a cell's line centres, as the JSON outputs give it (two significant figures). */
-export function pressureShiftRecord(shift: { shiftCm: number; uncertaintyCm: number; uncited: string[] }) {
+export function pressureShiftRecord(shift: { shiftCm: number; uncertaintyCm: number; uncited: string[]; sourceKeys: string[] }) {
   return {
     shiftCm: Number(shift.shiftCm.toPrecision(2)),
     uncertaintyCm: Number(shift.uncertaintyCm.toPrecision(2)),
     /** Perturbers in the cell with no cited shift (none applied for them). */
     notCitedFor: [...shift.uncited],
+    /** Molecule-file source keys of the shifts applied. */
+    sources: [...shift.sourceKeys],
   };
 }

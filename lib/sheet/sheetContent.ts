@@ -104,7 +104,7 @@ function calibrationMarksNote(marks: CalibrationMarks, entry: AtlasEntry, band: 
     marks.broadeningTypical ? " Line widths use a typical (not measured) pressure-broadening coefficient." : "",
     marks.intensityScale !== "absolute" ? " No cited band intensity: an optically thin cell is assumed." : "",
     marks.pressureShift.uncertaintyCm > 0
-      ? ` In this cell the cited pressure shift moves every centre by ${significant(marks.pressureShift.shiftCm, 2)} ± ${significant(marks.pressureShift.uncertaintyCm, 2)} cm⁻¹; the table gives zero-pressure positions.`
+      ? ` In this cell the pressure shift cited in ${marks.pressureShift.sourceKeys.map((k) => `[${k}]`).join(", ")} moves every centre by ${significant(marks.pressureShift.shiftCm, 2)} ± ${significant(marks.pressureShift.uncertaintyCm, 2)} cm⁻¹; the table gives zero-pressure positions.`
       : "",
   ].join("");
   return (
@@ -149,6 +149,8 @@ function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number, 
   if (model.crossCheckSourceKey) add(model.crossCheckSourceKey, "cross-check of the constants");
   for (const i of model.intensities) if (sameBand(i.band, band)) add(i.sourceKey, "intensities");
   for (const r of entry.residuals) add(r.reference.sourceKey, "measured lines");
+  for (const c of [molecule.broadening?.self, molecule.broadening?.air]) if (c?.origin === "cited") add(c.sourceKey, "pressure broadening");
+  for (const c of [molecule.pressureShift?.self, molecule.pressureShift?.air]) if (c) add(c.sourceKey, "pressure shift");
   return [...roles.entries()].map(([key, list]) => {
     const source = molecule.sources.find((s) => s.key === key);
     const link = safeLink(source?.url);
