@@ -23,8 +23,14 @@ export const cellOptionSpec: OptionSpec = {
   molecules: { type: "string" },
 };
 
+const unitList = (units: Readonly<Record<string, number>>) => {
+  const names = Object.keys(units);
+  return `${names.slice(0, -1).join(", ")} or ${names.at(-1)}`;
+};
+
 export const cellConditionsHelp = `  --temperature <K>       gas temperature (default 296 K)
-  --pressure <p unit>     total pressure: Pa, kPa, hPa, mbar, Torr or atm, e.g. "20 Torr" (default 20 Torr)
+  --pressure <p unit>     total pressure, e.g. "20 Torr" (default 20 Torr), in
+                          ${unitList(pressureUnitsPa)}
   --path <l unit>         cell path length: m, cm or mm, e.g. "10 cm" (default 10 cm)
   --mole-fraction <x>     fraction of the gas in the cell, the rest air (default 1)`;
 
@@ -35,10 +41,6 @@ export const cellOptionsHelp = `${cellConditionsHelp}
   --apodization <name>    FT only: ${apodizations.join(", ")} (default triangular)
   --from <cm⁻¹> --to <cm⁻¹>  wavenumber range
   --molecules <dir>       read molecule files from <dir> instead of the shipped ones`;
-
-const lowerCaseKeys = (units: Readonly<Record<string, number>>) => Object.fromEntries(Object.entries(units).map(([k, v]) => [k.toLowerCase(), v]));
-const pressureUnits = lowerCaseKeys(pressureUnitsPa);
-const lengthUnits = lowerCaseKeys(lengthUnitsCm);
 
 /** "--pressure 20 Torr" arrives as two words: join a unit word to the number before it. */
 export function joinUnitWords(args: string[]): string[] {
@@ -61,32 +63,27 @@ export function joinUnitWords(args: string[]): string[] {
   return out;
 }
 
-function quantity(name: string, text: string, units: Record<string, number>, example: string): number {
+function quantity(name: string, text: string, units: Readonly<Record<string, number>>, example: string): number {
   const match = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:e[-+]?\d+)?)\s*([a-zA-Z]+)\s*$/i.exec(text);
   if (!match) throw new UsageError(`--${name} "${text}": give a number and a unit, e.g. ${example} (units: ${Object.keys(units).join(", ")})`);
-  const unit = match[2].toLowerCase();
-  const factor = units[unit];
-  if (factor === undefined)
-    throw new UsageError(
-      `--${name} "${text}": unknown unit "${match[2]}"; use one of: ${Object.keys(units)
-        .map((u) => (u === "torr" ? "Torr" : u === "kpa" ? "kPa" : u === "hpa" ? "hPa" : u === "pa" ? "Pa" : u))
-        .join(", ")}`,
-    );
-  const value = Number(match[1]) * factor;
+  // Any case is accepted ("torr", "MBAR"); messages name the units as they are written.
+  const unit = Object.keys(units).find((u) => u.toLowerCase() === match[2].toLowerCase());
+  if (unit === undefined) throw new UsageError(`--${name} "${text}": unknown unit "${match[2]}"; use one of: ${Object.keys(units).join(", ")}`);
+  const value = Number(match[1]) * units[unit];
   if (!(value > 0) || !Number.isFinite(value)) throw new UsageError(`--${name} "${text}": must be above 0`);
   return value;
 }
 
 export function pressureOptionPa(text: string | undefined): number {
   if (text === undefined) return defaultCellConditions.pressurePa;
-  const pa = quantity("pressure", text, pressureUnits, `"20 Torr" or "2.5 kPa"`);
+  const pa = quantity("pressure", text, pressureUnitsPa, `"20 Torr" or "2.5 kPa"`);
   if (pa > maxCellPressurePa) throw new UsageError(`--pressure ${text}: above 100 atm the ideal-gas and Voigt models mean nothing`);
   return pa;
 }
 
 export function pathOptionCm(text: string | undefined): number {
   if (text === undefined) return defaultCellConditions.pathCm;
-  return quantity("path", text, lengthUnits, `"10 cm" or "1.5 m"`);
+  return quantity("path", text, lengthUnitsCm, `"10 cm" or "1.5 m"`);
 }
 
 export function cellConditionsFromOptions(values: Record<string, string | boolean | undefined>): CellConditions {
