@@ -1,14 +1,17 @@
 import {
+  bandLabel,
   calibrationCandidates,
   calibrationLines,
   calibrationLinesOf,
   defaultCalibrationCriteria,
+  type AbsorbingLine,
   type CalibrationCriteria,
   type CalibrationLine,
   type CellConditions,
   type IntensityScale,
 } from "../core/index.ts";
 import type { Molecule } from "../molecules/index.ts";
+import { speciesBands } from "./moleculeBands.ts";
 import {
   calibrationApodization,
   calibrationResolutionsCm,
@@ -20,17 +23,42 @@ import {
   type MoleculeCellSpectrum,
 } from "./cellSpectrum.ts";
 
+/**
+ * From the lowest to the highest of the lines at least \`fraction\` of the strongest among them,
+ * plus a margin (5 resolutions, at least 2 cm⁻¹, so the outermost lines' instrument wings are in).
+ */
+function strongLinesRange(lines: readonly AbsorbingLine[], fraction: number, resolutionCm: number): { fromCm: number; toCm: number } {
+  let strongest = 0;
+  for (const l of lines) if (l.intensity > strongest) strongest = l.intensity;
+  const strong = lines.filter((l) => l.intensity >= fraction * strongest).map((l) => l.wavenumber);
+  const margin = Math.max(5 * resolutionCm, 2);
+  return { fromCm: Math.max(1, Math.min(...strong) - margin), toCm: Math.max(...strong) + margin };
+}
+
 /** The range worth computing for calibration lines: the strong lines of the gas, plus a margin. */
 export function calibrationRange(
   set: CellLineSet,
   resolutionCm: number,
   criteria: CalibrationCriteria = defaultCalibrationCriteria,
 ): { fromCm: number; toCm: number } {
-  let strongest = 0;
-  for (const l of set.lines) if (l.intensity > strongest) strongest = l.intensity;
-  const strong = set.lines.filter((l) => l.intensity >= criteria.strongFraction * strongest).map((l) => l.wavenumber);
-  const margin = Math.max(5 * resolutionCm, 2);
-  return { fromCm: Math.max(1, Math.min(...strong) - margin), toCm: Math.max(...strong) + margin };
+  return strongLinesRange(set.lines, criteria.strongFraction, resolutionCm);
+}
+
+/**
+ * Lines at least this fraction of their band's strongest bound \`spectrum\`'s default range: the
+ * band with its visible wings (a 1 % line is a clear dip in a cell whose strongest lines are deep).
+ */
+export const spectrumRangeFraction = 0.01;
+
+/**
+ * \`bandatlas spectrum\`'s range when none is given: the principal band (the reference species'
+ * first band: a diatomic's fundamental), every species' lines of it down to spectrumRangeFraction
+ * of its strongest, plus the margin. Overtones and other bands are asked for with --from/--to.
+ */
+export function spectrumRange(molecule: Molecule, set: CellLineSet, resolutionCm: number): { fromCm: number; toCm: number } {
+  const principal = bandLabel(speciesBands(molecule.species[0])[0].band);
+  const lines = set.lines.filter((l) => l.band === principal);
+  return strongLinesRange(lines.length ? lines : set.lines, spectrumRangeFraction, resolutionCm);
 }
 
 export interface MoleculeCalibrationLines extends MoleculeCellSpectrum {

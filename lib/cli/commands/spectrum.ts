@@ -1,4 +1,4 @@
-import { moleculeCellSpectrum } from "../../atlas/index.ts";
+import { cellLineSet, moleculeCellSpectrum, spectrumRange, spectrumRangeFraction } from "../../atlas/index.ts";
 import { relativeThinAbsorbance } from "../../core/index.ts";
 import {
   allGasesCaution,
@@ -24,12 +24,15 @@ import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine } from "../options.ts";
 import { UsageError } from "../usageError.ts";
 
-export const spectrumHelp = `bandatlas spectrum <molecule> --from <cm⁻¹> --to <cm⁻¹> [options]
+export const spectrumHelp = `bandatlas spectrum <molecule> [--from <cm⁻¹> --to <cm⁻¹>] [options]
 
 Predicted transmittance of a gas cell as an instrument of the given resolution shows it:
 all species at natural abundance, every band with intensity data, Voigt line shapes.
 
 ${cellOptionsHelp}
+                          (default: the principal band, e.g. CO 1-0: its lines of every
+                          species down to ${spectrumRangeFraction} of its strongest, plus 5 resolutions,
+                          at least 2 cm⁻¹, on each side; JSON says so under rangeCm)
   --step <cm⁻¹>           spacing of the printed samples (default: resolution/10)
   --relative              for a molecule without a cited band intensity: print the relative,
                           optically thin apparent absorbance instead of refusing
@@ -46,15 +49,26 @@ export function runSpectrum(args: string[]): string {
     1,
   );
   if (values.help) return spectrumHelp + "\n";
-  if (positionals.length === 0) throw new UsageError("which molecule? e.g. `bandatlas spectrum co --from 2000 --to 2250` (see bandatlas spectrum --help)");
+  if (positionals.length === 0)
+    throw new UsageError("which molecule? e.g. `bandatlas spectrum co` or `bandatlas spectrum co --from 2000 --to 2250` (see bandatlas spectrum --help)");
   const format = formatOption(values.format as string | undefined, ["csv", "json"]);
   const conditions = cellConditionsFromOptions(values);
   const instrument = instrumentFromOptions(values, 0.5);
-  const { fromCm, toCm } = rangeFromOptions(values);
-  if (fromCm === undefined || toCm === undefined) throw new UsageError("give the range with --from and --to (cm⁻¹), e.g. --from 2000 --to 2250");
-  if (toCm - fromCm > 2000) throw new UsageError(`--from ${fromCm} --to ${toCm}: at most 2000 cm⁻¹ at a time`);
+  const given = rangeFromOptions(values);
   const molecule = loadOneMolecule(moleculesDir(values.molecules as string | undefined), positionals[0]);
-  const { set, spectrum } = moleculeCellSpectrum(molecule, { conditions, fromCm, toCm, instrument });
+  const lineSet = cellLineSet(molecule, conditions);
+  // Without --from/--to the band itself is shown: the first question is what the cell looks like.
+  const band = spectrumRange(molecule, lineSet, instrument.kind === "monochromatic" ? 0 : instrument.resolutionCm);
+  const fromCm = given.fromCm ?? band.fromCm;
+  const toCm = given.toCm ?? band.toCm;
+  if (!(toCm > fromCm))
+    throw new UsageError(
+      `--${given.fromCm === undefined ? "to" : "from"} ${given.fromCm ?? given.toCm}: the range would be ${fromCm.toFixed(1)} to ${toCm.toFixed(1)} cm⁻¹ (the other end is the band's); give both --from and --to`,
+    );
+  if (toCm - fromCm > 2000) throw new UsageError(`--from ${fromCm} --to ${toCm}: at most 2000 cm⁻¹ at a time`);
+  // Which ends came from the principal band because no --from/--to gave them.
+  const rangeCm = { from: fromCm, to: toCm, endsFromBand: [...(given.fromCm === undefined ? ["from"] : []), ...(given.toCm === undefined ? ["to"] : [])] };
+  const { set, spectrum } = moleculeCellSpectrum(molecule, { conditions, fromCm, toCm, instrument }, lineSet);
   if (set.intensityScale === "relative-thin" && !values.relative) {
     throw new UsageError(
       `${molecule.name} has no cited band intensity, so its transmittance cannot be predicted; add a cited intensity block to ${molecule.id}.yaml, or use --relative for the relative optically thin absorbance`,
@@ -78,6 +92,7 @@ export function runSpectrum(args: string[]): string {
             molecule: molecule.id,
             intensityScale: set.intensityScale,
             settings: describeConditions(conditions, instrument),
+            rangeCm,
             notes: set.notes,
             caution: moleculeCaution(molecule),
             samples: indices.map((i) => ({ wavenumber: Number(spectrumWavenumberDigits(nu(i))), relativeAbsorbance: Number(transmittanceDigits(rel(i))) })),
@@ -105,6 +120,7 @@ export function runSpectrum(args: string[]): string {
           intensityScale: set.intensityScale,
           conditions: { ...conditions },
           instrument,
+          rangeCm,
           settings: describeConditions(conditions, instrument),
           bandsUsed: set.bandsUsed,
           bandsLeftOut: set.bandsLeftOut,
