@@ -7,3 +7,4 @@ export * from "./cellSpectrum.ts";
 export * from "./cellUnits.ts";
 export * from "./calibrationMarks.ts";
 export * from "./measuredCalibration.ts";
+export * from "./atlasFind.ts";

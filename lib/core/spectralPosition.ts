@@ -25,11 +25,26 @@ const unitWords: Record<string, PositionUnit> = {
 };
 
 /**
+ * A decimal comma, as many locales write numbers ("2143,3"), read as a point when that is the only
+ * reading: one comma, no point, and not exactly three digits after it, which could as well be a
+ * thousands separator ("2,143") — that, and any other comma, is refused with the number to write.
+ */
+function withDecimalPoint(text: string): string {
+  if (!text.includes(",")) return text;
+  const decimal = /^(\s*[+]?\d+),(\d+)(?![\d.,])(.*)$/.exec(text);
+  if (decimal && decimal[2].length !== 3) return `${decimal[1]}.${decimal[2]}${decimal[3]}`;
+  const hint = decimal
+    ? `is the comma a decimal comma (${decimal[1].trim()}.${decimal[2]}) or a thousands separator (${decimal[1].trim()}${decimal[2]})? Write the number with a decimal point and no separator`
+    : "write the number with a decimal point and no separators, e.g. 2143.3";
+  throw new CoreInputError(`"${text.trim()}": ${hint}`);
+}
+
+/**
  * "2143.3", "2143.3 cm-1", "1532.83 nm", "1.53283um": the number and its unit (a unit word after
  * the number wins over `defaultUnit`). Wavelengths are vacuum unless `medium` says air.
  */
 export function parseSpectralPosition(text: string, defaultUnit: PositionUnit = "cm-1", medium: Medium = "vacuum"): SpectralPosition {
-  const match = /^\s*([+]?\d+(?:\.\d*)?(?:[eE][+-]?\d+)?|[+]?\.\d+(?:[eE][+-]?\d+)?)\s*([^\s\d].*?)?\s*$/.exec(text);
+  const match = /^\s*([+]?\d+(?:\.\d*)?(?:[eE][+-]?\d+)?|[+]?\.\d+(?:[eE][+-]?\d+)?)\s*([^\s\d].*?)?\s*$/.exec(withDecimalPoint(text));
   if (!match) throw new CoreInputError(`"${text}" is not a position: give a number with an optional unit, e.g. 2143.3, 2143.3 cm-1, 1532.83 nm or 1.5328 um`);
   const unitText = match[2]?.toLowerCase();
   const unit = unitText === undefined ? defaultUnit : unitWords[unitText];

@@ -1,5 +1,7 @@
 import type { NearbyLine } from "../core/index.ts";
+import type { EmptyFindHints, InterfererRegion, NeighbourLine } from "../atlas/index.ts";
 import { fixed, significant } from "./numbers.ts";
+import { withUncertainty } from "./spectrumCalibrationText.ts";
 
 // The words and cells of a position search, the same in `bandatlas find` and the website.
 
@@ -28,4 +30,43 @@ export function findUnsourcedNote(matches: readonly NearbyLine[]): string | null
   return matches.some((m) => m.gasRelativeIntensity === null)
     ? "n/a: no cited intensity ties this band's strength to the rest of its gas; it is kept and judged by its own band's strongest line."
     : null;
+}
+
+const range = (r: InterfererRegion) => `${r.band} ${r.fromCm}–${r.toCm}`;
+const at = (value: number, sigma: number | null) => {
+  if (sigma === null) return `${fixed(value, 2)} cm⁻¹`;
+  const w = withUncertainty(value, sigma);
+  return `${w.value} ± ${w.sigma} cm⁻¹`;
+};
+const away = (offset: number) => `${significant(Math.abs(offset), 3)} cm⁻¹ ${offset < 0 ? "below" : "above"}`;
+
+/**
+ * The sentences an empty search prints instead of silence: a band origin in the window, the
+ * nearest line each side with its ± and status, and the common absorbers the atlas does not hold.
+ */
+export function emptyFindText(hints: EmptyFindHints, wavenumber: number): string[] {
+  const out: string[] = [];
+  const line = (n: NeighbourLine, withName: boolean) =>
+    `${withName ? `${n.species} ${n.band} ` : ""}${n.label} at ${at(n.wavenumber, n.wavenumberUncertainty)} (${n.positionStatus}, ${away(n.offset)})`;
+  for (const o of hints.originsInWindow) {
+    const beside = [o.lineBelow, o.lineAbove].filter((n) => n !== null).map((n) => line(n, false));
+    out.push(
+      `This is the band origin of ${o.species} ${o.band} (${at(o.wavenumber, o.wavenumberUncertainty)}, ${away(o.offset)}): ` +
+        `no line lies at a band origin (a Σ–Σ band has no Q branch)${beside.length ? `; its lines start at ${beside.join(" and ")}` : ""}.`,
+    );
+  }
+  const side = (word: string, n: NeighbourLine | null) => `${word}, ${n ? line(n, true) : "none"}`;
+  out.push(`Nearest lines of the atlas: ${side("below", hints.nearestBelow)}; ${side("above", hints.nearestAbove)}.`);
+  const inside = hints.interferersNotInAtlas.flatMap((g) =>
+    g.regions.filter((r) => wavenumber >= r.fromCm && wavenumber <= r.toCm).map((r) => `${g.gas}'s ${r.band} band (${r.fromCm}–${r.toCm} cm⁻¹)`),
+  );
+  if (inside.length) out.push(`${significant(wavenumber, 7)} cm⁻¹ lies in ${inside.join(" and in ")}, which the atlas does not hold.`);
+  if (hints.interferersNotInAtlas.length) {
+    out.push(
+      "Finding no line is no evidence that nothing absorbs here: the atlas does not hold " +
+        hints.interferersNotInAtlas.map((g) => `${g.gas} (${g.regions.map(range).join(", ")} cm⁻¹)`).join(", ") +
+        ", nor any gas it does not list.",
+    );
+  }
+  return out;
 }

@@ -1,10 +1,27 @@
-import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, findInAtlas } from "../../atlas/index.ts";
-import { findColumns, findHeadText, findUnsourcedNote, textTable } from "../../format/index.ts";
+import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, findNear } from "../../atlas/index.ts";
+import { emptyFindText, findColumns, fixed, findHeadText, findUnsourcedNote, textTable } from "../../format/index.ts";
 import { parseSpectralPosition, positionToWavenumber, unitLabels, windowToWavenumber, type PositionUnit } from "../../core/index.ts";
 import { loadMoleculesOrThrow } from "../../molecules/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine, temperatureOption } from "../options.ts";
 import { UsageError } from "../usageError.ts";
+
+/**
+ * A bare number below this with nothing near it is more likely a wavelength in µm than a
+ * wavenumber: the atlas's lines start near 1000 cm⁻¹, and mid-infrared wavelengths in µm run
+ * from about 2 to 25 (common practice, no source).
+ */
+const micronGuessBelow = 50;
+
+/**
+ * A bare number read as µm, with the window its written digits allow: 4.66 means 4.655 to 4.665 µm
+ * (half a unit of the last digit, common practice, no source), which is ±2.3 cm⁻¹ there.
+ */
+function micronReading(text: string, value: number) {
+  const decimals = /\.(\d+)$/.exec(text)?.[1].length ?? 0;
+  const windowUm = Number((0.5 * 10 ** -decimals).toPrecision(1));
+  return { position: value, unit: "um", wavenumber: 1e4 / value, windowUm };
+}
 
 export const findHelp = `bandatlas find <position> [options]
 
@@ -23,7 +40,11 @@ every shipped molecule, species and band, nearest first.
                           temperature (of their band where the band's strength relative to the
                           gas is not sourced) (default ${defaultFindMinRelative})
   --format table|json     table (default) or JSON
-  --molecules <dir>       read molecule files from <dir> instead of the shipped ones`;
+  --molecules <dir>       read molecule files from <dir> instead of the shipped ones
+
+When nothing is found it names the nearest line on each side (with its ±), a band origin inside
+the window, and the common absorbers the atlas does not hold; a bare number below
+${micronGuessBelow} with no line near it is asked about as a wavelength in µm.`;
 
 export function runFind(args: string[]): string {
   const { values, positionals } = parseCommandLine(
@@ -56,7 +77,14 @@ export function runFind(args: string[]): string {
   const minRelative = numberOption("min-relative", values["min-relative"] as string | undefined, defaultFindMinRelative);
   if (!(minRelative >= 0 && minRelative < 1)) throw new UsageError(`--min-relative ${minRelative} must be at least 0 and below 1`);
   const format = formatOption(values.format as string | undefined, ["table", "json"]);
-  const matches = findInAtlas(loadMoleculesOrThrow(moleculesDir(values.molecules as string | undefined)), wavenumber, windowCm, temperatureK, minRelative);
+  const molecules = loadMoleculesOrThrow(moleculesDir(values.molecules as string | undefined));
+  const { matches, whenNone } = findNear(molecules, wavenumber, windowCm, temperatureK, minRelative);
+  // "find 4.66" meant 4.66 µm: asked only of a bare number (no unit written, no --unit) that found nothing.
+  const bare = unitText === undefined && /^[\d.,eE+\s]+$/.test(positionals.join(" "));
+  const asMicrons = bare && !matches.length && position.value < micronGuessBelow ? micronReading(positionals.join("").trim(), position.value) : null;
+  const micronQuestion = asMicrons
+    ? `Did you mean ${asMicrons.position} µm (${fixed(asMicrons.wavenumber, 2)} cm⁻¹)? Then run: bandatlas find ${asMicrons.position} um --window ${asMicrons.windowUm}`
+    : null;
   if (format === "json") {
     return (
       JSON.stringify(
@@ -64,6 +92,7 @@ export function runFind(args: string[]): string {
           query: { wavenumber, window: windowCm, temperatureK, minRelative, position: position.value, unit: position.unit, medium: position.medium },
           // bandToGas is the index's packing of gasRelativeIntensity, not a quantity of its own.
           matches: matches.map(({ bandToGas: _factor, ...m }) => m),
+          ...(whenNone ? { whenNone: { ...whenNone, didYouMean: asMicrons ? { ...asMicrons, question: micronQuestion } : null } } : {}),
         },
         null,
         2,
@@ -72,7 +101,7 @@ export function runFind(args: string[]): string {
   }
   const given = position.unit === "cm-1" ? "" : ` (${position.value} ${unitLabels[position.unit]}, ${position.medium})`;
   const head = findHeadText({ windowCm, wavenumber, given, temperatureK, minRelative, count: matches.length }) + "\n";
-  if (!matches.length) return head;
+  if (whenNone) return head + [...(micronQuestion ? [micronQuestion] : []), ...emptyFindText(whenNone, wavenumber)].join("\n") + "\n";
   const table = textTable(
     findColumns.map((c) => c.heading),
     matches.map((m) => findColumns.map((c) => c.cell(m))),
