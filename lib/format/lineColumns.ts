@@ -8,6 +8,7 @@ import { fixed, significant } from "./numbers.ts";
  */
 export interface LineColumn {
   key: keyof Line;
+  /** The unit of the JSON value and the CSV column. */
   unit: string | null;
   /** ASCII heading of the CSV, with the unit in brackets. */
   csv: string;
@@ -15,8 +16,13 @@ export interface LineColumn {
   table: string | null;
   /** Heading of the species pages' table: name, then the unit line (null: not on the pages). */
   page: { name: string; unit: string } | null;
-  /** Printed digits, the same in every output. */
+  /** Printed digits, the same in every output but the CSV where \`csvCell\` is given. */
   cell: (line: Line) => string;
+  /**
+   * The CSV's digits where its unit differs from the printed one: the CSV keeps the unit of the
+   * JSON key (wavelengthAirNm), while tables and pages print both wavelengths in µm.
+   */
+  csvCell?: (line: Line) => string;
   /** Right-aligned in text tables; a number cell in the CSV. */
   numeric: boolean;
 }
@@ -64,11 +70,14 @@ export const lineColumns: readonly LineColumn[] = [
   },
   {
     key: "wavelengthAirNm",
+    // nm is the unit of the JSON key and the CSV; the table and the pages print µm, as for the
+    // vacuum wavelength beside it, so one table never mixes two wavelength units.
     unit: "nm",
     csv: "wavelengthAir (nm)",
-    table: "λ air / nm",
-    page: { name: "λ air", unit: "/ nm" },
-    cell: (l) => fixed(l.wavelengthAirNm, 3),
+    table: "λ air / µm",
+    page: { name: "λ air", unit: "/ µm" },
+    cell: (l) => fixed(l.wavelengthAirNm / 1000, 6),
+    csvCell: (l) => fixed(l.wavelengthAirNm, 3),
     numeric: true,
   },
   {

@@ -76,6 +76,14 @@ export function lineCells(l: Line): Record<keyof Line & string, string> {
 export function linesCsv(result: BandLines, limitations: readonly string[] = []): string {
   const comments = [`# accuracy: ${accuracyText(result.accuracy)}`, `# positions: ${positionsAre}`, ...limitations.map((l) => `# known limitation: ${l}`)];
   const rows = [...comments.map((c) => c.replace(/,/g, ";").replace(/["\r\n]+/g, " ")), csvRow(linesCsvHeader)];
-  for (const l of result.lines) rows.push(csvRow(csvLineColumns.map((c) => (c.numeric ? numeric(c.cell(l)) : c.cell(l)))));
+  for (const l of result.lines)
+    rows.push(
+      csvRow(
+        csvLineColumns.map((c) => {
+          const text = (c.csvCell ?? c.cell)(l);
+          return c.numeric ? numeric(text) : text;
+        }),
+      ),
+    );
   return rows.join("\n") + "\n";
 }
