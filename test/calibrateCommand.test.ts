@@ -115,7 +115,7 @@ describe("real spectra from two teaching-laboratory FTIRs", () => {
   it("prints the correction box, every line's reason and the caution in the table", async () => {
     const { stdout, exitCode } = await runCli(["calibrate", pitt, "--gas", "hcl"]);
     expect(exitCode).toBe(0);
-    expect(stdout).toMatch(/│ scale k = −\d+\.\d ± \d\.\d ppm\s+│/);
+    expect(stdout).toMatch(/│ scale k = [+−]\d+(\.\d+)? ± \d+(\.\d+)? ppm\s+│/);
     expect(stdout).toMatch(/saturated: peak absorbance 1\.\d\d ≥ 1/);
     expect(stdout).toMatch(/blended: beside a strong peak/);
     expect(stdout).toMatch(/does not certify an instrument/);

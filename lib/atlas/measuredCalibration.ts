@@ -9,6 +9,11 @@ import {
   fourierFwhmPerResolution,
   observedSignal,
   correctedWavenumber,
+  bandLabel,
+  lineErrorShares,
+  independentShares,
+  type AbsorbingLine,
+  type ErrorShare,
   type AbsorptionPeak,
   type Apodization,
   type CellConditions,
@@ -131,6 +136,23 @@ function saturatedFraction(measured: MeasuredAbsorbance, fromCm: number, toCm: n
   return values.filter((v) => v - baseline > level).length / values.length;
 }
 
+/**
+ * Each reference line's error, source by source: its position's shares from its band model (the
+ * constants, omitted terms, isotope scaling, residual floor; sources named the same in every
+ * species and band of the gas) and the cell's pressure shift, one source for every line.
+ */
+function shareFinder(cell: CellModel, pressureShiftUncertaintyCm: number): (line: AbsorbingLine) => ErrorShare[] {
+  return (line) => {
+    const match = /^([PR])\((\d+)\)$/.exec(line.label);
+    const species = cell.species.find((s) => s.model.label === line.species);
+    const band = species?.bands.find((b) => bandLabel(b) === line.band);
+    const shares: ErrorShare[] =
+      match && species && band ? lineErrorShares(species.model, band, match[1] as "P" | "R", Number(match[2])) : independentShares(line);
+    if (pressureShiftUncertaintyCm > 0) shares.push({ source: "pressure shift", kind: "pressure-shift", shiftCm: pressureShiftUncertaintyCm });
+    return shares;
+  };
+}
+
 /** Calibrate a measured spectrum of one gas against the atlas's predicted spectrum (pure: runs in the browser too). */
 export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbsorbance, settings: MeasuredCalibrationSettings): MeasuredCalibration {
   const rules = settings.rules ?? defaultSpectrumCalibrationRules;
@@ -167,7 +189,7 @@ export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbs
     spectrum = cellSpectrum({ lines: set.lines, conditions: settings.conditions, intensityScale: set.intensityScale, fromCm, toCm, instrument });
     lastSpectrum.set(cell, { key, spectrum });
   }
-  const references = calibrationReferences(set.lines, spectrum, resolutionCm, fromCm, toCm, criteria);
+  const references = calibrationReferences(set.lines, spectrum, resolutionCm, fromCm, toCm, criteria, shareFinder(cell, set.pressureShift.uncertaintyCm));
   // Peaks just outside the compared range may still be lines of the gas seen on a wrong scale.
   const reach = rules.bounds.maxScalePpm * 1e-6 * toCm + rules.bounds.maxOffsetCm + resolutionCm;
   const peaks = allPeaks.filter((p) => p.wavenumberCm >= fromCm - reach && p.wavenumberCm <= toCm + reach);

@@ -30,6 +30,7 @@ export function dunhamPositionUncertainty(species: DiatomicSpeciesModel, band: V
   return {
     terms: keys.map(({ k, l }) => ({ l, upperWeight: Math.pow(band.vUpper + 0.5, k), lowerWeight: Math.pow(band.vLower + 0.5, k) })),
     rows: components.map((c) => keys.map(({ k, l }) => c.deltas.filter((d) => d.k === k && d.l === l).reduce((s, d) => s + d.valueCm, 0))),
+    ids: components.map((c) => c.id),
   };
 }
 

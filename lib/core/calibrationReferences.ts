@@ -1,6 +1,7 @@
 import type { AbsorbingLine } from "./absorbingLines.ts";
 import { apparentPeak, nearestNeighbourCm } from "./calibrationLines.ts";
 import { observedSignal, type CellSpectrum } from "./cellTransmittance.ts";
+import type { ErrorShare } from "./lineErrorShares.ts";
 import type { WavenumberCm } from "./types.ts";
 
 /** Which predicted lines may serve as references when a measured spectrum is calibrated. */
@@ -42,7 +43,17 @@ export interface CalibrationReference extends Pick<AbsorbingLine, "species" | "b
   blended: boolean;
   /** True when the reference's ± is small enough against R to use it. */
   precise: boolean;
+  /** What referenceUncertaintyCm is made of, source by source (see lineErrorShares.ts). */
+  shares: ErrorShare[];
 }
+
+/**
+ * A line's error shares without knowledge of their sources: its whole ± as a source of its own.
+ * Callers that know the line's band model pass the real shares (atlas/measuredCalibration.ts).
+ */
+export const independentShares = (line: AbsorbingLine): ErrorShare[] => [
+  { source: `line ${line.species} ${line.band} ${line.label}`, kind: "constants", shiftCm: line.wavenumberUncertainty },
+];
 
 /**
  * Every line of the gas in [fromCm, toCm] at least minRelativeStrength of its strongest line there,
@@ -57,6 +68,7 @@ export function calibrationReferences(
   fromCm: WavenumberCm,
   toCm: WavenumberCm,
   criteria: ReferenceCriteria = defaultReferenceCriteria,
+  sharesOf: (line: AbsorbingLine) => ErrorShare[] = independentShares,
 ): CalibrationReference[] {
   const sorted = [...lines].sort((a, b) => a.wavenumber - b.wavenumber);
   let strongest = 0;
@@ -70,7 +82,12 @@ export function calibrationReferences(
     const nearest = nearestNeighbourCm(sorted, i, criteria.blendFraction * line.intensity);
     const apparent = apparentPeak(signal, spectrum, line.wavenumber, resolutionCm / 2);
     const shift = apparent === null ? null : apparent - line.wavenumber;
-    const uncertainty = Math.hypot(line.wavenumberUncertainty, criteria.peakShiftUncertaintyFraction * (shift ?? 0));
+    const lineShapeCm = criteria.peakShiftUncertaintyFraction * (shift ?? 0);
+    const uncertainty = Math.hypot(line.wavenumberUncertainty, lineShapeCm);
+    // The predicted peak shifts all rest on one line-shape model (widths, apodization): an error
+    // in it moves every shift in proportion, so this share is one source for all lines.
+    const shares = sharesOf(line);
+    if (lineShapeCm !== 0) shares.push({ source: "line-shape model", kind: "line-shape", shiftCm: lineShapeCm });
     out.push({
       species: line.species,
       band: line.band,
@@ -85,6 +102,7 @@ export function calibrationReferences(
       nearestNeighbourCm: nearest,
       blended: apparent === null || (nearest !== null && nearest <= resolutionCm),
       precise: uncertainty <= criteria.maxUncertaintyFraction * resolutionCm,
+      shares,
     });
   }
   return out;

@@ -48,6 +48,8 @@ export * from "./instrumentFwhm.ts";
 export * from "./calibrationReferences.ts";
 export * from "./scaleSearch.ts";
 export * from "./wavenumberCorrection.ts";
+export * from "./correctionBudget.ts";
+export * from "./lineErrorShares.ts";
 export * from "./absorptionPeaks.ts";
 export * from "./spectrumCalibration.ts";
 export * from "./spectrumNoise.ts";

@@ -24,14 +24,17 @@ function stateUncertainties(state: LinearState): Array<{ l: number; sigma: numbe
  * give no correlations): one term and one row per constant. When upper and lower are the same
  * state (never for a real band) each constant still appears once, with both weights.
  */
-function linearPositionUncertainty(upper: LinearState, lower: LinearState): PositionUncertainty {
-  const entries: Array<{ l: number; upperWeight: number; lowerWeight: number; sigma: number }> = [];
-  for (const { l, sigma } of stateUncertainties(upper)) entries.push({ l, upperWeight: 1, lowerWeight: upper === lower ? 1 : 0, sigma });
-  if (lower !== upper) for (const { l, sigma } of stateUncertainties(lower)) entries.push({ l, upperWeight: 0, lowerWeight: 1, sigma });
+function linearPositionUncertainty(upper: LinearState, lower: LinearState, upperIndex: number, lowerIndex: number): PositionUncertainty {
+  const entries: Array<{ l: number; upperWeight: number; lowerWeight: number; sigma: number; id: string }> = [];
+  for (const { l, sigma } of stateUncertainties(upper))
+    entries.push({ l, upperWeight: 1, lowerWeight: upper === lower ? 1 : 0, sigma, id: `state ${upperIndex} constant ${l}` });
+  if (lower !== upper)
+    for (const { l, sigma } of stateUncertainties(lower)) entries.push({ l, upperWeight: 0, lowerWeight: 1, sigma, id: `state ${lowerIndex} constant ${l}` });
   const used = entries.filter((e) => e.sigma > 0);
   return {
     terms: used.map(({ l, upperWeight, lowerWeight }) => ({ l, upperWeight, lowerWeight })),
     rows: used.map((e, r) => used.map((_, i) => (i === r ? e.sigma : 0))),
+    ids: used.map((e) => e.id),
   };
 }
 
@@ -47,6 +50,8 @@ function componentPositionUncertainty(
   return {
     terms: keys.map((k) => ({ l: k.l, upperWeight: k.stateIndex === upperIndex ? 1 : 0, lowerWeight: k.stateIndex === lowerIndex ? 1 : 0 })),
     rows: components.map((c) => keys.map((k) => c.deltas.filter((d) => d.stateIndex === k.stateIndex && d.l === k.l).reduce((sum, d) => sum + d.valueCm, 0))),
+    // The components of one species' fit: the same index is the same source in every band.
+    ids: components.map((_, i) => `fit component ${i}`),
   };
 }
 
@@ -71,7 +76,7 @@ export function linearBandModel(species: LinearSpeciesModel, band: Band, options
     ...cachedBandErrors(species, entry.band.label, () => ({
       uncertainty: linear.positionErrors
         ? componentPositionUncertainty(linear.positionErrors, entry.upperStateIndex, entry.lowerStateIndex)
-        : linearPositionUncertainty(upper, lower),
+        : linearPositionUncertainty(upper, lower, entry.upperStateIndex, entry.lowerStateIndex),
       accuracy: bandAccuracy(species, entry.band),
     })),
     partitionFunction: options.partitionFunction ?? linearPartitionFunction(linear, options.temperatureK),

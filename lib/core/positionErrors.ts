@@ -7,7 +7,9 @@ type Key = { k: number; l: number };
 
 /** Each coefficient's own standard uncertainty, uncorrelated (what a handbook table gives). */
 export function componentsFromUncertainties(dunham: readonly DunhamCoefficient[]): DunhamErrorComponent[] {
-  return dunham.filter((c) => c.uncertaintyCm > 0).map((c) => ({ kind: "constants", deltas: [{ k: c.k, l: c.l, valueCm: c.uncertaintyCm }] }));
+  return dunham
+    .filter((c) => c.uncertaintyCm > 0)
+    .map((c) => ({ kind: "constants", id: `constant Y${c.k}${c.l}`, deltas: [{ k: c.k, l: c.l, valueCm: c.uncertaintyCm }] }));
 }
 
 /**
@@ -20,7 +22,7 @@ export function componentsFromCovariance(keys: readonly Key[], covariance: numbe
   return eigen.realEigenvalues.flatMap((lambda, r) => {
     if (!(lambda > 0)) return [];
     const root = Math.sqrt(lambda);
-    return [{ kind: "constants" as const, deltas: keys.map(({ k, l }, i) => ({ k, l, valueCm: root * vectors.get(i, r) })) }];
+    return [{ kind: "constants" as const, id: `fit covariance ${r}`, deltas: keys.map(({ k, l }, i) => ({ k, l, valueCm: root * vectors.get(i, r) })) }];
   });
 }
 
@@ -31,18 +33,32 @@ export function componentsFromCovariance(keys: readonly Key[], covariance: numbe
  * series of a diatomic falls off roughly geometrically in both indices (successive terms shrink
  * by about (Be/ωe)^(1/2) per k and Be/ωe per l; Dunham 1932, Huber & Herzberg 1979, introduction),
  * so this is an order-of-magnitude bound of our own on what the truncation misses, not a value.
+ *
+ * For the vibrational energies (l = 0) the ratio alone is not enough: a handbook table is often
+ * the first terms of a longer fit, whose next term is not small by the ratio of the two before it
+ * (12C16O cut to ωe, ωexe, ωeye misses its Y40 by 8× under the ratio rule; H35Cl's printed
+ * ωe, ωexe, ωeye leave out a term that moves the 1-0 origin by about 0.06 cm⁻¹, 13× the ratio
+ * estimate). There the estimate is at least |Y_K0|·(Be/ωe)^(1/2), the geometric step itself.
+ * test/omittedTerms.test.ts checks both cases: the ± covers every known miss and is at most
+ * about 5× it at the median.
  */
 export function omittedTermEstimates(dunham: readonly DunhamCoefficient[]): Array<Key & { sizeCm: number }> {
   const value = (k: number, l: number) => dunham.find((c) => c.k === k && c.l === l)?.valueCm;
   const out: Array<Key & { sizeCm: number }> = [];
   const ls = [...new Set(dunham.map((c) => c.l))].sort((a, b) => a - b);
+  const y01 = value(0, 1);
+  const y10Value = value(1, 0);
+  const vibrationalStep = y01 && y10Value ? Math.sqrt(Math.abs(y01 / y10Value)) : 0;
+
   for (const l of ls) {
     const ks = dunham.filter((c) => c.l === l).map((c) => c.k);
     const top = Math.max(...ks);
     const last = value(top, l);
     const before = value(top - 1, l);
-    if (last !== undefined && before !== undefined && before !== 0) out.push({ k: top + 1, l, sizeCm: (last * last) / Math.abs(before) });
-    else if (top === 0 && l >= 2 && last !== undefined) {
+    if (last !== undefined && before !== undefined && before !== 0) {
+      const ratio = (last * last) / Math.abs(before);
+      out.push({ k: top + 1, l, sizeCm: l === 0 ? Math.max(ratio, Math.abs(last) * vibrationalStep) : ratio });
+    } else if (top === 0 && l >= 2 && last !== undefined) {
       // A series with only its k = 0 term (e.g. De without βe): its k = 1 term taken with the
       // relative vibrational dependence of the series below it (βe/De ≈ αe/Be in size).
       const lower0 = value(0, l - 1);
@@ -95,6 +111,7 @@ export function omittedTermComponents(terms: readonly OmittedTerm[], massRatio =
   const scale = (k: number, l: number) => Math.pow(massRatio, k / 2 + l);
   return terms.map((t) => ({
     kind: "omitted-term",
+    id: `omitted Y${t.k}${t.l}`,
     deltas: [
       { k: t.k, l: t.l, valueCm: t.sizeCm * scale(t.k, t.l) },
       ...t.absorbed.map((a) => ({ k: a.k, l: a.l, valueCm: -a.fraction * t.sizeCm * scale(a.k, a.l) })),
@@ -107,7 +124,7 @@ export function crossCheckComponent(dunham: readonly DunhamCoefficient[], other:
   const keys: Key[] = [];
   for (const c of [...dunham, ...other]) if (!keys.some((key) => key.k === c.k && key.l === c.l)) keys.push({ k: c.k, l: c.l });
   const value = (table: readonly DunhamCoefficient[], key: Key) => table.find((c) => c.k === key.k && c.l === key.l)?.valueCm ?? 0;
-  return { kind: "constants", deltas: keys.map((key) => ({ ...key, valueCm: value(dunham, key) - value(other, key) })) };
+  return { kind: "constants", id: "cross-check", deltas: keys.map((key) => ({ ...key, valueCm: value(dunham, key) - value(other, key) })) };
 }
 
 /**
@@ -120,9 +137,11 @@ export function crossCheckComponent(dunham: readonly DunhamCoefficient[], other:
 export function isotopeScalingComponents(dunham: readonly DunhamCoefficient[], inverseMassShifts: readonly number[]): DunhamErrorComponent[] {
   const bound = 2;
   return inverseMassShifts
-    .filter((shift) => shift !== 0)
-    .map((shift) => ({
+    .map((shift, atom) => ({ shift, atom }))
+    .filter(({ shift }) => shift !== 0)
+    .map(({ shift, atom }) => ({
       kind: "isotope-scaling" as const,
+      id: `isotope scaling atom ${atom + 1}`,
       deltas: dunham.map((c) => ({ k: c.k, l: c.l, valueCm: c.valueCm * bound * electronMassU * Math.abs(shift) })),
     }));
 }

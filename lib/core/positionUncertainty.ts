@@ -12,6 +12,8 @@ import type { BandAccuracy } from "./types.ts";
 export interface PositionUncertainty {
   terms: Array<{ l: number; upperWeight: number; lowerWeight: number }>;
   rows: number[][];
+  /** The error source of each row (DunhamErrorComponent.id), so shared sources can be recognised. */
+  ids: string[];
 }
 
 function uncertaintyFunction({ terms, rows }: PositionUncertainty) {

@@ -1,6 +1,7 @@
 import type { AbsorptionPeak } from "./absorptionPeaks.ts";
 import type { CalibrationReference } from "./calibrationReferences.ts";
 import { CoreInputError } from "./coreInputError.ts";
+import { correctionBudget, type CorrectionBudget } from "./correctionBudget.ts";
 import { defaultScaleSearchBounds, hypothesisWavenumber, searchScale, type ScaleHypothesis, type ScaleSearchBounds } from "./scaleSearch.ts";
 import type { WavenumberCm } from "./types.ts";
 import {
@@ -41,6 +42,13 @@ export interface SpectrumCalibrationRules {
   minMatchedFraction: number;
   /** Refuse when a different assignment gathers at least this fraction of the best one's votes. */
   ambiguityRatio: number;
+  /**
+   * No peak position is taken as more precise than this fraction of the resolution: what a peak
+   * fit cannot see (line-shape asymmetry, residual phase error, baseline, unresolved neighbours)
+   * leaves each line's position uncertain by about a hundredth of R on good FTIR spectra (our own
+   * floor, common practice, no source; its coverage is tested on distorted synthetic spectra).
+   */
+  peakFloorFraction: number;
   bounds: ScaleSearchBounds;
 }
 
@@ -50,6 +58,7 @@ export const defaultSpectrumCalibrationRules: SpectrumCalibrationRules = {
   strongNeighbourResolutions: 3,
   minMatchedFraction: 0.5,
   ambiguityRatio: 0.8,
+  peakFloorFraction: 0.02,
   bounds: defaultScaleSearchBounds,
 };
 
@@ -60,8 +69,10 @@ export interface CalibratedLine {
   peak: AbsorptionPeak | null;
   /** reference − corrected measured position, cm⁻¹ (null without a peak). */
   residualCm: WavenumberCm | null;
-  /** Measured and reference ± in quadrature, cm⁻¹ (null without a peak). */
+  /** Measured (with its floor) and reference ± in quadrature, cm⁻¹ (null without a peak). */
   sigmaCm: WavenumberCm | null;
+  /** The peak's ± raised to the per-line floor, cm⁻¹ (null without a peak). */
+  measurementSigmaCm: WavenumberCm | null;
   used: boolean;
   reason: RejectionReason | null;
   /** Why, in words, for an unused line. */
@@ -71,7 +82,11 @@ export interface CalibratedLine {
 export interface SpectrumCalibrationResult {
   gasName: string;
   resolutionCm: WavenumberCm;
+  /** The correction; its ± are the totals of `budget`. */
   correction: WavenumberCorrection;
+  budget: CorrectionBudget;
+  /** The fit's ± from the weights alone, before the budget (for comparison). */
+  weightedFitUncertainty: { scale: number; offsetCm: number };
   /** Root mean square of the used lines' residuals, cm⁻¹. */
   rmsResidualCm: WavenumberCm;
   usedCount: number;
@@ -175,12 +190,14 @@ export function calibrateSpectrum(
   const lines: CalibratedLine[] = references.map((reference) => {
     const index = peakOf.get(reference);
     const peak = index === undefined ? null : peaks[index];
-    const sigma = peak ? Math.hypot(peak.wavenumberUncertaintyCm, reference.referenceUncertaintyCm) : null;
+    const measurementSigma = peak ? Math.max(peak.wavenumberUncertaintyCm, rules.peakFloorFraction * resolutionCm) : null;
+    const sigma = measurementSigma === null ? null : Math.hypot(measurementSigma, reference.referenceUncertaintyCm);
     const reject = (reason: RejectionReason, detail: string): CalibratedLine => ({
       reference,
       peak,
       residualCm: null,
       sigmaCm: sigma,
+      measurementSigmaCm: measurementSigma,
       used: false,
       reason,
       detail,
@@ -204,7 +221,7 @@ export function calibrateSpectrum(
     }
     if (!reference.precise) return reject("uncertain-reference", `reference ± ${reference.referenceUncertaintyCm.toPrecision(2)} cm⁻¹ > resolution/4`);
     if (peak.signalToNoise < rules.minSignalToNoise) return reject("weak", `signal-to-noise ${fmt(peak.signalToNoise, 1)} < ${rules.minSignalToNoise}`);
-    return { reference, peak, residualCm: null, sigmaCm: sigma, used: true, reason: null, detail: null };
+    return { reference, peak, residualCm: null, sigmaCm: sigma, measurementSigmaCm: measurementSigma, used: true, reason: null, detail: null };
   });
 
   const candidates = lines.filter((l) => l.used);
@@ -248,10 +265,31 @@ export function calibrateSpectrum(
       used++;
     }
   }
+  const usedLines = lines.filter((l) => l.used);
+  const budget = correctionBudget(
+    correction,
+    usedLines.map((l) => ({
+      measuredCm: l.peak!.wavenumberCm,
+      fitSigmaCm: l.sigmaCm!,
+      measurementSigmaCm: l.measurementSigmaCm!,
+      residualCm: l.residualCm!,
+      shares: l.reference.shares,
+    })),
+  );
+  const weightedFitUncertainty = { scale: correction.scaleUncertainty, offsetCm: correction.offsetUncertaintyCm };
+  const budgeted: WavenumberCorrection = {
+    ...correction,
+    scaleUncertainty: model === "offset" ? 0 : budget.scaleSigma,
+    offsetUncertaintyCm: model === "scale" ? 0 : budget.offsetSigmaCm,
+    quadraticUncertaintyPerCm: model === "quadratic" ? budget.quadraticSigmaPerCm : 0,
+    scaleOffsetCorrelation: model === "linear" || model === "quadratic" ? budget.scaleOffsetCorrelation : 0,
+  };
   return {
     gasName,
     resolutionCm,
-    correction,
+    correction: budgeted,
+    budget,
+    weightedFitUncertainty,
     rmsResidualCm: Math.sqrt(sumSquares / used),
     usedCount: used,
     lines,

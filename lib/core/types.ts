@@ -93,6 +93,12 @@ export interface ReferenceLine {
  */
 export interface DunhamErrorComponent {
   kind: "constants" | "omitted-term" | "isotope-scaling";
+  /**
+   * Names the error source so that the same source is recognised in every species and band it
+   * moves (an omitted term of the reference species moves its isotopologues' lines too): a
+   * calibration against many lines keeps such a source shared instead of averaging it down.
+   */
+  id: string;
   deltas: Array<{ k: number; l: number; valueCm: number }>;
 }
 

@@ -41,6 +41,21 @@ export function correctedWavenumber(c: WavenumberCorrection, measuredCm: Wavenum
   return measuredCm * (1 + c.scale) + c.offsetCm + c.quadraticPerCm * d * d;
 }
 
+/** One line's row of the fit's design matrix: the model's terms at the measured wavenumber, about the centre. */
+export function correctionDesignRow(model: CorrectionModel, measuredCm: WavenumberCm, centreCm: WavenumberCm): number[] {
+  const d = measuredCm - centreCm;
+  switch (model) {
+    case "scale":
+      return [measuredCm];
+    case "offset":
+      return [1];
+    case "linear":
+      return [d, 1];
+    case "quadratic":
+      return [d, 1, d * d];
+  }
+}
+
 /**
  * Weighted least squares of reference − measured on the model's terms. Internally the measured
  * wavenumber is taken about the lines' weighted centre, which keeps scale and offset apart in the
@@ -59,19 +74,7 @@ export function fitWavenumberCorrection(model: CorrectionModel, points: readonly
     xSum += w * p.measuredCm;
   }
   const centre = xSum / wSum;
-  const design = points.map((p) => {
-    const d = p.measuredCm - centre;
-    switch (model) {
-      case "scale":
-        return [p.measuredCm];
-      case "offset":
-        return [1];
-      case "linear":
-        return [d, 1];
-      case "quadratic":
-        return [d, 1, d * d];
-    }
-  });
+  const design = points.map((p) => correctionDesignRow(model, p.measuredCm, centre));
   const fit = weightedLeastSquares(
     design,
     points.map((p) => p.referenceCm - p.measuredCm),
