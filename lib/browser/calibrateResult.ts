@@ -10,6 +10,7 @@ import {
   correctionLines,
   type CalibrationRun,
 } from "../format/spectrumCalibrationText.ts";
+import { budgetTable, referenceStandingLine } from "../format/correctionBudgetText.ts";
 import { el } from "./dom.ts";
 
 /** The text report's lines above its box: file, hash, spectrum, cell, model. */
@@ -42,6 +43,25 @@ function lineTable(run: CalibrationRun): HTMLTableElement {
   return table;
 }
 
+/** The uncertainty budget of k and c, part by part, the total last. */
+function budgetElement(run: CalibrationRun): HTMLTableElement {
+  const { headings, rows, rightAligned } = budgetTable(run.calibration.result);
+  const table = el("table", undefined, { class: "calibration-result", id: "calibrate-budget-table" });
+  table.append(el("caption", "Uncertainty budget: each part's standard uncertainty of k and c; sources shared by many lines are propagated as shared"));
+  const head = el("tr");
+  headings.forEach((h, i) => head.append(el("th", h, { scope: "col", ...(rightAligned[i] ? { class: "num" } : {}) })));
+  table.append(el("thead"));
+  table.tHead!.append(head);
+  const body = el("tbody");
+  rows.forEach((cells, r) => {
+    const tr = el("tr", undefined, r === rows.length - 1 ? { class: "total" } : {});
+    cells.forEach((c, i) => tr.append(el(i === 0 ? "th" : "td", c, { ...(i === 0 ? { scope: "row" } : {}), ...(rightAligned[i] ? { class: "num" } : {}) })));
+    body.append(tr);
+  });
+  table.append(body);
+  return table;
+}
+
 /** Blob URLs of the last run, released when the next one replaces them. */
 let downloadUrls: string[] = [];
 
@@ -54,7 +74,11 @@ function setDownload(anchor: HTMLAnchorElement, text: string, type: string): voi
 export function showCalibrationRun(run: CalibrationRun): void {
   const text = calibrationText(run);
   document.getElementById("calibrate-summary")!.replaceChildren(...headerLines(text).map((l) => el("li", l)));
-  document.getElementById("calibrate-correction")!.replaceChildren(...correctionLines(run).map((l) => el("p", l)));
+  const standing = referenceStandingLine(run.calibration.result);
+  document
+    .getElementById("calibrate-correction")!
+    .replaceChildren(...correctionLines(run).map((l) => el("p", l, l === standing ? { class: "not-traceable" } : {})));
+  document.getElementById("calibrate-budget")!.replaceChildren(budgetElement(run));
   document.getElementById("calibrate-lines")!.replaceChildren(lineTable(run));
   document.getElementById("calibrate-notes")!.replaceChildren(...calibrationNotes(run).map((n) => el("li", n)));
   document.getElementById("calibrate-rules")!.textContent = calibrationRulesText(run);

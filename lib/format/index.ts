@@ -10,3 +10,4 @@ export * from "./cautions.ts";
 export * from "./lineColumns.ts";
 export * from "./findText.ts";
 export * from "./spectrumCalibrationText.ts";
+export * from "./correctionBudgetText.ts";

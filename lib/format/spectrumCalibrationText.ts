@@ -2,6 +2,7 @@ import type { CellConditions, RejectionReason } from "../core/index.ts";
 import { standardAtmospherePa } from "../core/index.ts";
 import type { MeasuredCalibration } from "../atlas/index.ts";
 import type { MeasuredSpectrum } from "../spectrumFile/index.ts";
+import { budgetDocument, budgetTable, referenceStanding, referenceStandingLine } from "./correctionBudgetText.ts";
 import { textTable } from "./linesTable.ts";
 
 /** Everything one calibration run produced, as the table, the JSON, the page and the report show it. */
@@ -71,6 +72,8 @@ export function correctionLines(run: CalibrationRun): string[] {
   lines.push(
     `RMS residual ${result.rmsResidualCm.toPrecision(2)} cm⁻¹ over ${result.usedCount} lines; χ²/ν = ${Number.isFinite(c.reducedChiSquared) ? c.reducedChiSquared.toFixed(2) : "—"}`,
   );
+  const standing = referenceStandingLine(result);
+  if (standing) lines.push(standing);
   return lines;
 }
 
@@ -116,7 +119,11 @@ export function calibrationNotes(run: CalibrationRun): string[] {
       `The same lines fitted with scale and offset together show ${size}, more than 3σ from zero: this instrument's error is not a pure ${result.correction.model}; the linear model (--model linear) describes it better.`,
     );
   }
-  if (result.correction.reducedChiSquared > 1) notes.push("The scatter exceeds the stated ± (χ²/ν > 1): the uncertainties are scaled by √(χ²/ν).");
+  if (result.budget.measurementInflation > 1) {
+    notes.push(
+      `The residuals scatter more than the stated ± explain: every line's measurement ± is widened ${result.budget.measurementInflation.toFixed(2)}× (the budget's measurement row).`,
+    );
+  }
   if (result.unassignedPeakCount > 0) {
     notes.push(
       `${result.unassignedPeakCount} peak${result.unassignedPeakCount === 1 ? "" : "s"} of the spectrum near the band match no listed line of ${run.gasName} (noise, other gases, or lines weaker than ${100 * calibration.referenceCriteria.minRelativeStrength} % of the strongest).`,
@@ -151,6 +158,9 @@ export function calibrationDocument(run: CalibrationRun) {
       scaleOffsetCorrelation: c.model === "linear" || c.model === "quadratic" ? Number(c.scaleOffsetCorrelation.toFixed(3)) : null,
       reducedChiSquared: Number.isFinite(c.reducedChiSquared) ? Number(c.reducedChiSquared.toFixed(3)) : null,
       meaning: correctionModelWords[c.model],
+      budget: budgetDocument(result),
+      referenceStanding: referenceStanding(result).standing,
+      referenceStandingNote: referenceStandingLine(result),
     },
     rmsResidualCm: Number(result.rmsResidualCm.toPrecision(2)),
     linesUsed: result.usedCount,
@@ -217,6 +227,7 @@ export function calibrationText(run: CalibrationRun): string {
   const table = calibrationLineRows(run);
   const box = correctionLines(run);
   const width = Math.max(...box.map((l) => l.length)) + 2;
+  const budget = budgetTable(calibration.result);
   return [
     `Wavenumber calibration of ${run.fileName} against ${run.gasName}`,
     `file SHA-256 ${run.sha256}`,
@@ -229,6 +240,8 @@ export function calibrationText(run: CalibrationRun): string {
     `┌${"─".repeat(width)}┐`,
     ...box.map((l) => `│ ${l.padEnd(width - 1)}│`),
     `└${"─".repeat(width)}┘`,
+    "",
+    textTable(budget.headings, budget.rows, budget.rightAligned),
     "",
     textTable(table.headings, table.rows, table.rightAligned),
     "",

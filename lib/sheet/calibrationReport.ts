@@ -1,4 +1,5 @@
 import { createRequire } from "node:module";
+import { drawCalibrationBudget } from "./calibrationBudgetTable.ts";
 import { calibrationNotes, calibrationReportFacts, calibrationRulesText, correctionLines, correctionModelWords, type CalibrationRun } from "../format/index.ts";
 import { describeBuild } from "../shared/buildIdentity.ts";
 import { drawCalibrationLineTable } from "./calibrationLineTable.ts";
@@ -60,6 +61,7 @@ function lay(doc: PDFKit.PDFDocument, run: CalibrationRun, build: SheetBuildIden
   drawFacts(flow, facts.cell);
 
   drawCorrectionBox(flow, correctionLines(run), correctionModelWords[run.calibration.result.correction.model]);
+  drawCalibrationBudget(flow, run);
 
   drawSectionHeading(flow, "Residuals of the lines found", residualPlotHeight(doc, run, width));
   flow.y = drawResidualPlot(doc, run, x, flow.y, width) + 10;
