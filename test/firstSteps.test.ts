@@ -300,3 +300,40 @@ describe("every README command that needs no file of the user's", () => {
     });
   }
 });
+
+describe("check reports every problem of a file in one run", () => {
+  it("lists the schema, placeholder, CAS, element, link and constant problems of one file together", async () => {
+    // An invented file (see its comment): each line below is one kind of problem check used to
+    // report only after the kinds before it were fixed.
+    const file = join(root, "test/fixtures/bad/every-stage.yaml");
+    const { stdout, stderr, exitCode } = await cli("check", file);
+    expect(exitCode).toBe(1);
+    expect(stdout).toBe("");
+    const lines = stderr.trim().split("\n");
+    const expected = [
+      /:5:1: `formula`: expected the formula as text, got nothing/,
+      /:7:1: `formulae`: unknown field "formulae" \(did you mean "formula"\?\)/,
+      // CAS check digit of 630-08-? (carbon monoxide's number is 630-08-0; common practice: Σ i·dᵢ mod 10).
+      /:8:1: `casNumber`: CAS number "630-08-1" fails its check digit \(expected 0 at the end\)/,
+      /:9:1: `aliases`: expected a list of other names, got a mapping/,
+      /:11:12: `atoms\[1\]`: "Xx" is not an element symbol/,
+      /:18:5: `sources\.invented\.citation`: still holds the template's placeholder REPLACE/,
+      /:19:5: `sources\.invented\.url`: a source address must be an https: or http: link/,
+      /:28:9: `species\[0\]\.constants\.equilibrium\.bE`: Be \(rotational constant\) must be above 0 cm⁻¹, got -2/,
+    ];
+    expect(lines).toHaveLength(expected.length + 1);
+    expected.forEach((pattern, i) => expect(lines[i]).toMatch(pattern));
+    expect(lines.at(-1)).toBe(`${expected.length} problems in 1 of 1 file`);
+    expect(stderr).not.toMatch(/\n\s+at /);
+  });
+
+  it("says a placeholder where a number belongs once, as the schema's wrong type", async () => {
+    const dir = mkdtempSync(join(tmpdir(), "bandatlas-check-"));
+    expect((await cli("new", "fresh", "--molecules", dir)).exitCode).toBe(0);
+    const { stderr } = await cli("check", join(dir, "fresh.yaml"));
+    expect(stderr).toMatch(/`species\[0\]\.constants\.equilibrium\.omegaE\.value`: expected a number in cm⁻¹, got the text "REPLACE"/);
+    expect(stderr).not.toMatch(/omegaE\.value`: still holds the template's placeholder/);
+    // The text placeholders (name, formula …) are reported in the same run.
+    expect(stderr).toMatch(/`name`: still holds the template's placeholder REPLACE/);
+  });
+});

@@ -3,15 +3,26 @@ import { linearFitProblems, linearFitResultProblems, runLinearFit, withFittedCon
 import { buildMolecule } from "./buildMolecule.ts";
 import { linearSemanticProblems } from "./linearChecks.ts";
 import { linearMoleculeFileSchema, type LinearMoleculeFile } from "./linearSchema.ts";
-import { identityProblems } from "./identityChecks.ts";
+import type { Found } from "./identityChecks.ts";
 import type { ParseOptions, ParseResult } from "./parseResult.ts";
-import type { Problem } from "./problems.ts";
+import { sortProblems, withFileChecks, type Problem } from "./problems.ts";
 
 type Path = ReadonlyArray<string | number>;
 type Locate = (path: Path, message: string) => Problem;
 
-/** Validates and builds a `structure: linear` file; problems are located like the diatomic form's. */
-export function parseLinearMolecule(raw: unknown, file: string, expectedId: string | null, located: Locate, options: ParseOptions = {}): ParseResult {
+/**
+ * Validates and builds a \`structure: linear\` file; problems are located like the diatomic form's.
+ * \`fileChecks\` are the placeholder and identity problems found on the raw file: reported with
+ * the schema's, the fit's or the semantic checks' problems, so one run lists them all.
+ */
+export function parseLinearMolecule(
+  raw: unknown,
+  file: string,
+  expectedId: string | null,
+  located: Locate,
+  options: ParseOptions = {},
+  fileChecks: Found[] = [],
+): ParseResult {
   const problems: Problem[] = [];
   const parsed = linearMoleculeFileSchema.safeParse(raw);
   if (!parsed.success) {
@@ -22,21 +33,17 @@ export function parseLinearMolecule(raw: unknown, file: string, expectedId: stri
         issue.keys.forEach((key, i) => problems.push(located([...path, key], i === 0 ? messages[0] : `unknown field ${messages[i]}`)));
       } else problems.push(located(path, issue.message));
     }
-  } else {
-    const fitted = fitLinearFile(parsed.data, options);
-    if ("problems" in fitted) {
-      for (const { path, message } of fitted.problems) problems.push(located(path, message));
-      problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
-      return { ok: false, problems };
-    }
-    const { data, fits } = fitted;
-    for (const { path, message } of [...identityProblems(data, expectedId), ...linearSemanticProblems(data)]) problems.push(located(path, message));
-    if (!problems.length) {
-      return { ok: true, molecule: buildMolecule(data, file, { linearFits: fits }), data: parsed.data, linearFits: fits };
-    }
+    return { ok: false, problems: withFileChecks(problems, fileChecks, located) };
   }
-  problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
-  return { ok: false, problems };
+  const fitted = fitLinearFile(parsed.data, options);
+  if ("problems" in fitted) {
+    for (const { path, message } of [...fileChecks, ...fitted.problems]) problems.push(located(path, message));
+    return { ok: false, problems: sortProblems(problems) };
+  }
+  const { data, fits } = fitted;
+  for (const { path, message } of [...fileChecks, ...linearSemanticProblems(data)]) problems.push(located(path, message));
+  if (!problems.length) return { ok: true, molecule: buildMolecule(data, file, { linearFits: fits }), data: parsed.data, linearFits: fits };
+  return { ok: false, problems: sortProblems(problems) };
 }
 
 /**

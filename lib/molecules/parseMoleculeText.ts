@@ -4,8 +4,10 @@ import { buildMolecule } from "./buildMolecule.ts";
 import { fitResultProblems, referenceSpeciesIndex, runFileFit, type FileFit } from "./fileFit.ts";
 import { diatomicProblems } from "./diatomicChecks.ts";
 import { identityProblems } from "./identityChecks.ts";
-import { formatPath, type Problem } from "./problems.ts";
-import { diatomicFileSchema } from "./schema.ts";
+import { formatPath, sortProblems, withFileChecks, type Problem } from "./problems.ts";
+import type { z } from "zod";
+import { diatomicFileSchema, type DiatomicMoleculeFile, type IdentityFields } from "./schema.ts";
+import { linearMoleculeFileSchema } from "./linearSchema.ts";
 import { parseLinearMolecule } from "./parseLinearMolecule.ts";
 import type { ParseOptions, ParseResult } from "./parseResult.ts";
 
@@ -110,7 +112,11 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
     return { file, line: pos?.line ?? null, column: pos?.column ?? null, path: formatPath(path), message };
   };
   const structure = (raw as { structure?: unknown }).structure;
-  if (structure === "linear") return parseLinearMolecule(raw, file, expectedId, located, options);
+  // Placeholders and identity (id, CAS, elements, links) are checked on every field that passes its
+  // own schema, even when others fail, so one run of \`check\` lists every problem it can see.
+  const fields = validFields(structure === "linear" ? linearMoleculeFileSchema : diatomicFileSchema, raw);
+  const fileChecks = [...placeholderProblems(raw, []), ...identityProblems(fields, expectedId)];
+  if (structure === "linear") return parseLinearMolecule(raw, file, expectedId, located, options, fileChecks);
   if (structure !== undefined && structure !== "diatomic")
     return {
       ok: false,
@@ -130,10 +136,14 @@ export function parseMoleculeText(text: string, file: string, expectedId: string
         (issue.keys ?? []).forEach((key, i) => problems.push(located([...path, key], i === 0 ? messages[0] : `unknown field ${messages[i]}`)));
       } else problems.push(located(path, issue.message));
     }
-    return { ok: false, problems: sortProblems(problems) };
+    // The diatomic checks (states, isotopes, bands, sources of constants) need only some fields:
+    // when those passed the schema, they run too.
+    const given = raw as Record<string, unknown>;
+    const ready = diatomicCheckFields.every((key) => key in fields || (optionalForDiatomicChecks.includes(key) && given[key] === undefined));
+    const semantic = ready ? diatomicProblems(fields as DiatomicMoleculeFile) : [];
+    return { ok: false, problems: withFileChecks(problems, [...fileChecks, ...semantic], located) };
   }
-  for (const { path, message } of [...placeholderProblems(raw, []), ...identityProblems(parsed.data, expectedId), ...diatomicProblems(parsed.data)])
-    problems.push(located(path, message));
+  for (const { path, message } of [...fileChecks, ...diatomicProblems(parsed.data)]) problems.push(located(path, message));
   if (problems.length) return { ok: false, problems: sortProblems(problems) };
   // The build and the check re-run every fit, so a file's constants cannot drift from their lines.
   let fileFit: FileFit | null = null;
@@ -198,6 +208,20 @@ function placeholderProblems(node: unknown, path: Array<string | number>): Array
   return [];
 }
 
-function sortProblems(problems: Problem[]): Problem[] {
-  return problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
+/** The fields diatomicProblems reads; the last two may be left out of a file. */
+const diatomicCheckFields = ["electronicState", "atoms", "species", "sources", "intensity", "referenceLines"];
+const optionalForDiatomicChecks = ["intensity", "referenceLines"];
+
+/**
+ * The top-level fields of a file that pass their own part of the schema, parsed, so the checks
+ * beyond the schema can run on them while other fields are wrong (they skip what is missing).
+ */
+function validFields(schema: typeof diatomicFileSchema | typeof linearMoleculeFileSchema, raw: unknown): Partial<IdentityFields> {
+  const out: Record<string, unknown> = {};
+  const fields = raw as Record<string, unknown>;
+  for (const [key, part] of Object.entries(schema.shape as Record<string, z.ZodType>)) {
+    const result = part.safeParse(fields[key]);
+    if (result.success && result.data !== undefined) out[key] = result.data;
+  }
+  return out as Partial<IdentityFields>;
 }

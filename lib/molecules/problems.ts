@@ -31,3 +31,24 @@ export class MoleculeFileError extends Error {
     this.problems = problems;
   }
 }
+
+/** Problems in the order of the file, so a contributor fixes them from the top down. */
+export function sortProblems(problems: Problem[]): Problem[] {
+  return problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
+}
+
+/**
+ * The schema's problems with the placeholder and identity problems added, less those at a place
+ * the schema already reported, or inside it ("REPLACE" where a number belongs is said once, as a
+ * wrong type).
+ */
+export function withFileChecks(
+  schemaProblems: Problem[],
+  fileChecks: ReadonlyArray<{ path: ReadonlyArray<string | number>; message: string }>,
+  located: (path: ReadonlyArray<string | number>, message: string) => Problem,
+): Problem[] {
+  const reported = schemaProblems.map((p) => p.path);
+  const within = (path: string) => reported.some((r) => path === r || r === "" || path.startsWith(`${r}.`) || path.startsWith(`${r}[`));
+  const more = fileChecks.map(({ path, message }) => located(path, message)).filter((p) => !within(p.path));
+  return sortProblems([...schemaProblems, ...more]);
+}
