@@ -9,6 +9,7 @@ import {
   fourierFwhmPerResolution,
   robustWavenumberCorrection,
   fitWavenumberCorrection,
+  defaultSpectrumCalibrationRules,
   type CorrectionModel,
 } from "../lib/core/index.ts";
 import { calibrateMeasuredSpectrum, cellModel, defaultCellConditions, type CellModel } from "../lib/atlas/index.ts";
@@ -205,5 +206,40 @@ describe("refusals", () => {
     expect(() => calibrateMeasuredSpectrum(cell, { ...measured, resolutionCm: 0.5 }, { conditions, apodization: "triangular", model: "scale" })).toThrow(
       /spectrum is saturated: \d+ % of the points .* lower the pressure, dilute the gas or shorten the path/,
     );
+  });
+
+  const coAt = (resolutionCm: number, error: Miscalibration, seed: number) => {
+    const [from, to] = ranges.co;
+    const truth = trueSpectrum(cellOf("co"), defaultCellConditions, resolutionCm, "triangular", from - 5, to + 5);
+    return measuredSpectrum(truth, from, to, resolutionCm / 4, error, seededRandom(seed));
+  };
+  const settings = (model: CorrectionModel) => ({ conditions: defaultCellConditions, apodization: "triangular" as const, model });
+
+  it("refuses a spectrum whose lines point down once read as absorbance (a transmittance taken for absorbance)", () => {
+    const m = coAt(0.5, clean, 5);
+    const asTransmittance = m.absorbance.map((a) => Math.pow(10, -a));
+    expect(() =>
+      calibrateMeasuredSpectrum(cellOf("co"), { wavenumberCm: m.wavenumberCm, absorbance: asTransmittance, resolutionCm: 0.5 }, settings("scale")),
+    ).toThrow(/does not look like absorption: its peaks point downward/);
+  });
+
+  it("refuses a model whose terms the lines cannot tell apart (correlation beyond the stated 0.99)", () => {
+    // Two narrow clusters of lines, 2010–2030 and 2230–2250 cm⁻¹: (measured − centre)² is nearly
+    // one value, so the quadratic term and the offset at the centre are one (our own invented points).
+    const points = [2010, 2015, 2020, 2025, 2030, 2230, 2235, 2240, 2245, 2250].map((x) => ({ measuredCm: x, referenceCm: x * (1 + 2e-5), sigmaCm: 0.001 }));
+    expect(fitWavenumberCorrection("quadratic", points).maxTermCorrelation).toBeGreaterThan(0.99);
+    expect(fitWavenumberCorrection("linear", points).maxTermCorrelation).toBeLessThan(0.5);
+    // The refusal itself, on a CO spectrum whose quadratic terms correlate at about 0.8 (both
+    // branches), with the threshold lowered below that.
+    const m = coAt(0.5, { ...clean, scale: 20e-6 }, 6);
+    const rules = { ...defaultSpectrumCalibrationRules, maxTermCorrelation: 0.5 };
+    expect(() => calibrateMeasuredSpectrum(cellOf("co"), { ...m, resolutionCm: 0.5 }, { ...settings("quadratic"), rules })).toThrow(
+      /terms cannot be told apart by these lines \(correlation 0\.\d+ > 0\.5\): use a simpler model \(--model linear\), a wider range, or a spectrum with a second band/,
+    );
+  });
+
+  it("refuses a correction at the edge of the search (a scale error of 495 ppm, the search reaching 500)", () => {
+    const m = coAt(0.5, { ...clean, scale: 495e-6 }, 7);
+    expect(() => calibrateMeasuredSpectrum(cellOf("co"), { ...m, resolutionCm: 0.5 }, settings("scale"))).toThrow(/lies at the edge of the search/);
   });
 });

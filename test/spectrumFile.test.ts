@@ -274,15 +274,16 @@ describe("CSV, TSV and other column text", () => {
     expect(labelledT.notes.join(" ")).toMatch(/The file says "T" but its values reach 91\.14, so they were read as percent transmittance/);
   });
 
-  it("lets --x and --y override the file and says so", () => {
-    const s = readFixture("percent-t.csv", { ordinate: "absorbance" });
-    expect([s.ordinate, s.ordinateFrom]).toEqual(["absorbance", "option"]);
-    expect(s.absorbance[0]).toBe(91.14);
-    expect(s.notes).toContain('The file gives the y values as "%T"; --y absorbance was used instead, as asked.');
-    const micrometres = readSpectrumText(csv(Array.from({ length: 20 }, (_, i) => [2.5 + i, 0.1])), "um.csv", { abscissa: "um" });
-    expect([micrometres.abscissaUnit, micrometres.abscissaFrom]).toEqual(["um", "option"]);
-    expect(micrometres.wavenumberCm[19]).toBeCloseTo(1e4 / 2.5, 9);
-    expect(micrometres.notes).toContain('The file gives the x unit as "Wavenumber (cm-1)"; --x um was used instead, as asked.');
+  it("refuses a --x or --y that contradicts the file's own label (issue 20: a transmittance option on an absorbance file gave a confident wrong correction)", () => {
+    expect(() => readFixture("percent-t.csv", { ordinate: "absorbance" })).toThrow(
+      /percent-t\.csv: the file gives its y values as "%T" \(percent transmittance\), which --y absorbance contradicts; leave out --y/,
+    );
+    expect(() => readSpectrumText(csv(Array.from({ length: 20 }, (_, i) => [2.5 + i, 0.1])), "um.csv", { abscissa: "um" })).toThrow(
+      /um\.csv: the file gives its x values as "Wavenumber \(cm-1\)" \(cm-1\), which --x um contradicts/,
+    );
+    // Transmittance on another scale is the same quantity: --y percent on a "%T"-labelled file is no contradiction.
+    const s = readFixture("percent-t.csv", { ordinate: "percent-transmittance" });
+    expect([s.ordinate, s.ordinateFrom]).toEqual(["percent-transmittance", "option"]);
   });
 });
 

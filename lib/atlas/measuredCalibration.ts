@@ -153,6 +153,29 @@ function shareFinder(cell: CellModel, pressureShiftUncertaintyCm: number): (line
   };
 }
 
+/**
+ * A spectrum whose lines point the wrong way once converted to absorbance (a transmittance read as
+ * absorbance, or the reverse): in [fromCm, toCm] the values reach much further below their median
+ * than above it, or most of them are negative. Null when it looks like absorbance; else why not.
+ */
+export function invertedSpectrumReason(measured: MeasuredAbsorbance, fromCm: number, toCm: number): string | null {
+  const values: number[] = [];
+  for (let i = 0; i < measured.wavenumberCm.length; i++) {
+    const x = measured.wavenumberCm[i];
+    if (x >= fromCm && x <= toCm) values.push(measured.absorbance[i]);
+  }
+  if (values.length < 16) return null;
+  const sorted = values.sort((a, b) => a - b);
+  const at = (q: number) => sorted[Math.round(q * (sorted.length - 1))];
+  const median = at(0.5);
+  const down = median - at(0.005);
+  const up = at(0.995) - median;
+  const negative = sorted.filter((v) => v < -0.05).length / sorted.length;
+  if (negative > 0.5) return `${(100 * negative).toFixed(0)} % of its absorbance values are below −0.05`;
+  if (down > 2 * up && down > 0.02) return `its peaks point downward (down to ${down.toFixed(2)} below the median, up to only ${up.toFixed(2)} above)`;
+  return null;
+}
+
 /** Calibrate a measured spectrum of one gas against the atlas's predicted spectrum (pure: runs in the browser too). */
 export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbsorbance, settings: MeasuredCalibrationSettings): MeasuredCalibration {
   const rules = settings.rules ?? defaultSpectrumCalibrationRules;
@@ -170,6 +193,16 @@ export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbs
     const hi = Math.max(...listed.map((l) => l.wavenumber));
     throw new CalibrationRefused(
       `the spectrum covers ${measuredFrom.toFixed(1)}–${measuredTo.toFixed(1)} cm⁻¹, where ${gasName(cell)} has no lines (its lines lie at ${lo.toFixed(0)}–${hi.toFixed(0)} cm⁻¹)`,
+    );
+  }
+  const inRangeFrom = Math.min(...inRange.map((l) => l.wavenumber));
+  const inRangeTo = Math.max(...inRange.map((l) => l.wavenumber));
+  // A black band also reaches far from its median: the saturation message comes first (below).
+  const inverted =
+    saturatedFraction(measured, inRangeFrom, inRangeTo, rules.saturationAbsorbance) > 0.05 ? null : invertedSpectrumReason(measured, inRangeFrom, inRangeTo);
+  if (inverted) {
+    throw new CalibrationRefused(
+      `the spectrum, read as absorbance, does not look like absorption: ${inverted}; check what its y values are (--y transmittance, percent or absorbance)`,
     );
   }
   const { peaks: allPeaks, noiseAbsorbance } = absorptionPeaks(x, measured.absorbance, 5);

@@ -30,25 +30,28 @@ export function componentsFromCovariance(keys: readonly Key[], covariance: numbe
  * Estimated size of the first Dunham terms a table leaves out: for each power l of J(J+1) the
  * next vibrational term Y_{K+1,l} and, at k = 0, the next rotational term Y_{0,L+1}, each taken as
  * the ratio of the last two terms it continues (|Y_{K+1,l}| ≈ Y_Kl²/|Y_{K−1,l}|). The Dunham
- * series of a diatomic falls off roughly geometrically in both indices (successive terms shrink
- * by about (Be/ωe)^(1/2) per k and Be/ωe per l; Dunham 1932, Huber & Herzberg 1979, introduction),
- * so this is an order-of-magnitude bound of our own on what the truncation misses, not a value.
+ * series of a diatomic falls off roughly geometrically in both indices: Y_kl ∝ μ^−(k/2+l) (Dunham
+ * 1932), so in size Y_kl ~ ωe·(Be/ωe)^(k+2l−1), a step of Be/ωe per k and (Be/ωe)² per l. This is
+ * an order-of-magnitude bound of our own on what the truncation misses, not a value.
  *
  * For the vibrational energies (l = 0) the ratio alone is not enough: a handbook table is often
- * the first terms of a longer fit, whose next term is not small by the ratio of the two before it
- * (12C16O cut to ωe, ωexe, ωeye misses its Y40 by 8× under the ratio rule; H35Cl's printed
- * ωe, ωexe, ωeye leave out a term that moves the 1-0 origin by about 0.06 cm⁻¹, 13× the ratio
- * estimate). There the estimate is at least |Y_K0|·(Be/ωe)^(1/2), the geometric step itself.
- * test/omittedTerms.test.ts checks both cases: the ± covers every known miss and is at most
- * about 5× it at the median.
+ * the first terms of a longer fit, whose next term is not small by the ratio of the two before it.
+ * In Dunham's ordering Y_k0 ≈ C_k·ωe·(Be/ωe)^(k−1) with C_k of order one for the first terms, but
+ * the next coefficient is larger: C_4 ≈ 45 for 12C16O (Farrenq et al. 1991) and ≈ 92 for H35Cl
+ * (ωeze, from memory) where C_3 ≈ 6 for both; the ratio rule misses these Y40 by 8× (CO) and 13×
+ * (HCl). There the estimate is at least vibrationalStepFactor·(Be/ωe)·|Y_K0|, a factor of our own
+ * set from these two molecules (1.3× their true Y40 for HCl, 2.7× for CO) and tested on them
+ * (test/omittedTerms.test.ts, test/correctionCoverage.test.ts); other molecules inherit it untested.
  */
+const vibrationalStepFactor = 20;
+
 export function omittedTermEstimates(dunham: readonly DunhamCoefficient[]): Array<Key & { sizeCm: number }> {
   const value = (k: number, l: number) => dunham.find((c) => c.k === k && c.l === l)?.valueCm;
   const out: Array<Key & { sizeCm: number }> = [];
   const ls = [...new Set(dunham.map((c) => c.l))].sort((a, b) => a - b);
   const y01 = value(0, 1);
   const y10Value = value(1, 0);
-  const vibrationalStep = y01 && y10Value ? Math.sqrt(Math.abs(y01 / y10Value)) : 0;
+  const vibrationalStep = y01 && y10Value ? vibrationalStepFactor * Math.abs(y01 / y10Value) : 0;
 
   for (const l of ls) {
     const ks = dunham.filter((c) => c.l === l).map((c) => c.k);

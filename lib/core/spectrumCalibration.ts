@@ -49,6 +49,13 @@ export interface SpectrumCalibrationRules {
    * floor, common practice, no source; its coverage is tested on distorted synthetic spectra).
    */
   peakFloorFraction: number;
+  /** Refuse a model two of whose fitted terms correlate beyond this (our own rule, common practice, no source). */
+  maxTermCorrelation: number;
+  /**
+   * Refuse a best assignment within this fraction of the search's edge: the instrument's error
+   * may lie beyond what was searched, and a vote cut off at the edge is not a maximum.
+   */
+  edgeFraction: number;
   bounds: ScaleSearchBounds;
 }
 
@@ -58,7 +65,9 @@ export const defaultSpectrumCalibrationRules: SpectrumCalibrationRules = {
   strongNeighbourResolutions: 3,
   minMatchedFraction: 0.5,
   ambiguityRatio: 0.8,
-  peakFloorFraction: 0.02,
+  peakFloorFraction: 0.01,
+  maxTermCorrelation: 0.99,
+  edgeFraction: 0.98,
   bounds: defaultScaleSearchBounds,
 };
 
@@ -239,6 +248,28 @@ export function calibrateSpectrum(
   }
   const points: CorrectionPoint[] = candidates.map((l) => ({ measuredCm: l.peak!.wavenumberCm, referenceCm: l.reference.referenceCm!, sigmaCm: l.sigmaCm! }));
   const { correction, rejected } = robustWavenumberCorrection(model, points);
+  // A correction at the edge of the searched region: the vote was cut off there, and the
+  // instrument's error may lie beyond it (or the peaks are not of this gas). A one-term model is
+  // judged by its term; any model by the shift it gives the lines it used, against the search's
+  // reach there (maxOffset + maxScale·ν).
+  const maxScale = rules.bounds.maxScalePpm * 1e-6;
+  const atEdge =
+    (model === "scale" && Math.abs(correction.scale) >= rules.edgeFraction * maxScale) ||
+    (model === "offset" && Math.abs(correction.offsetCm) >= rules.edgeFraction * rules.bounds.maxOffsetCm) ||
+    points.some(
+      (p) =>
+        Math.abs(correctedWavenumber(correction, p.measuredCm) - p.measuredCm) >= rules.edgeFraction * (rules.bounds.maxOffsetCm + maxScale * p.measuredCm),
+    );
+  if (atEdge) {
+    throw new CalibrationRefused(
+      `the correction found lies at the edge of the search (k = ${fmt(correction.scale * 1e6, 0)} ppm, c = ${fmt(correction.offsetCm, 3)} cm⁻¹; the search covers ${reach}): the instrument's error may be larger than that, or the spectrum is not of ${gasName}`,
+    );
+  }
+  if (correction.maxTermCorrelation > rules.maxTermCorrelation) {
+    throw new CalibrationRefused(
+      `the ${model} model's terms cannot be told apart by these lines (correlation ${correction.maxTermCorrelation.toFixed(3)} > ${rules.maxTermCorrelation}): use a simpler model (--model ${model === "quadratic" ? "linear" : "scale"}), a wider range, or a spectrum with a second band`,
+    );
+  }
   for (const i of rejected) {
     const line = candidates[i];
     const residual = points[i].referenceCm - correctedWavenumber(correction, points[i].measuredCm);

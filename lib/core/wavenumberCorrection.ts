@@ -34,6 +34,11 @@ export interface WavenumberCorrection {
   scaleOffsetCorrelation: number;
   reducedChiSquared: number;
   degreesOfFreedom: number;
+  /**
+   * The largest |correlation| between two fitted terms as the fit takes them (the measured
+   * wavenumber about the lines' weighted centre): near 1, the lines cannot tell the terms apart.
+   */
+  maxTermCorrelation: number;
 }
 
 export function correctedWavenumber(c: WavenumberCorrection, measuredCm: WavenumberCm): WavenumberCm {
@@ -88,6 +93,7 @@ export function fitWavenumberCorrection(model: CorrectionModel, points: readonly
     scaleOffsetCorrelation: 0,
     reducedChiSquared: fit.reducedChiSquared,
     degreesOfFreedom: fit.degreesOfFreedom,
+    maxTermCorrelation: fit.correlation.reduce((m, row, a) => row.reduce((n, r, b) => (a === b || !Number.isFinite(r) ? n : Math.max(n, Math.abs(r))), m), 0),
   };
   if (model === "scale") return { ...base, scale: fit.parameters[0], scaleUncertainty: fit.uncertainties[0], offsetCm: 0, offsetUncertaintyCm: 0 };
   if (model === "offset") return { ...base, scale: 0, scaleUncertainty: 0, offsetCm: fit.parameters[0], offsetUncertaintyCm: fit.uncertainties[0] };

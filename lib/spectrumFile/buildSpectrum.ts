@@ -35,8 +35,12 @@ const ordinateNames: Record<OrdinateKind, string> = {
 
 function chooseAbscissa(raw: RawSpectrum, options: SpectrumReadOptions, notes: string[]): { unit: AbscissaUnit; from: UnitSource } {
   if (options.abscissa) {
+    // A unit the file states is not overridden: the option would turn every line into another
+    // (a wrong but confident correction), so a contradiction is refused.
     if (raw.abscissa && raw.abscissa.unit !== options.abscissa) {
-      notes.push(`The file gives the x unit as "${raw.abscissa.words}"; --x ${options.abscissa} was used instead, as asked.`);
+      throw new SpectrumFileError(
+        `${raw.fileName}: the file gives its x values as "${raw.abscissa.words}" (${raw.abscissa.unit}), which --x ${options.abscissa} contradicts; leave out --x to use the file's unit, or correct the file.`,
+      );
     }
     return { unit: options.abscissa, from: "option" };
   }
@@ -48,6 +52,13 @@ function chooseAbscissa(raw: RawSpectrum, options: SpectrumReadOptions, notes: s
 
 function chooseOrdinate(raw: RawSpectrum, options: SpectrumReadOptions, notes: string[]): { kind: OrdinateKind; from: UnitSource } {
   if (options.ordinate) {
+    // Transmittance and percent transmittance are one quantity on two scales; absorbance is not.
+    const family = (kind: OrdinateKind) => (kind === "absorbance" ? "absorbance" : "transmittance");
+    if (raw.ordinate && family(raw.ordinate.kind) !== family(options.ordinate)) {
+      throw new SpectrumFileError(
+        `${raw.fileName}: the file gives its y values as "${raw.ordinate.words}" (${ordinateNames[raw.ordinate.kind]}), which --y ${options.ordinate} contradicts; leave out --y to use the file's label, or correct the file.`,
+      );
+    }
     if (raw.ordinate && raw.ordinate.kind !== options.ordinate) {
       notes.push(`The file gives the y values as "${raw.ordinate.words}"; --y ${options.ordinate} was used instead, as asked.`);
     }

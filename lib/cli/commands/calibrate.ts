@@ -30,7 +30,8 @@ least squares. Refuses when the data do not support a correction.
 ${cellConditionsHelp}
   --resolution <cm⁻¹>     FT resolution (1/max. OPD); default: the file's, else estimated from the peak widths
   --apodization <name>    ${apodizations.join(", ")} (default triangular)
-  --x cm-1|um|nm          unit of the file's x values when it does not say
+  --x cm-1|um|nm          unit of the file's x values when it does not say (a file's own
+                          label wins: an --x or --y that contradicts it is refused)
   --y transmittance|percent|absorbance   what the file's y values are when it does not say
   --format table|json     readable table (default) or JSON
   --report <file.pdf>     also write a PDF calibration report
