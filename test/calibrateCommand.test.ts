@@ -236,3 +236,36 @@ describe("bad input: one sentence, exit 2, nothing written", () => {
     expect(await refusal(join(dir, "nothing.csv"), "--gas", "hcl")).toMatch(/cannot read .*nothing\.csv: no such file/);
   });
 });
+
+describe("the budget and the references' standing on every output (issue 20)", () => {
+  it("HCl_spectrum.csv: the JSON carries the budget, whose total is the printed ±, and says the references are not validated", async () => {
+    const { stdout, exitCode } = await runCli(["calibrate", hunter, "--gas", "hcl", "--format", "json"]);
+    expect(exitCode).toBe(0);
+    const doc = JSON.parse(stdout);
+    const budget = doc.correction.budget;
+    const parts = budget.parts.map((p: { part: string }) => p.part);
+    expect(parts).toEqual(expect.arrayContaining(["measurement", "omitted-term"]));
+    // The parts are independent: their quadrature sum is the total, and the total is the printed ±.
+    const sum = Math.sqrt(budget.parts.reduce((s: number, p: { scalePpm: number }) => s + p.scalePpm ** 2, 0));
+    expect(sum).toBeCloseTo(budget.totalScalePpm, 0);
+    expect(doc.correction.scalePpmUncertainty).toBeCloseTo(budget.totalScalePpm, 0);
+    // H35Cl P(1) printed from the handbook table misses the measured line by about 0.06 cm⁻¹
+    // (2865.098 cm⁻¹, from memory): a shared 0.06 cm⁻¹ at 2885 cm⁻¹ is 21 ppm, which the ± must cover.
+    expect(budget.totalScalePpm).toBeGreaterThan(15);
+    expect(doc.correction.referenceStanding).toBe("not-validated");
+    expect(doc.correction.referenceStandingNote).toMatch(/this correction is not traceable/);
+  });
+
+  it("the table prints the budget under the box and the standing line inside it", async () => {
+    const { stdout } = await runCli(["calibrate", hunter, "--gas", "hcl"]);
+    expect(stdout).toMatch(/│ references not validated against measured lines \(\d+ of \d+ used\): this correction is not traceable\s+│/);
+    expect(stdout).toMatch(/uncertainty budget\s+σ\(k\) \/ ppm\s+σ\(c\) \/ cm⁻¹\s+sources/);
+    expect(stdout).toMatch(/total \(quadrature sum\)\s+\d+/);
+  });
+
+  it("--require-validated refuses HCl, whose constants no measured line validates, and says why", async () => {
+    const { stderr, exitCode } = await runCli(["calibrate", hunter, "--gas", "hcl", "--require-validated"]);
+    expect(exitCode).not.toBe(0);
+    expect(stderr).toMatch(/validated references were required: 0 of the \d+ lines of hydrogen chloride found .* are validated against measured lines/);
+  });
+});

@@ -41,6 +41,8 @@ export interface MeasuredCalibrationSettings {
   model: CorrectionModel;
   rules?: SpectrumCalibrationRules;
   referenceCriteria?: ReferenceCriteria;
+  /** Refuse rather than use a reference not validated against measured lines. */
+  requireValidated?: boolean;
 }
 
 export type ResolutionOrigin = "option" | "file" | "estimated";
@@ -178,7 +180,7 @@ export function invertedSpectrumReason(measured: MeasuredAbsorbance, fromCm: num
 
 /** Calibrate a measured spectrum of one gas against the atlas's predicted spectrum (pure: runs in the browser too). */
 export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbsorbance, settings: MeasuredCalibrationSettings): MeasuredCalibration {
-  const rules = settings.rules ?? defaultSpectrumCalibrationRules;
+  const rules = { ...(settings.rules ?? defaultSpectrumCalibrationRules), ...(settings.requireValidated ? { requireValidated: true } : {}) };
   const criteria = settings.referenceCriteria ?? defaultReferenceCriteria;
   const x = measured.wavenumberCm;
   const measuredFrom = x[0];

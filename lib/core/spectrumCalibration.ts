@@ -56,6 +56,8 @@ export interface SpectrumCalibrationRules {
    * may lie beyond what was searched, and a vote cut off at the edge is not a maximum.
    */
   edgeFraction: number;
+  /** Use only references validated against measured lines (a traceable correction or none). */
+  requireValidated: boolean;
   bounds: ScaleSearchBounds;
 }
 
@@ -68,6 +70,7 @@ export const defaultSpectrumCalibrationRules: SpectrumCalibrationRules = {
   peakFloorFraction: 0.01,
   maxTermCorrelation: 0.99,
   edgeFraction: 0.98,
+  requireValidated: false,
   bounds: defaultScaleSearchBounds,
 };
 
@@ -229,12 +232,25 @@ export function calibrateSpectrum(
       );
     }
     if (!reference.precise) return reject("uncertain-reference", `reference ± ${reference.referenceUncertaintyCm.toPrecision(2)} cm⁻¹ > resolution/4`);
+    if (rules.requireValidated && reference.positionStatus !== "validated") {
+      return reject(
+        "uncertain-reference",
+        `position ${reference.positionStatus === "extrapolated" ? "extrapolated beyond" : "not validated against"} measured lines, and validated references were required`,
+      );
+    }
     if (peak.signalToNoise < rules.minSignalToNoise) return reject("weak", `signal-to-noise ${fmt(peak.signalToNoise, 1)} < ${rules.minSignalToNoise}`);
     return { reference, peak, residualCm: null, sigmaCm: sigma, measurementSigmaCm: measurementSigma, used: true, reason: null, detail: null };
   });
 
   const candidates = lines.filter((l) => l.used);
   const needed = minimumLines[model];
+  if (rules.requireValidated && candidates.length < needed) {
+    const found = lines.filter((l) => l.peak).length;
+    const validated = lines.filter((l) => l.peak && l.reference.positionStatus === "validated").length;
+    throw new CalibrationRefused(
+      `validated references were required: ${validated} of the ${found} lines of ${gasName} found in ${span} ${validated === 1 ? "is" : "are"} validated against measured lines and usable, the ${model} model needs at least ${needed}`,
+    );
+  }
   if (candidates.length < needed) {
     const saturated = lines.filter((l) => l.reason === "saturated").length;
     if (saturated > 0 && saturated >= lines.filter((l) => l.peak).length / 2) {

@@ -35,6 +35,8 @@ ${cellConditionsHelp}
   --y transmittance|percent|absorbance   what the file's y values are when it does not say
   --format table|json     readable table (default) or JSON
   --report <file.pdf>     also write a PDF calibration report
+  --require-validated     use only references validated against measured lines, and refuse
+                          (saying why) when too few are left: a traceable correction or none
   --molecules <dir>       read molecule files from <dir> instead of the shipped ones
 
 The true wavenumber is measured × (1 + scalePpm·10⁻⁶) + offsetCm. The atlas predicts spectra;
@@ -82,6 +84,7 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
       format: { type: "string" },
       report: { type: "string" },
       molecules: { type: "string" },
+      "require-validated": { type: "boolean" },
     },
     1,
   );
@@ -122,7 +125,13 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
     const calibration = calibrateMeasuredSpectrum(
       cell,
       { wavenumberCm: spectrum.wavenumberCm, absorbance: spectrum.absorbance, resolutionCm: spectrum.resolutionCm },
-      { conditions, apodization, model: model as CorrectionModel, ...(resolutionCm !== undefined ? { resolutionCm } : {}) },
+      {
+        conditions,
+        apodization,
+        model: model as CorrectionModel,
+        ...(resolutionCm !== undefined ? { resolutionCm } : {}),
+        requireValidated: values["require-validated"] === true,
+      },
     );
     const run: CalibrationRun = {
       gas: molecule.id,
