@@ -3,6 +3,9 @@ import { standardAtmospherePa } from "../core/index.ts";
 import type { MeasuredCalibration } from "../atlas/index.ts";
 import type { MeasuredSpectrum } from "../spectrumFile/index.ts";
 import { budgetDocument, budgetTable, referenceStanding, referenceStandingLine } from "./correctionBudgetText.ts";
+import { applyCorrectionSentence, residualLines, residualsAfterCorrection } from "./applyCorrectionText.ts";
+import { assumedConditionsNote, assumedWord, noRecordFields, recordFacts, type CalibrationRecordFields } from "./calibrationRecord.ts";
+import { runVerdict, verdictDocument, verdictLines, verdictRule } from "./calibrationVerdict.ts";
 import { textTable } from "./linesTable.ts";
 
 /** Everything one calibration run produced, as the table, the JSON, the page and the report show it. */
@@ -18,6 +21,8 @@ export interface CalibrationRun {
   caution: string;
   /** The molecule file's sources, one citation each. */
   sources: string[];
+  /** Instrument, operator, cell, date, tolerance and the assumed cell conditions (none given: all empty). */
+  record?: CalibrationRecordFields;
 }
 
 /** A value and its standard uncertainty at the uncertainty's second significant digit. */
@@ -47,9 +52,18 @@ export const correctionModelWords = {
   quadratic: "quadratic: true = measured × (1 + k) + c + q·(measured − centre)²",
 } as const;
 
-function conditionsText(c: CellConditions): string {
-  return `${c.pathCm} cm cell, ${c.temperatureK} K, ${((c.pressurePa * 760) / standardAtmospherePa).toPrecision(4)} Torr, mole fraction ${c.moleFraction}`;
+/** The cell's conditions, each one the user did not give marked "assumed". */
+export function conditionsText(c: CellConditions, assumed: ReadonlyArray<keyof CellConditions> = []): string {
+  const mark = (key: keyof CellConditions, text: string) => (assumed.includes(key) ? `${text} (${assumedWord})` : text);
+  return [
+    mark("pathCm", `${c.pathCm} cm cell`),
+    mark("temperatureK", `${c.temperatureK} K`),
+    mark("pressurePa", `${((c.pressurePa * 760) / standardAtmospherePa).toPrecision(4)} Torr`),
+    mark("moleFraction", `mole fraction ${c.moleFraction}`),
+  ].join(", ");
 }
+
+const recordOf = (run: CalibrationRun) => run.record ?? noRecordFields;
 
 /** The correction in words, one line per term, for the table, the page and the report's box. */
 export function correctionLines(run: CalibrationRun): string[] {
@@ -86,6 +100,8 @@ export function calibrationRulesText(run: CalibrationRun): string {
     `a line is used when its reference ± is at most ${k.maxUncertaintyFraction} × resolution, no line ≥ ${100 * k.blendFraction} % as strong lies within one resolution, ` +
     `its peak is ≥ ${r.minSignalToNoise} × the noise, below absorbance ${r.saturationAbsorbance} without a flat top, and no peak twice as high (and ≥ ${r.saturationAbsorbance / 2}) lies within ${r.strongNeighbourResolutions} resolutions; ` +
     `the worst line is rejected while, refitted without it, it lies more than 3 × max(1, √(χ²/ν)) of its σ from the fit. ` +
+    `No peak position is taken as better than ${r.peakFloorFraction} × resolution; a correction at the edge of the search, or whose fitted terms correlate beyond ${r.maxTermCorrelation}, is refused. ` +
+    `The ± of k and c is the budget's total: each error source carried through the fit with its correlation over the lines (shared sources are not averaged down). ` +
     `References are the apparent peaks predicted for this cell and resolution (${Math.round(100 * k.peakShiftUncertaintyFraction)} % of the predicted peak shift is added to their ±), their centres moved by the cited pressure shift where there is one (see the notes).`
   );
 }
@@ -95,6 +111,8 @@ export function calibrationNotes(run: CalibrationRun): string[] {
   const { calibration } = run;
   const { result } = calibration;
   const notes = [...run.spectrum.notes, `${calibration.resolutionNote}.`, ...calibration.set.notes];
+  const assumed = assumedConditionsNote(recordOf(run));
+  if (assumed) notes.unshift(assumed);
   if (run.spectrum.abscissaUnit !== "cm-1") {
     // Optical spectrum analysers and wavemeters often report wavelengths in standard air, whose
     // refractive index would read as a scale error: 1/n − 1 ≈ −2.73·10⁻⁴ from 2000 to 6500 cm⁻¹ (Edlén, core airRefractiveIndexEdlen).
@@ -141,7 +159,17 @@ export function calibrationDocument(run: CalibrationRun) {
   const o = withUncertainty(c.offsetCm, c.offsetUncertaintyCm);
   const q = withUncertainty(c.quadraticPerCm, c.quadraticUncertaintyPerCm);
   const x = run.spectrum.wavenumberCm;
+  const record = recordOf(run);
   return {
+    record: {
+      instrument: record.instrument,
+      operator: record.operator,
+      cell: { id: record.cellId, filledOn: record.cellFilledOn },
+      measuredOn: record.measuredOn,
+      measuredOnFrom: record.measuredOnFrom,
+      tolerance: record.tolerance,
+    },
+    ...verdictDocument(runVerdict(run)),
     gas: run.gas,
     file: run.fileName,
     sha256: run.sha256,
@@ -162,6 +190,12 @@ export function calibrationDocument(run: CalibrationRun) {
       referenceStanding: referenceStanding(result).standing,
       referenceStandingNote: referenceStandingLine(result),
     },
+    apply: applyCorrectionSentence(run),
+    residualsAfterCorrection: residualsAfterCorrection(run).map((r) => ({
+      wavenumberCm: Number(r.wavenumberCm.toFixed(4)),
+      expandedUncertaintyCm: Number(r.expandedCm.toPrecision(2)),
+      afterLaserOnlyCm: r.afterLaserOnlyCm === null ? null : Number(r.afterLaserOnlyCm.toPrecision(3)),
+    })),
     rmsResidualCm: Number(result.rmsResidualCm.toPrecision(2)),
     linesUsed: result.usedCount,
     lines: result.lines.map((l) => ({
@@ -175,7 +209,7 @@ export function calibrationDocument(run: CalibrationRun) {
       reason: l.reason,
       detail: l.detail,
       referenceUncertainty: Number(l.reference.referenceUncertaintyCm.toPrecision(2)),
-      measuredUncertainty: l.peak ? Number(l.peak.wavenumberUncertaintyCm.toPrecision(2)) : null,
+      measuredUncertainty: l.measurementSigmaCm === null ? null : Number(l.measurementSigmaCm.toPrecision(2)),
       positionStatus: l.reference.positionStatus,
       wavenumber: position(l.reference.wavenumber),
       relativeStrength: Number(l.reference.relativeToStrongest.toPrecision(3)),
@@ -183,6 +217,7 @@ export function calibrationDocument(run: CalibrationRun) {
     resolution: { cm: calibration.resolutionCm, from: calibration.resolutionFrom, note: calibration.resolutionNote },
     apodization: calibration.apodization,
     conditions: run.conditions,
+    conditionsAssumed: record.assumedConditions,
     spectrum: {
       format: run.spectrum.format,
       points: x.length,
@@ -212,7 +247,7 @@ export function calibrationLineRows(run: CalibrationRun): { headings: string[]; 
     (l.reference.referenceCm ?? l.reference.wavenumber).toFixed(calibrationPositionDigits),
     l.reference.referenceUncertaintyCm.toPrecision(2),
     l.peak ? l.peak.wavenumberCm.toFixed(calibrationPositionDigits) : "—",
-    l.peak ? l.peak.wavenumberUncertaintyCm.toPrecision(2) : "—",
+    l.measurementSigmaCm === null ? "—" : l.measurementSigmaCm.toPrecision(2),
     l.residualCm === null ? "—" : signed(l.residualCm.toFixed(calibrationPositionDigits)),
     l.used ? "yes" : "no",
     l.reason ? `${rejectionWords[l.reason]}: ${l.detail}` : "",
@@ -228,18 +263,25 @@ export function calibrationText(run: CalibrationRun): string {
   const box = correctionLines(run);
   const width = Math.max(...box.map((l) => l.length)) + 2;
   const budget = budgetTable(calibration.result);
+  const record = recordOf(run);
+  const verdict = runVerdict(run);
   return [
     `Wavenumber calibration of ${run.fileName} against ${run.gasName}`,
+    ...recordFacts(record).map((f) => `${f.label}: ${f.value}`),
     `file SHA-256 ${run.sha256}`,
     `spectrum: ${run.spectrum.format === "jcamp-dx" ? "JCAMP-DX" : "CSV"}, ${x.length} points, ${x[0].toFixed(2)}–${x[x.length - 1].toFixed(2)} cm⁻¹` +
       (run.spectrum.title ? `, "${run.spectrum.title}"` : "") +
       (run.spectrum.instrument ? `, instrument ${run.spectrum.instrument}` : ""),
-    `cell: ${conditionsText(run.conditions)}; FT resolution ${calibration.resolutionCm} cm⁻¹ (${calibration.resolutionFrom}), ${calibration.apodization} apodization`,
+    `cell: ${conditionsText(run.conditions, record.assumedConditions)}; FT resolution ${calibration.resolutionCm} cm⁻¹ (${calibration.resolutionFrom}), ${calibration.apodization} apodization`,
     `model: ${correctionModelWords[calibration.result.correction.model]}`,
     "",
     `┌${"─".repeat(width)}┐`,
     ...box.map((l) => `│ ${l.padEnd(width - 1)}│`),
     `└${"─".repeat(width)}┘`,
+    ...(verdict ? ["", ...verdictLines(verdict), verdictRule] : []),
+    "",
+    applyCorrectionSentence(run),
+    ...residualLines(run),
     "",
     textTable(budget.headings, budget.rows, budget.rightAligned),
     "",
@@ -264,6 +306,7 @@ export interface CalibrationFact {
 export function calibrationReportFacts(run: CalibrationRun): { spectrum: CalibrationFact[]; cell: CalibrationFact[] } {
   const { calibration, spectrum } = run;
   const x = spectrum.wavenumberCm;
+  const record = recordOf(run);
   const facts: CalibrationFact[] = [
     { label: "file", value: run.fileName },
     { label: "SHA-256", value: run.sha256, mono: true },
@@ -277,7 +320,7 @@ export function calibrationReportFacts(run: CalibrationRun): { spectrum: Calibra
     spectrum: facts,
     cell: [
       { label: "gas", value: `${run.gasName} (${run.gas})` },
-      { label: "cell", value: conditionsText(run.conditions) },
+      { label: "cell", value: conditionsText(run.conditions, record.assumedConditions) },
       { label: "FT resolution", value: `${calibration.resolutionCm} cm⁻¹ (${calibration.resolutionFrom})` },
       { label: "apodization", value: calibration.apodization },
     ],
