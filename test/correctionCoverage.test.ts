@@ -237,3 +237,28 @@ describe("real spectra: parts calibrated separately agree within their printed �
     expect(Math.abs(a.scale - b.scale)).toBeLessThanOrEqual(a.scaleUncertainty + b.scaleUncertainty);
   });
 });
+
+describe("a shared error stays shared", () => {
+  it("an invented acetylene cell at 50 Torr: the cited pressure shift's ± moves every line together and enters k whole, not averaged down", () => {
+    const cell = cellOf("c2h2");
+    const conditions = { ...defaultCellConditions, pressurePa: (50 * 101325) / 760 };
+    const truth = trueSpectrum(cell, conditions, 0.1, "triangular", 6440, 6640);
+    const m = measuredSpectrum(
+      truth,
+      6450,
+      6630,
+      0.025,
+      { scale: 20e-6, offsetCm: 0, noiseAbsorbance: 0.003, tiltPerCm: 0, baselineAbsorbance: 0.01 },
+      seededRandom(3),
+    );
+    const { result, set } = calibrateMeasuredSpectrum(cell, { ...m, resolutionCm: 0.1 }, { conditions, apodization: "triangular", model: "scale" });
+    const shiftSigmaCm = set.pressureShift.uncertaintyCm;
+    expect(shiftSigmaCm).toBeGreaterThan(0);
+    // One common shift δ of every line moves a scale-only fit by δ/ν̄ (ν̄ ≈ 6550 cm⁻¹ here).
+    const row = result.budget.rows.find((r) => r.part === "pressure-shift")!;
+    const centre = result.correction.centreCm;
+    expect(row.scaleSigma).toBeCloseTo(shiftSigmaCm / centre, 9);
+    expect(result.correction.scaleUncertainty).toBeGreaterThanOrEqual(row.scaleSigma);
+    expect(result.usedCount).toBeGreaterThan(20);
+  });
+});
