@@ -1,6 +1,8 @@
-import { AtlasLookupError } from "../atlas/index.ts";
-import { CoreInputError } from "../core/index.ts";
-import { formatProblem, MoleculeFileError } from "../molecules/index.ts";
+// The error classes from their own files, not the folders' indexes: `bandatlas --help` and every
+// command start here, and the indexes would load the whole atlas first.
+import { AtlasLookupError } from "../atlas/selectSpecies.ts";
+import { CoreInputError } from "../core/coreInputError.ts";
+import { formatProblem, MoleculeFileError } from "../molecules/problems.ts";
 import { commands } from "./commands/index.ts";
 import { UsageError } from "./usageError.ts";
 
@@ -30,7 +32,7 @@ export async function runCli(argv: string[]): Promise<{ stdout: string; stderr: 
     return { stdout: "", stderr: `bandatlas: unknown command "${name}"; commands: ${Object.keys(commands).join(", ")} (see bandatlas --help)\n`, exitCode: 2 };
   }
   try {
-    const result = await command.run(rest);
+    const result = await (await command.load()).run(rest);
     return typeof result === "string"
       ? { stdout: result, stderr: "", exitCode: 0 }
       : { stdout: result.exitCode === 0 ? result.output : "", stderr: result.exitCode === 0 ? "" : result.output, exitCode: result.exitCode };
