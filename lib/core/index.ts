@@ -54,3 +54,5 @@ export * from "./absorptionPeaks.ts";
 export * from "./spectrumCalibration.ts";
 export * from "./spectrumNoise.ts";
 export * from "./peakVertex.ts";
+export * from "./toleranceVerdict.ts";
+export * from "./controlLimits.ts";

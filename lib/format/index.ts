@@ -11,3 +11,7 @@ export * from "./lineColumns.ts";
 export * from "./findText.ts";
 export * from "./spectrumCalibrationText.ts";
 export * from "./correctionBudgetText.ts";
+export * from "./calibrationRecord.ts";
+export * from "./calibrationVerdict.ts";
+export * from "./applyCorrectionText.ts";
+export * from "./calibrationLog.ts";

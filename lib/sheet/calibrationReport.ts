@@ -1,6 +1,21 @@
 import { createRequire } from "node:module";
 import { drawCalibrationBudget } from "./calibrationBudgetTable.ts";
-import { calibrationNotes, calibrationReportFacts, calibrationRulesText, correctionLines, correctionModelWords, type CalibrationRun } from "../format/index.ts";
+import {
+  applyCorrectionSentence,
+  calibrationNotes,
+  calibrationReportFacts,
+  calibrationRulesText,
+  correctionLines,
+  correctionModelWords,
+  noRecordFields,
+  recordFacts,
+  residualLines,
+  runVerdict,
+  verdictWords,
+  checkLine,
+  verdictRule,
+  type CalibrationRun,
+} from "../format/index.ts";
 import { describeBuild } from "../shared/buildIdentity.ts";
 import { drawCalibrationLineTable } from "./calibrationLineTable.ts";
 import { CalibrationPageFlow } from "./calibrationPageFlow.ts";
@@ -12,7 +27,9 @@ import {
   drawReportFooter,
   drawReportHeader,
   drawReportReminder,
+  drawReviewLines,
   drawSectionHeading,
+  drawVerdictBox,
   reportFooterHeightPt,
   reportMonoFont,
   reportMonoFontFile,
@@ -55,13 +72,24 @@ function lay(doc: PDFKit.PDFDocument, run: CalibrationRun, build: SheetBuildIden
   flow.y = drawReportCaution(doc, run.caution, x, flow.y, width);
 
   const facts = calibrationReportFacts(run);
-  drawSectionHeading(flow, "Spectrum file", 40);
-  drawFacts(flow, facts.spectrum);
+  // Page 1 is the record a reviewer signs: who, what, when, the answer, the verdict, the budget.
+  drawSectionHeading(flow, "Record", 40);
+  drawFacts(flow, [...recordFacts(run.record ?? noRecordFields), ...facts.spectrum.slice(0, 2)]);
   drawSectionHeading(flow, "Cell and instrument", 40);
   drawFacts(flow, facts.cell);
 
-  drawCorrectionBox(flow, correctionLines(run), correctionModelWords[run.calibration.result.correction.model]);
+  drawCorrectionBox(flow, correctionLines(run), `model: ${correctionModelWords[run.calibration.result.correction.model]}`);
+  const verdict = runVerdict(run);
+  if (verdict)
+    drawVerdictBox(flow, `Verdict: ${verdict.verdict.toUpperCase()}`, [verdictWords[verdict.verdict], ...verdict.checks.map(checkLine)], verdictRule);
   drawCalibrationBudget(flow, run);
+  drawParagraph(flow, applyCorrectionSentence(run));
+  for (const line of residualLines(run)) drawParagraph(flow, line, 8.5, 1);
+  flow.y += 6;
+  drawReviewLines(flow);
+
+  drawSectionHeading(flow, "Spectrum file", 40);
+  drawFacts(flow, facts.spectrum);
 
   drawSectionHeading(flow, "Residuals of the lines found", residualPlotHeight(doc, run, width));
   flow.y = drawResidualPlot(doc, run, x, flow.y, width) + 10;

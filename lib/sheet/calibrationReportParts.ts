@@ -99,13 +99,13 @@ export function drawFacts(flow: CalibrationPageFlow, facts: readonly Calibration
 }
 
 /** The correction, the report's answer, in a heavy frame: one term a line, then what the model means. */
-export function drawCorrectionBox(flow: CalibrationPageFlow, lines: readonly string[], meaning: string): void {
+export function drawCorrectionBox(flow: CalibrationPageFlow, lines: readonly string[], meaning: string, heading = "Correction found"): void {
   const { doc, x, width } = flow;
   const pad = 9;
   const inner = width - 2 * pad;
   doc.font(sheetFonts.bold).fontSize(12);
   const hLines = lines.map((l) => doc.heightOfString(l, { width: inner }) + 2);
-  const meaningText = `model: ${meaning}`;
+  const meaningText = meaning;
   doc.font(sheetFonts.regular).fontSize(9);
   const hMeaning = doc.heightOfString(meaningText, { width: inner });
   const height = pad + 14 + hLines.reduce((a, b) => a + b, 0) + 3 + hMeaning + pad - 2;
@@ -118,7 +118,7 @@ export function drawCorrectionBox(flow: CalibrationPageFlow, lines: readonly str
     .font(sheetFonts.bold)
     .fontSize(10)
     .fillColor(ink)
-    .text("Correction found", x + pad, cy, { width: inner, lineBreak: false });
+    .text(heading, x + pad, cy, { width: inner, lineBreak: false });
   cy += 15;
   doc.font(sheetFonts.bold).fontSize(12);
   lines.forEach((line, i) => {
@@ -166,3 +166,71 @@ export function drawReportFooter(doc: Doc, left: string, x: number, bottom: numb
 
 /** Height the footer takes above the page's bottom. */
 export const reportFooterHeightPt = 18;
+
+/** The verdict in a frame as heavy as the correction's: the verdict bold, each check and the rule below. */
+export function drawVerdictBox(flow: CalibrationPageFlow, verdict: string, checks: readonly string[], rule: string): void {
+  const { doc, x, width } = flow;
+  const pad = 8;
+  const inner = width - 2 * pad;
+  doc.font(sheetFonts.bold).fontSize(11);
+  const hVerdict = doc.heightOfString(verdict, { width: inner }) + 3;
+  doc.font(sheetFonts.regular).fontSize(8.5);
+  const body = [...checks, rule].join("\n");
+  const hBody = doc.heightOfString(body, { width: inner });
+  const height = pad + hVerdict + hBody + pad - 2;
+  flow.ensure(height + 8);
+  const top = flow.y;
+  doc.save().lineWidth(2.2).strokeColor(ink).rect(x, top, width, height).stroke().restore();
+  doc
+    .font(sheetFonts.bold)
+    .fontSize(11)
+    .fillColor(ink)
+    .text(verdict, x + pad, top + pad - 1, { width: inner });
+  doc
+    .font(sheetFonts.regular)
+    .fontSize(8.5)
+    .fillColor(ink)
+    .text(body, x + pad, top + pad - 1 + hVerdict, { width: inner });
+  flow.y = top + height + 10;
+}
+
+/** Blank lines to fill in by hand: reviewed by, approved by, each with a date and a signature. */
+export function drawReviewLines(flow: CalibrationPageFlow): void {
+  const { doc, x, width } = flow;
+  const rowPt = 26;
+  flow.ensure(2 * rowPt + 8);
+  const columns = [
+    { label: "name", share: 0.42 },
+    { label: "date", share: 0.2 },
+    { label: "signature", share: 0.38 },
+  ];
+  const labelWidth = 70;
+  for (const role of ["Reviewed by", "Approved by"]) {
+    const base = flow.y + rowPt - 8;
+    doc
+      .font(sheetFonts.bold)
+      .fontSize(9)
+      .fillColor(ink)
+      .text(role, x, base - 10, { lineBreak: false });
+    let left = x + labelWidth;
+    for (const column of columns) {
+      const w = (width - labelWidth) * column.share - 10;
+      doc
+        .save()
+        .lineWidth(0.6)
+        .strokeColor(ink)
+        .moveTo(left, base)
+        .lineTo(left + w, base)
+        .stroke()
+        .restore();
+      doc
+        .font(sheetFonts.regular)
+        .fontSize(7)
+        .fillColor(softInk)
+        .text(column.label, left, base + 2, { lineBreak: false });
+      left += w + 10;
+    }
+    flow.y += rowPt;
+  }
+  flow.y += 8;
+}

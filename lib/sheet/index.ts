@@ -6,3 +6,4 @@ export * from "./renderBenchSheet.ts";
 export * from "./writeFileAtomic.ts";
 export * from "./writeBenchSheets.ts";
 export * from "./calibrationReport.ts";
+export * from "./refusalReport.ts";

@@ -153,6 +153,7 @@ export function buildSpectrum(raw: RawSpectrum, options: SpectrumReadOptions = {
     resolutionCm: null,
     title: raw.title,
     instrument: raw.instrument,
+    measuredOn: null,
     notes,
   };
 }

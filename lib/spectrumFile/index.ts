@@ -4,3 +4,4 @@ export * from "./measuredSpectrum.ts";
 export * from "./spectrumFileError.ts";
 export * from "./spectrumFileSize.ts";
 export * from "./readSpectrumText.ts";
+export { calendarDate } from "./jcampDate.ts";

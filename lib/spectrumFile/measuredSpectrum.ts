@@ -27,6 +27,8 @@ export interface MeasuredSpectrum {
   resolutionCm: number | null;
   title: string | null;
   instrument: string | null;
+  /** The date of measurement the file states (JCAMP-DX ##LONG DATE or ##DATE), YYYY-MM-DD, else null. */
+  measuredOn: string | null;
   /** Sentences for the user: what was detected and how, what was repaired. */
   notes: string[];
 }

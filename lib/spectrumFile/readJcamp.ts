@@ -4,6 +4,7 @@
 // non-commercial licence and pull in openchemlib, which a spectrum reader has no use for.
 import { convert, type Entry } from "jcampconverter";
 import { buildSpectrum } from "./buildSpectrum.ts";
+import { jcampMeasuredOn } from "./jcampDate.ts";
 import { jcampAbscissa } from "./jcampGrid.ts";
 import { resolutionInCm } from "./jcampResolution.ts";
 import type { MeasuredSpectrum, SpectrumReadOptions } from "./measuredSpectrum.ts";
@@ -96,5 +97,7 @@ export function readJcamp(text: string, fileName: string, options: SpectrumReadO
     options,
   );
   const resolution = resolutionInCm(record(entry, "RESOLUTION"), measured.abscissaUnit, measured.wavenumberCm);
-  return { ...measured, resolutionCm: resolution.resolutionCm, notes: resolution.note ? [...measured.notes, resolution.note] : measured.notes };
+  const measuredOn = jcampMeasuredOn(record(entry, "LONGDATE"), record(entry, "DATE"));
+  const moreNotes = [resolution.note, measuredOn.note].filter((n): n is string => typeof n === "string");
+  return { ...measured, resolutionCm: resolution.resolutionCm, measuredOn: measuredOn.date, notes: [...measured.notes, ...moreNotes] };
 }

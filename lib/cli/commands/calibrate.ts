@@ -3,12 +3,14 @@ import { readFileSync, statSync } from "node:fs";
 import { basename } from "node:path";
 import { calibrateMeasuredSpectrum, cellModel, gasNameInSentence, maxCalibrationResolutionCm, selectSpecies, type CellModel } from "../../atlas/index.ts";
 import { apodizations, correctionModels, type CorrectionModel } from "../../core/index.ts";
-import { calibrationDocument, calibrationText, moleculeCaution, type CalibrationRun } from "../../format/index.ts";
+import { calibrationDocument, calibrationText, moleculeCaution, type CalibrationRun, type RefusedRun } from "../../format/index.ts";
+import { CoreInputError } from "../../core/index.ts";
 import { checkSpectrumFileSize, readSpectrumText, SpectrumFileError, type AbscissaUnit, type OrdinateKind } from "../../spectrumFile/index.ts";
 import { apodizationOption, cellConditionOptionSpec, cellConditionsFromOptions, cellConditionsHelp, joinUnitWords } from "../cellOptions.ts";
 import { loadOneMolecule, moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine } from "../options.ts";
 import { UsageError } from "../usageError.ts";
+import { recordFromOptions, recordOptionSpec, recordOptionsHelp } from "../recordOptions.ts";
 import type { CommandResult } from "../../shared/commandResult.ts";
 
 export const calibrateHelp = `bandatlas calibrate <spectrum file> --gas <molecule> [options]
@@ -34,12 +36,14 @@ ${cellConditionsHelp}
                           label wins: an --x or --y that contradicts it is refused)
   --y transmittance|percent|absorbance   what the file's y values are when it does not say
   --format table|json     readable table (default) or JSON
-  --report <file.pdf>     also write a PDF calibration report
+  --report <file.pdf>     also write a PDF calibration report (a refused run: a short one saying why)
+${recordOptionsHelp}
   --require-validated     use only references validated against measured lines, and refuse
                           (saying why) when too few are left: a traceable correction or none
   --molecules <dir>       read molecule files from <dir> instead of the shipped ones
 
-The true wavenumber is measured × (1 + scalePpm·10⁻⁶) + offsetCm. The atlas predicts spectra;
+Cell conditions not given are the defaults and are marked "assumed" on every output. The true
+wavenumber is measured × (1 + scalePpm·10⁻⁶) + offsetCm. The atlas predicts spectra;
 it does not certify an instrument.`;
 
 const ordinates: Record<string, OrdinateKind> = { transmittance: "transmittance", percent: "percent-transmittance", absorbance: "absorbance" };
@@ -62,9 +66,12 @@ function readSpectrumFile(path: string): { text: string; sha256: string } {
 }
 
 export interface CalibrateRequest {
-  run: CalibrationRun;
+  /** The run, or, when the data were refused, what a refusal still records. */
+  run: CalibrationRun | null;
+  refused: RefusedRun | null;
   format: "table" | "json";
   reportPath: string | undefined;
+  logPath: string | undefined;
 }
 
 /** The command line turned into one calibration run (exported for the report writer and tests). */
@@ -85,6 +92,7 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
       report: { type: "string" },
       molecules: { type: "string" },
       "require-validated": { type: "boolean" },
+      ...recordOptionSpec,
     },
     1,
   );
@@ -106,6 +114,9 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
   const reportPath = values.report as string | undefined;
   if (reportPath !== undefined && !/\.pdf$/i.test(reportPath)) throw new UsageError(`--report ${reportPath}: give a file name ending in .pdf`);
   const conditions = cellConditionsFromOptions(values);
+  const logPath = values.log as string | undefined;
+  // Checked before the file is read, so a mistyped date or tolerance costs nothing.
+  const given = recordFromOptions(values, null);
   const molecule = loadOneMolecule(moleculesDir(values.molecules as string | undefined), values.gas as string);
 
   let cell: CellModel = cellModel(molecule);
@@ -116,8 +127,17 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
   }
   const path = positionals[0];
   const fileName = basename(path);
+  let file: { text: string; sha256: string };
   try {
-    const { text, sha256 } = readSpectrumFile(path);
+    file = readSpectrumFile(path);
+  } catch (error) {
+    if (error instanceof SpectrumFileError) throw new UsageError(error.message);
+    throw error;
+  }
+  const { text, sha256 } = file;
+  const gasName = gasNameInSentence(molecule.name);
+  const caution = moleculeCaution(molecule);
+  try {
     const spectrum = readSpectrumText(text, fileName, {
       ...(abscissaText ? { abscissa: abscissas[abscissaText.toLowerCase()] } : {}),
       ...(ordinateText ? { ordinate: ordinates[ordinateText.toLowerCase()] } : {}),
@@ -133,33 +153,45 @@ export function calibrateRun(args: string[]): CalibrateRequest | string {
         requireValidated: values["require-validated"] === true,
       },
     );
+    const record =
+      given.measuredOn === null && spectrum.measuredOn !== null ? { ...given, measuredOn: spectrum.measuredOn, measuredOnFrom: "file" as const } : given;
     const run: CalibrationRun = {
       gas: molecule.id,
-      gasName: gasNameInSentence(molecule.name),
+      gasName,
       fileName,
       sha256,
       spectrum,
       conditions,
       calibration,
-      caution: moleculeCaution(molecule),
+      caution,
       sources: molecule.sources.map((source) => source.citation),
+      record,
     };
-    return { run, format, reportPath };
+    return { run, refused: null, format, reportPath, logPath };
   } catch (error) {
-    if (error instanceof SpectrumFileError) throw new UsageError(error.message);
-    throw error;
+    // The file was read but does not support a correction: a refusal, which the report and the log still record.
+    if (!(error instanceof SpectrumFileError || error instanceof CoreInputError)) throw error;
+    const refused: RefusedRun = { gas: molecule.id, gasName, caution, fileName, sha256, conditions, record: given, reason: error.message };
+    return { run: null, refused, format, reportPath, logPath };
   }
 }
 
 export async function runCalibrate(args: string[]): Promise<CommandResult | string> {
   const request = calibrateRun(args);
   if (typeof request === "string") return request;
-  const { run, format, reportPath } = request;
-  const output = format === "json" ? JSON.stringify(calibrationDocument(run), null, 2) + "\n" : calibrationText(run);
-  if (reportPath !== undefined) {
-    const { writeCalibrationReport } = await import("./calibrationReport.ts");
-    const written = await writeCalibrationReport(run, reportPath);
-    return format === "json" ? output : `${output}wrote ${written}\n`;
+  const { run, refused, format, reportPath, logPath } = request;
+  const { writeCalibrationReport, writeRefusalReport, logCalibration, logRefusal } = await import("./calibrationReport.ts");
+  if (refused !== null) {
+    // One sentence, as every refusal; what was still written is named at its end.
+    const wrote: string[] = [];
+    if (logPath !== undefined) wrote.push(`logged as refused in ${logRefusal(refused, logPath)}`);
+    if (reportPath !== undefined) wrote.push(`a report saying why is in ${await writeRefusalReport(refused, reportPath)}`);
+    throw new UsageError(wrote.length > 0 ? `${refused.reason.replace(/\.$/, "")} (${wrote.join("; ")})` : refused.reason);
   }
-  return output;
+  const done = run!;
+  const output = format === "json" ? JSON.stringify(calibrationDocument(done), null, 2) + "\n" : calibrationText(done);
+  const wrote: string[] = [];
+  if (reportPath !== undefined) wrote.push(`wrote ${await writeCalibrationReport(done, reportPath)}`);
+  if (logPath !== undefined) wrote.push(`logged in ${logCalibration(done, logPath)}`);
+  return format === "json" || wrote.length === 0 ? output : `${output}${wrote.join("\n")}\n`;
 }
