@@ -1,5 +1,6 @@
 #!/usr/bin/env node
-// Entry point of the `bandatlas` command: TypeScript sources run through tsx's loader.
+// Entry point of the `bandatlas` command: lib/'s compiled JavaScript when it is fresh (see
+// compiled.js), else the TypeScript sources through tsx's loader.
 import { spawn } from "node:child_process";
 import { cappedCommands, heapCapArgs } from "./heapCap.js";
 
@@ -12,7 +13,14 @@ if (cap.length) {
   for (const signal of ["SIGINT", "SIGTERM"]) process.on(signal, () => child.kill(signal));
   child.on("exit", (code, signal) => process.exit(code ?? (signal ? 1 : 0)));
 } else {
-  const { register } = await import("tsx/esm/api");
-  register();
-  await import("../lib/cli/run.ts");
+  const { compiledIsFresh } = await import("./compiled.js");
+  if (compiledIsFresh()) {
+    // Worker threads inherit this, and load the compiled worker modules too.
+    process.env.BANDATLAS_COMPILED = "1";
+    await import("../lib/cli/run.js");
+  } else {
+    const { register } = await import("tsx/esm/api");
+    register();
+    await import("../lib/cli/run.ts");
+  }
 }

@@ -1,10 +1,15 @@
-// Worker threads start without the TypeScript loader the main thread has; register tsx first,
-// as bin/bandatlas.js does, then load the worker's TypeScript. No top-level await: the pool reads
-// this module's default export without waiting for one.
-import { register } from "tsx/esm/api";
-
-register();
-const worker = import("./sheetWorker.ts");
+// Worker threads start without the main thread's module loader. When the command runs lib/'s
+// compiled JavaScript (bin/bandatlas.js sets BANDATLAS_COMPILED, which workers inherit) the worker
+// loads the compiled module; otherwise (tests, a source newer than its compiled output) it
+// registers tsx first and loads the TypeScript. No top-level await: the pool reads this module's
+// default export without waiting for one.
+const worker =
+  process.env.BANDATLAS_COMPILED === "1"
+    ? import("./sheetWorker.js")
+    : import("tsx/esm/api").then(({ register }) => {
+        register();
+        return import("./sheetWorker.ts");
+      });
 
 export default async function runSheetJob(job) {
   return (await worker).default(job);

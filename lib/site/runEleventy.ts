@@ -52,6 +52,10 @@ export interface RunOptions {
 async function runOnce(outDir: string, data: PageData, ignored: readonly string[], write: (path: string, content: string) => void): Promise<number> {
   const eleventy = new Eleventy(contentDir, outDir, {
     quietMode: true,
+    // The one configuration arrives below as a function; a falsy path stops Eleventy from also
+    // loading a configuration file it finds in the working directory (the compiled
+    // eleventy.config.js beside eleventy.config.ts would otherwise register everything twice).
+    configPath: false as unknown as string,
     config(config: any) {
       eleventyConfig(config);
       // Eleventy matches ignores as paths relative to the working directory (an absolute path never matches).
