@@ -15,3 +15,6 @@ export * from "./calibrationRecord.ts";
 export * from "./calibrationVerdict.ts";
 export * from "./applyCorrectionText.ts";
 export * from "./calibrationLog.ts";
+export * from "./calibrationHistory.ts";
+export * from "./chartScene.ts";
+export * from "./historyChart.ts";

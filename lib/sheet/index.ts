@@ -7,3 +7,4 @@ export * from "./writeFileAtomic.ts";
 export * from "./writeBenchSheets.ts";
 export * from "./calibrationReport.ts";
 export * from "./refusalReport.ts";
+export * from "./historyReport.ts";

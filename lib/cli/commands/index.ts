@@ -62,6 +62,13 @@ export const commands: Record<string, Command> = {
       return { help: m.calibrateHelp, run: m.runCalibrate };
     },
   },
+  history: {
+    summary: "the runs of a calibration log (calibrate --log) as a table and a chart of k against date, with the trend",
+    load: async () => {
+      const m = await import("./history.ts");
+      return { help: m.historyHelp, run: m.runHistory };
+    },
+  },
   fit: {
     summary: "fit a molecule file's constants to its cited measured lines (constants, uncertainties, correlations, residuals)",
     load: async () => {
