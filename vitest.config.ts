@@ -6,5 +6,7 @@ export default defineConfig({
     testTimeout: 120_000,
     hookTimeout: 180_000,
     pool: "forks",
+    // The shipped atlas, built once for every test that only reads it.
+    globalSetup: ["test/helpers/globalSetup.ts"],
   },
 });

@@ -3,17 +3,16 @@
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync, mkdirSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { standardTemperaturesK } from "../lib/atlas/index.ts";
-import { buildSite, checkInternalLinks, type BuildReport } from "../lib/build/index.ts";
-import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
+import { checkInternalLinks } from "../lib/build/index.ts";
 
+// The shipped atlas with its sheets, built once for the run (test/helpers/globalSetup.ts).
+const report = inject("shippedSite");
 let work: string;
-let report: BuildReport;
 
-beforeAll(async () => {
+beforeAll(() => {
   work = mkdtempSync(join(tmpdir(), "bandatlas-links-"));
-  report = await buildSite({ moleculesDir: shippedMoleculesDir, outDir: join(work, "site") });
 });
 afterAll(() => work && rmSync(work, { recursive: true, force: true }));
 

@@ -2,8 +2,7 @@ import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { chromium, type Browser, type BrowserContextOptions, type Page } from "playwright-core";
-import { buildSite } from "../../lib/build/index.ts";
-import { shippedMoleculesDir } from "../../lib/cli/moleculeSource.ts";
+import { inject } from "vitest";
 import { serveFolder } from "./staticServer.ts";
 
 /** Debian's Chromium, headless, with the flags this machine needs; fails (never skips) when it is missing. */
@@ -33,8 +32,8 @@ export interface BuiltSiteSession {
 
 export async function openBuiltSite(name: string, problems: string[], context: BrowserContextOptions = {}): Promise<BuiltSiteSession> {
   const work = mkdtempSync(join(tmpdir(), `bandatlas-${name}-`));
-  const site = join(work, "site");
-  await buildSite({ moleculesDir: shippedMoleculesDir, outDir: site, sheets: false });
+  // The shipped atlas the global setup built once (test/helpers/globalSetup.ts); read only.
+  const site = inject("shippedSite").outDir;
   const server = await serveFolder(site);
   const browser = await launchChromium();
   const page = await (await browser.newContext(context)).newPage();
