@@ -2,7 +2,8 @@ import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
-import { launchChromium, serveSite } from "./benchBrowser.ts";
+import { serveFolder } from "../lib/build/staticServer.ts";
+import { launchChromium } from "./benchBrowser.ts";
 import { calibrateBenchCsv, calibrateBenchPoints } from "./calibrateSpectrum.ts";
 import { runBuildChild, seconds } from "./childProcess.ts";
 
@@ -15,7 +16,8 @@ import { runBuildChild, seconds } from "./childProcess.ts";
 export async function benchBrowserCalibrate(runs: number): Promise<string[]> {
   const work = mkdtempSync(join(tmpdir(), "bandatlas-bench-calibrate-"));
   const site = join(work, "site");
-  const { server, base } = await serveSite(site);
+  const server = await serveFolder(site);
+  const base = server.base;
   try {
     const built = await runBuildChild<{ wallMs: number }>({ moleculesDir: shippedMoleculesDir, outDir: site, sheets: false });
     const file = join(work, "bench-co.csv");
@@ -48,7 +50,7 @@ export async function benchBrowserCalibrate(runs: number): Promise<string[]> {
       `${sorted[Math.floor(sorted.length / 2)]} ms median (min ${sorted[0]}, max ${sorted[sorted.length - 1]}) over ${runs} fresh pages for ${calibrateBenchPoints} points${summary ? `: ${summary}` : ""}; target ≤ 1000 ms`,
     ];
   } finally {
-    server.close();
+    await server.close();
     rmSync(work, { recursive: true, force: true });
   }
 }

@@ -2,7 +2,8 @@ import { mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { gzipSync } from "node:zlib";
-import { launchChromium, serveSite } from "./benchBrowser.ts";
+import { serveFolder } from "../lib/build/staticServer.ts";
+import { launchChromium } from "./benchBrowser.ts";
 import { standardTemperaturesK } from "../lib/atlas/index.ts";
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
@@ -22,7 +23,8 @@ import { writeSyntheticMolecules } from "./syntheticMolecules.ts";
 export async function benchBrowserSearch(n: number, queries: number): Promise<string[]> {
   const work = mkdtempSync(join(tmpdir(), "bandatlas-bench-browser-"));
   const site = join(work, "site");
-  const { server, base } = await serveSite(site);
+  const server = await serveFolder(site);
+  const base = server.base;
   try {
     const built = await runBuildChild<{ lines: Array<{ temperatureK: number; lines: number }> }>({
       moleculesDir: shippedMoleculesDir,
@@ -98,7 +100,7 @@ export async function benchBrowserSearch(n: number, queries: number): Promise<st
     }
     return out;
   } finally {
-    server.close();
+    await server.close();
     rmSync(work, { recursive: true, force: true });
   }
 }

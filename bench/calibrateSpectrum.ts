@@ -3,7 +3,7 @@ import { calibrateMeasuredSpectrum, cellModel, defaultCellConditions } from "../
 import { shippedMoleculesDir } from "../lib/cli/moleculeSource.ts";
 import { loadMoleculesOrThrow } from "../lib/molecules/index.ts";
 import { readSpectrumText } from "../lib/spectrumFile/index.ts";
-import { measuredSpectrum, seededRandom, trueSpectrum } from "../test/helpers/syntheticSpectrum.ts";
+import { measuredSpectrum, seededRandom, trueSpectrum } from "../lib/atlas/syntheticSpectrum.ts";
 
 export const calibrateBenchPoints = 65_536;
 

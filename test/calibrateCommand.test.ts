@@ -7,7 +7,7 @@ import { describe, expect, it } from "vitest";
 import { runCli } from "../lib/cli/main.ts";
 import { cellModel, defaultCellConditions, selectMolecule } from "../lib/atlas/index.ts";
 import { shippedMolecules } from "./helpers/shipped.ts";
-import { measuredSpectrum, seededRandom, trueSpectrum } from "./helpers/syntheticSpectrum.ts";
+import { measuredSpectrum, seededRandom, trueSpectrum } from "../lib/atlas/syntheticSpectrum.ts";
 
 const spectra = join(import.meta.dirname, "fixtures", "spectra");
 const hunter = join(spectra, "hcl-dcl-hunter", "HCl_spectrum.csv");

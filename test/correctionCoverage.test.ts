@@ -22,7 +22,7 @@ import {
 import { calibrateMeasuredSpectrum, cellModel, defaultCellConditions, selectMolecule, type CellModel } from "../lib/atlas/index.ts";
 import { readSpectrumText } from "../lib/spectrumFile/index.ts";
 import { shippedMolecules } from "./helpers/shipped.ts";
-import { measuredSpectrum, seededRandom, trueSpectrum } from "./helpers/syntheticSpectrum.ts";
+import { measuredSpectrum, seededRandom, trueSpectrum } from "../lib/atlas/syntheticSpectrum.ts";
 
 const trials = process.env.BANDATLAS_FULL_TRIALS ? 60 : 12;
 const cellOf = (id: string): CellModel => cellModel(selectMolecule(shippedMolecules(), id));

@@ -15,7 +15,7 @@ import {
 import { calibrateMeasuredSpectrum, cellModel, defaultCellConditions, type CellModel } from "../lib/atlas/index.ts";
 import { selectMolecule } from "../lib/atlas/index.ts";
 import { shippedMolecules } from "./helpers/shipped.ts";
-import { gaussian, measuredSpectrum, seededRandom, trueSpectrum, type Miscalibration } from "./helpers/syntheticSpectrum.ts";
+import { gaussian, measuredSpectrum, seededRandom, trueSpectrum, type Miscalibration } from "../lib/atlas/syntheticSpectrum.ts";
 
 const cellOf = (id: string): CellModel => cellModel(selectMolecule(shippedMolecules(), id));
 const ranges: Record<string, [number, number]> = { co: [2000, 2260], hcl: [2620, 3100] };

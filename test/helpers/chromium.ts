@@ -3,7 +3,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { chromium, type Browser, type BrowserContextOptions, type Page } from "playwright-core";
 import { inject } from "vitest";
-import { serveFolder } from "./staticServer.ts";
+import { serveFolder } from "../../lib/build/staticServer.ts";
 
 /** Debian's Chromium, headless, with the flags this machine needs; fails (never skips) when it is missing. */
 export function launchChromium(): Promise<Browser> {

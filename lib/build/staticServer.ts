@@ -11,9 +11,10 @@ const types: Record<string, string> = {
   ".svg": "image/svg+xml",
   ".csv": "text/csv; charset=utf-8",
   ".pdf": "application/pdf",
+  ".bin": "application/octet-stream",
 };
 
-/** Serves a built site folder on 127.0.0.1 (a random port) for browser tests. */
+/** Serves a built site folder on 127.0.0.1 (a random port): the browser tests and benches use it. */
 export async function serveFolder(site: string): Promise<{ base: string; close: () => Promise<void> }> {
   const server: Server = createServer((req, res) => {
     const path = normalize(decodeURIComponent(new URL(req.url!, "http://x").pathname)).replace(/^[/\\]+/, "");

@@ -1,8 +1,8 @@
-// Synthetic measured spectra made by the project's own cell model, for calibration tests and the
-// bench: an instrument whose wavenumber scale is off by a known scale and offset, with white
-// noise and a tilted baseline. Invented measurements, not real ones.
-import { cellSpectrum, observedSignal, type Apodization, type CellConditions, type CellSpectrum } from "../../lib/core/index.ts";
-import { cellLinesOfModel, type CellModel } from "../../lib/atlas/index.ts";
+// Synthetic measured spectra made by the project's own cell model, for the calibration's tests and
+// benchmarks: an instrument whose wavenumber scale is off by a known scale and offset, with white
+// noise and a tilted baseline. Invented measurements, not real ones; pure (no Node API).
+import { cellSpectrum, observedSignal, type Apodization, type CellConditions, type CellSpectrum } from "../core/index.ts";
+import { cellLinesOfModel, type CellModel } from "./cellSpectrum.ts";
 
 /** A small seeded generator (mulberry32) so every trial is repeatable. */
 export function seededRandom(seed: number): () => number {
