@@ -215,10 +215,12 @@ describe("bad input: one sentence, exit 2, nothing written", () => {
     );
   });
 
-  it("a failed calibration writes no report", async () => {
+  it("a refused calibration writes only a short report saying why (issue 24), and bad options none", async () => {
     const before = readdirSync(dir).filter((f) => f.endsWith(".pdf"));
-    await refusal(hunter, "--gas", "co", "--report", join(dir, "r.pdf"));
-    expect(readdirSync(dir).filter((f) => f.endsWith(".pdf"))).toEqual(before);
+    expect(await refusal(hunter, "--gas", "co", "--report", join(dir, "r.pdf"))).toMatch(/no lines .*\(a report saying why is in .*r\.pdf\)/);
+    expect(readdirSync(dir).filter((f) => f.endsWith(".pdf"))).toEqual([...before, "r.pdf"].sort());
+    await refusal(hunter, "--gas", "hcl", "--model", "cubic", "--report", join(dir, "bad.pdf"));
+    expect(readdirSync(dir)).not.toContain("bad.pdf");
   });
 
   it("an enriched cell: --species keeps only those lines; DCl's isotope-scaled positions are too uncertain to calibrate with", async () => {

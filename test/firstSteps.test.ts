@@ -212,8 +212,9 @@ describe("units a user types", () => {
 describe("every README command that needs no file of the user's", () => {
   // Each README line, by its first words, and what it must print; test/cli.test.ts already checks
   // the CO JSON contract, the H37Cl CSV columns, R(0) in the CO table and check's exit codes, so
-  // these check other values of the same commands. calibrate reads the user's spectrum: not here.
-  const notRunHere = ["calibrate "];
+  // these check other values of the same commands. calibrate reads the user's spectrum and history
+  // the user's calibration log: not here (test/calibrationRecords.test.ts runs both on files of its own).
+  const notRunHere = ["calibrate ", "history "];
   const checks: Record<string, (stdout: string, dir: string) => void | Promise<void>> = {
     "lines co": (out) => {
       // CRC Handbook, Maki CO 1-0 table: P(1) = 2139.4260 cm⁻¹ (from memory).
@@ -266,7 +267,7 @@ describe("every README command that needs no file of the user's", () => {
       expect(out).toMatch(/^12C16O\s+1-0\s+R\(1\)\s+2150\.856\d\s/m);
     },
     "--help": (out) => {
-      for (const command of ["lines", "find", "fit", "check", "new", "sheet", "spectrum", "calibration-lines", "calibrate"])
+      for (const command of ["lines", "find", "fit", "check", "new", "sheet", "spectrum", "calibration-lines", "calibrate", "history"])
         expect(out).toMatch(new RegExp(`^  ${command}\\s`, "m"));
     },
   };
