@@ -37,7 +37,15 @@ describe("bandatlas lines", () => {
     // CRC Handbook, Maki table of CO 1-0 wavenumbers: R(0) = 2147.081132 cm⁻¹ (read directly).
     expect(r0).toMatchObject({ branch: "R", jLower: 0, jUpper: 1 });
     expect(Math.abs(r0.wavenumber - 2147.081132)).toBeLessThan(5e-4);
-    expect(r0.wavelengthVacuumUm).toBeCloseTo(1e4 / r0.wavenumber, 12);
+    // Positions in the JSON are rounded to their ± (issue 21): the wavelength within a twentieth of
+    // its own ± (10⁴σ/ν̃², the derivative of 10⁴/ν̃), the ± itself to two significant digits.
+    const sigmaUm = (1e4 * r0.wavenumberUncertainty) / r0.wavenumber ** 2;
+    expect(Math.abs(r0.wavelengthVacuumUm - 1e4 / r0.wavenumber)).toBeLessThanOrEqual(sigmaUm / 2);
+    expect(
+      String(r0.wavenumberUncertainty)
+        .replace(/^[0.]+/, "")
+        .replace(".", "").length,
+    ).toBeLessThanOrEqual(2);
   });
   it("prints CSV with units in the header for another species, band and temperature", async () => {
     const { stdout, exitCode } = await cli("lines", "hcl", "--species", "H37Cl", "--band", "2-0", "--temperature", "500", "--format", "csv");
@@ -113,7 +121,19 @@ describe("bandatlas find", () => {
     for (let i = 1; i < matches.length; i++) expect(Math.abs(matches[i].offset)).toBeGreaterThanOrEqual(Math.abs(matches[i - 1].offset));
     for (const m of matches) {
       expect(Math.abs(m.offset)).toBeLessThanOrEqual(3);
-      expect(Object.keys(m)).toEqual(["molecule", "species", "band", "label", "wavenumber", "relativeIntensity", "gasRelativeIntensity", "offset"]);
+      expect(Object.keys(m)).toEqual([
+        "molecule",
+        "species",
+        "band",
+        "label",
+        "wavenumber",
+        "wavenumberUncertainty",
+        "positionStatus",
+        "relativeIntensity",
+        "gasRelativeIntensity",
+        "offset",
+        "strengthKnown",
+      ]);
       expect(m.gasRelativeIntensity).toBeGreaterThanOrEqual(1e-3);
     }
   });

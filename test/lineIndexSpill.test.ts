@@ -23,6 +23,8 @@ function inventedLines(count: number): LocatedLine[] {
       band: `${1 + (i % 8)}-0`,
       label: `${next() < 0.5 ? "P" : "R"}(${i % 90})`,
       wavenumber: 500 + 7500 * next(),
+      wavenumberUncertainty: 1e-4 * (1 + next()),
+      positionStatus: i % 5 === 0 ? ("validated" as const) : ("extrapolated" as const),
       relativeIntensity,
       gasRelativeIntensity: relativeIntensity * 0.5,
       bandToGas: i % 11 === 0 ? null : 0.5,
@@ -43,7 +45,7 @@ describe("search index chunks kept in a file", () => {
       spilled.add(lines.slice(at, at + 40_000), page);
     }
     // Two full chunks went to the file (20 bytes a line); the third stays in memory.
-    expect(statSync(path).size).toBe(2 * lineIndexChunkLines * 20);
+    expect(statSync(path).size).toBe(2 * lineIndexChunkLines * 28);
     const a = inMemory.finish();
     const b = spilled.finish();
     expect(b).toEqual(a);

@@ -22,7 +22,7 @@ async function sheetOf(molecule: Molecule, species: string | undefined, temperat
 }
 
 /** The digits `bandatlas lines <molecule> --format csv` prints for a line label. */
-async function linesCsvDigits(args: string[], label: string): Promise<{ wavenumber: string; um: string; rel: string }> {
+async function linesCsvDigits(args: string[], label: string): Promise<{ wavenumber: string; sigma: string; status: string; um: string; rel: string }> {
   const { stdout, exitCode } = await runCli(["lines", ...args, "--format", "csv"]);
   expect(exitCode).toBe(0);
   const [head, ...rows] = stdout
@@ -32,7 +32,14 @@ async function linesCsvDigits(args: string[], label: string): Promise<{ wavenumb
     .map((r) => r.split(","));
   const row = rows.find((r) => r[0] === label)!;
   expect(row, `${label} in bandatlas lines`).toBeDefined();
-  return { wavenumber: row[head.indexOf("wavenumber (cm-1)")], um: row[head.indexOf("wavelengthVacuum (um)")], rel: row[head.indexOf("relativeIntensity")] };
+  return {
+    wavenumber: row[head.indexOf("wavenumber (cm-1)")],
+    sigma: row[head.indexOf("wavenumberUncertainty (cm-1)")],
+    // The sheet prints the status as its first letter (v, e, n, c), keyed in the legend.
+    status: row[head.indexOf("positionStatus")][0],
+    um: row[head.indexOf("wavelengthVacuum (um)")],
+    rel: row[head.indexOf("relativeIntensity")],
+  };
 }
 
 beforeAll(() => {
@@ -68,8 +75,10 @@ describe("bench sheet of 12C16O at 296 K on A4", () => {
     const p1 = await linesCsvDigits(["co"], "P(1)");
     const r1 = await linesCsvDigits(["co"], "R(1)");
     const rowJ = (j: number) => layout.split("\n").find((l) => new RegExp(`^\\s*${j}\\s`).test(l))!;
-    expect(rowJ(0)).toMatch(new RegExp(`—\\s+${r0.wavenumber}\\s+${r0.um}\\s+${r0.rel}`));
-    expect(rowJ(1)).toMatch(new RegExp(`${p1.wavenumber}\\s+${p1.um}\\s+${p1.rel}\\s+${r1.wavenumber}\\s+${r1.um}\\s+${r1.rel}`));
+    // Each position with its ± and status (issue 21), then λ and the relative intensity.
+    const cells = (d: typeof r0) => `${d.wavenumber}\\s+${d.sigma}\\s+${d.status}\\s+${d.um}\\s+${d.rel}`;
+    expect(rowJ(0)).toMatch(new RegExp(`—\\s+${cells(r0)}`));
+    expect(rowJ(1)).toMatch(new RegExp(`${cells(p1)}\\s+${cells(r1)}`));
     // The same digits come from lib/format lineCells (one formatting for every output).
     const line = atlasEntry(co(), co().species[0], 296).bands[0].lines.lines.find((l) => l.label === "R(0)")!;
     expect(lineCells(line).wavenumber).toBe(r0.wavenumber);

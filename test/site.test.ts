@@ -40,13 +40,14 @@ describe("page data", () => {
       ["P(4)", 2127.682404],
     ] as const) {
       const row = fundamental.rows.find((r) => r.label === label)!;
-      expect(row.measuredMinusPredicted).not.toBeNull();
+      expect(row.predictedMinusMeasured).not.toBeNull();
       // The cell is printed to 2 significant figures and the wavenumber to 4 decimals.
-      expect(toNumber(row.measuredMinusPredicted!)).toBeCloseTo(measured - Number(row.wavenumber), 4);
-      expect(Math.abs(toNumber(row.measuredMinusPredicted!))).toBeLessThan(0.01);
+      // One sign convention (residualSignText): predicted − measured.
+      expect(toNumber(row.predictedMinusMeasured!)).toBeCloseTo(Number(row.wavenumber) - measured, 4);
+      expect(Math.abs(toNumber(row.predictedMinusMeasured!))).toBeLessThan(0.01);
     }
     expect(fundamental.hasResiduals).toBe(true);
-    expect(fundamental.rows.filter((r) => r.measuredMinusPredicted !== null)).toHaveLength(9);
+    expect(fundamental.rows.filter((r) => r.predictedMinusMeasured !== null)).toHaveLength(9);
     expect(bandView(entry, entry.bands[3]).hasResiduals).toBe(false); // no cited 2-0 lines
   });
 
@@ -57,7 +58,7 @@ describe("page data", () => {
     const coRow = rows.find((r) => r.species === "12C16O" && r.band === "1-0")!;
     expect(coRow.status).toBe("validated");
     expect(coRow.lines).toBe("9");
-    const all = fundamental.rows.filter((r) => r.measuredMinusPredicted !== null).map((r) => Math.abs(toNumber(r.measuredMinusPredicted!)));
+    const all = fundamental.rows.filter((r) => r.predictedMinusMeasured !== null).map((r) => Math.abs(toNumber(r.predictedMinusMeasured!)));
     // The row is printed to 2 significant figures, the page cells too.
     expect(Number(coRow.largest)).toBeCloseTo(Math.max(...all), 6);
     expect(rows.find((r) => r.species === "12C16O" && r.band === "2-0")!.status).toBe("extrapolated");

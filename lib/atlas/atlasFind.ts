@@ -3,6 +3,7 @@ import type { Molecule } from "../molecules/index.ts";
 import { atlasEntry, type AtlasEntry } from "./atlasEntry.ts";
 import { entryLines, gasStrengthFactors } from "./atlasLines.ts";
 import { speciesBands } from "./moleculeBands.ts";
+import { bandOriginBound } from "./bandOrigin.ts";
 
 /** A line next to an empty search window, with its ± so a near miss can be judged. */
 export interface NeighbourLine {
@@ -164,7 +165,7 @@ function neighbours(entries: AtlasEntry[], wavenumber: number, windowCm: number,
         wavenumber: origin,
         lineBelow,
         lineAbove,
-        wavenumberUncertainty: below && above ? Math.max(below.wavenumberUncertainty, above.wavenumberUncertainty) : null,
+        wavenumberUncertainty: bandOriginBound(band.lines).uncertainty,
         offset: origin - wavenumber,
       });
     });

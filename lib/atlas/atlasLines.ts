@@ -57,6 +57,8 @@ export function entryLines(entries: AtlasEntry[], temperatureK: number, minRelat
             band: band.label,
             label: line.label,
             wavenumber: line.wavenumber,
+            wavenumberUncertainty: line.wavenumberUncertainty,
+            positionStatus: line.positionStatus,
             relativeIntensity: line.relativeIntensity,
             gasRelativeIntensity: factor === null ? null : line.relativeIntensity * factor,
             bandToGas: factor,

@@ -8,3 +8,4 @@ export * from "./cellUnits.ts";
 export * from "./calibrationMarks.ts";
 export * from "./measuredCalibration.ts";
 export * from "./atlasFind.ts";
+export * from "./bandOrigin.ts";

@@ -2,7 +2,7 @@
 // (the pages' Content-Security-Policy allows no inline script); everything it shows is written
 // with textContent, never innerHTML.
 import MiniSearch from "minisearch";
-import { findColumns, findHeadText, findUnsourcedNote } from "../format/findText.ts";
+import { findColumns, findGroups, findHeadText, findPositionsNote, findUnknownStrengthHeading } from "../format/findText.ts";
 import {
   parseSpectralPosition,
   positionToWavenumber,
@@ -103,26 +103,33 @@ function setupWavenumberSearch(form: HTMLFormElement) {
       const given = position.unit === "cm-1" ? "" : ` (${position.value} ${unitLabels[position.unit]}, ${position.medium})`;
       const head = el("p", findHeadText({ windowCm, wavenumber, given, temperatureK: index.temperatureK, minRelative, count: matches.length }));
       if (!matches.length) return show(output, head);
-      const table = el("table", undefined, { class: "lines compact" });
-      const headRow = el("tr");
-      for (const c of findColumns) headRow.append(el("th", c.heading, { scope: "col" }));
-      table.append(el("thead"), el("tbody"));
-      table.tHead!.append(headRow);
-      for (const m of matches) {
-        const row = el("tr");
-        for (const c of findColumns) {
-          if (c.heading === "line") {
-            // The line's name links to its row on the species page.
-            const cell = el("td");
-            cell.append(el("a", m.label, { href: `${root}${m.page}#${lineRowId(m.band, m.label)}` }));
-            row.append(cell);
-          } else row.append(el("td", c.cell(m), c.numeric ? { class: "num" } : undefined));
+      const tableOf = (list: typeof matches) => {
+        const table = el("table", undefined, { class: "lines compact" });
+        const headRow = el("tr");
+        for (const c of findColumns) headRow.append(el("th", c.heading, { scope: "col" }));
+        table.append(el("thead"), el("tbody"));
+        table.tHead!.append(headRow);
+        for (const m of list) {
+          const row = el("tr");
+          for (const c of findColumns) {
+            if (c.heading === "line") {
+              // The line's name links to its row on the species page.
+              const cell = el("td");
+              cell.append(el("a", m.label, { href: `${root}${m.page}#${lineRowId(m.band, m.label)}` }));
+              row.append(cell);
+            } else row.append(el("td", c.cell(m), c.numeric ? { class: "num" } : undefined));
+          }
+          table.tBodies[0].append(row);
         }
-        table.tBodies[0].append(row);
-      }
-      const note = findUnsourcedNote(matches);
-      if (note) show(output, head, table, el("p", note, { class: "hint" }));
-      else show(output, head, table);
+        return table;
+      };
+      // As the CLI: lines of known strength first; those whose strength is unknown apart, said so.
+      const groups = findGroups(matches);
+      const parts: HTMLElement[] = [head];
+      if (groups.known.length) parts.push(tableOf(groups.known));
+      if (groups.unknown.length) parts.push(el("p", findUnknownStrengthHeading, { class: "hint find-unknown" }), tableOf(groups.unknown));
+      parts.push(el("p", findPositionsNote, { class: "hint" }));
+      show(output, ...parts);
     } catch (error) {
       fail(`Search failed: ${(error as Error).message}`);
     }

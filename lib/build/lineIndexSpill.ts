@@ -3,19 +3,19 @@ import { lineIndexChunkLines, type LineIndexChunk, type LineIndexChunkStore } fr
 
 const doubleBytes = 8 * lineIndexChunkLines;
 const shortBytes = 2 * lineIndexChunkLines;
-/** One full chunk on disk: wavenumbers, intensities, groups, labels, each column whole (a multiple of 8 bytes). */
-const chunkBytes = 2 * doubleBytes + 2 * shortBytes;
+/** One full chunk on disk: wavenumbers, intensities, uncertainties, groups, labels, each column whole (a multiple of 8 bytes). */
+const chunkBytes = 3 * doubleBytes + 2 * shortBytes;
 
 /**
  * A search-index builder's full chunks kept in a file until the index is finished: with three
- * temperatures of a large atlas held in memory (20 bytes a line each), the builders were the
+ * temperatures of a large atlas held in memory (28 bytes a line each), the builders were the
  * largest thing that grew with the atlas during a build. Finishing reads one temperature back.
  */
 export function fileChunkStore(path: string): LineIndexChunkStore {
   let saved = 0;
   return {
     save(chunk) {
-      for (const column of [chunk.wavenumbers, chunk.intensities, chunk.groupOf, chunk.labelOf])
+      for (const column of [chunk.wavenumbers, chunk.intensities, chunk.uncertainties, chunk.groupOf, chunk.labelOf])
         appendFileSync(path, new Uint8Array(column.buffer, column.byteOffset, column.byteLength));
       saved++;
     },
@@ -36,8 +36,9 @@ export function fileChunkStore(path: string): LineIndexChunkStore {
         chunks.push({
           wavenumbers: new Float64Array(buffer, at, lineIndexChunkLines),
           intensities: new Float64Array(buffer, at + doubleBytes, lineIndexChunkLines),
-          groupOf: new Uint16Array(buffer, at + 2 * doubleBytes, lineIndexChunkLines),
-          labelOf: new Uint16Array(buffer, at + 2 * doubleBytes + shortBytes, lineIndexChunkLines),
+          uncertainties: new Float64Array(buffer, at + 2 * doubleBytes, lineIndexChunkLines),
+          groupOf: new Uint16Array(buffer, at + 3 * doubleBytes, lineIndexChunkLines),
+          labelOf: new Uint16Array(buffer, at + 3 * doubleBytes + shortBytes, lineIndexChunkLines),
         });
       }
       return chunks;

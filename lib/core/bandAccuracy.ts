@@ -111,18 +111,70 @@ export function moleculeValidation(species: readonly SpeciesModel[], constantsFi
   return checks.map((c) => ({ checks: c, constantsTested, moleculeEnvelope }));
 }
 
+/** σ of a line from the model's own error components (before the residual floor), at x = J(J+1) of each level. */
+export type ModelSigmaAt = (xUpper: number, xLower: number) => number;
+
 /**
- * A band's status: validated when measured lines of this species and band were compared with it;
- * extrapolated when the constants were tested on other bands or species only; not validated when
- * no measured line stands behind them. The floor on a line's ± is the largest residual of measured
- * lines at its |m| or below (the band's own lines, or for a band without its own the molecule's),
- * and beyond the measured range the largest of all: a printed ± never claims more than the
- * measurements show.
+ * Measured lines contradict a band when one misses its prediction by more than this: R/50 at
+ * R = 4 cm⁻¹, the largest ± a line may have to be calibration-grade at the coarsest resolution the
+ * atlas marks (core `defaultCalibrationCriteria`, atlas `calibrationResolutionsCm`; a test holds
+ * them together). A band whose measured lines miss by more cannot be called validated for
+ * calibration, however wide its ± was drawn (HF's handbook row misses its pure-rotation lines by
+ * 38 cm⁻¹, inside its own ± of 52: consistent, and useless as a reference).
  */
-export function bandAccuracy(species: SpeciesModel, band: Band): BandAccuracy {
+export const contradictionResidualLimitCm = 0.08;
+
+/**
+ * A miss beyond this many combined standard uncertainties (the model's own ± before the floor,
+ * and the line's measured ±, in quadrature) is a 1-in-370 event for a normal error (common
+ * practice, no source): it shows the model's own ± is too small there. The residual floor already
+ * raises the printed ± to the residuals, so this alone is said, not made a contradiction.
+ */
+export const modelSigmaMultiple = 3;
+
+/** The one rule, in words, for every output that prints the status. */
+export const contradictionRuleText =
+  `contradicted: a cited measured line of the band misses the prediction by more than ${contradictionResidualLimitCm} cm⁻¹, ` +
+  `the largest ± of a calibration-grade line at 4 cm⁻¹ resolution (R/50)`;
+
+/** How the band's measured lines compare with the model's own ± and with the contradiction limit. */
+function judged(species: SpeciesModel, band: Band, modelSigmaAt: ModelSigmaAt | null): Pick<BandAccuracy, "contradiction" | "beyondModelSigma"> {
+  let contradiction: BandAccuracy["contradiction"] = null;
+  let beyond: BandAccuracy["beyondModelSigma"] = null;
+  for (const r of lineResiduals(species)) {
+    if (!sameBand(r.reference.band, band)) continue;
+    const residual = Math.abs(r.predictedMinusMeasured);
+    if (residual > contradictionResidualLimitCm && (!contradiction || residual > Math.abs(contradiction.predictedMinusMeasuredCm)))
+      contradiction = { label: r.reference.label, predictedMinusMeasuredCm: r.predictedMinusMeasured };
+    if (!modelSigmaAt) continue;
+    const { jLower, jUpper } = parseLineLabel(r.reference.label);
+    const combinedSigmaCm = Math.hypot(modelSigmaAt(jUpper * (jUpper + 1), jLower * (jLower + 1)), r.reference.uncertainty ?? 0);
+    const ratio = residual / combinedSigmaCm;
+    if (ratio <= modelSigmaMultiple) continue;
+    if (!beyond) beyond = { count: 0, label: r.reference.label, ratio };
+    beyond.count++;
+    if (ratio > beyond.ratio) Object.assign(beyond, { label: r.reference.label, ratio });
+  }
+  return { contradiction, beyondModelSigma: beyond };
+}
+
+/**
+ * A band's status: validated when measured lines of this species and band were compared with it
+ * and agree; contradicted when one misses by more than contradictionResidualLimitCm (lines beyond
+ * 3× the model's own σ, judged when the caller gives that σ, are counted and said); extrapolated when the constants were tested on other
+ * bands or species only; not validated when no measured line stands behind them. The floor on a
+ * line's ± is the largest residual of measured lines at its |m| or below (the band's own lines, or
+ * for a band without its own the molecule's), and beyond the measured range the largest of all: a
+ * printed ± never claims more than the measurements show.
+ */
+export function bandAccuracy(species: SpeciesModel, band: Band, modelSigmaAt?: ModelSigmaAt): BandAccuracy {
   const validation = species.validation;
-  if (!validation) return { status: "not-validated", check: null, floor: [] };
+  const none = { contradiction: null, beyondModelSigma: null };
+  if (!validation) return { status: "not-validated", check: null, floor: [], ...none };
   const check = validation.checks.find((c) => sameBand(c.band, band)) ?? null;
-  if (check) return { status: "validated", check, floor: check.envelope };
-  return { status: validation.constantsTested ? "extrapolated" : "not-validated", check: null, floor: validation.moleculeEnvelope };
+  if (check) {
+    const verdict = judged(species, band, modelSigmaAt ?? null);
+    return { status: verdict.contradiction ? "contradicted" : "validated", check, floor: check.envelope, ...verdict };
+  }
+  return { status: validation.constantsTested ? "extrapolated" : "not-validated", check: null, floor: validation.moleculeEnvelope, ...none };
 }

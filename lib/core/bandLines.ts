@@ -1,14 +1,14 @@
-import { bandLabel, vibrationalBand } from "./band.ts";
+import { bandLabel, sameBand, vibrationalBand } from "./band.ts";
 import { bandAccuracy } from "./bandAccuracy.ts";
 import { bandLinesFromModel, type BandModel, type PositionUncertainty } from "./bandModel.ts";
 import { componentsFromUncertainties } from "./positionErrors.ts";
-import { cachedBandErrors } from "./positionUncertainty.ts";
+import { cachedBandErrors, cachedUncertaintyFunction } from "./positionUncertainty.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { linearBandModel } from "./linearBandModel.ts";
 import { partitionFunction as computePartitionFunction } from "./partitionFunction.ts";
 import { highestRisingV, levelExpansion, termFromExpansion } from "./termValues.ts";
 import { bandIntensityDataFor } from "./transitionDipole.ts";
-import type { Band, BandLines, DiatomicSpeciesModel, SpeciesModel, TemperatureK, VibrationalBand } from "./types.ts";
+import type { Band, BandAccuracy, BandLines, DiatomicSpeciesModel, SpeciesModel, TemperatureK, VibrationalBand } from "./types.ts";
 
 export interface BandLineOptions {
   temperatureK: TemperatureK;
@@ -34,6 +34,22 @@ export function dunhamPositionUncertainty(species: DiatomicSpeciesModel, band: V
   };
 }
 
+/** A band's own σ and its accuracy, judged against that σ (contradicted or validated). */
+function diatomicBandErrors(species: DiatomicSpeciesModel, band: VibrationalBand) {
+  const uncertainty = dunhamPositionUncertainty(species, band);
+  return { uncertainty, accuracy: bandAccuracy(species, band, cachedUncertaintyFunction(uncertainty)) };
+}
+
+/**
+ * The accuracy of any band of a species with measured lines, built or not (a pure-rotation check
+ * has no band of the atlas): judged against the model's own σ wherever the core can make it.
+ */
+export function checkedBandAccuracy(species: SpeciesModel, band: Band): BandAccuracy {
+  if (species.structure === "diatomic") return diatomicBandErrors(species, vibrationalBand(band)).accuracy;
+  const built = species.linear.bands.some((b) => sameBand(b.band, band));
+  return built ? linearBandModel(species, band, { temperatureK: 296, partitionFunction: 1 }).accuracy : bandAccuracy(species, band);
+}
+
 /** The band model of a ¹Σ⁺ diatomic's band v'←v'': both levels expanded from the Dunham table. */
 export function diatomicBandModel(species: DiatomicSpeciesModel, band: VibrationalBand, options: BandLineOptions): BandModel {
   const vTop = highestRisingV(species.dunham, band.vUpper + 1);
@@ -48,7 +64,7 @@ export function diatomicBandModel(species: DiatomicSpeciesModel, band: Vibration
     lower: levelExpansion(species.dunham, band.vLower),
     upper: levelExpansion(species.dunham, band.vUpper),
     zeroEnergy: termFromExpansion(levelExpansion(species.dunham, 0), 0),
-    ...cachedBandErrors(species, bandLabel(band), () => ({ uncertainty: dunhamPositionUncertainty(species, band), accuracy: bandAccuracy(species, band) })),
+    ...cachedBandErrors(species, bandLabel(band), () => diatomicBandErrors(species, band)),
     partitionFunction: options.partitionFunction ?? computePartitionFunction(species.dunham, options.temperatureK),
     // Nuclear-spin degeneracy of a heteronuclear diatomic is the same for every level and cancels.
     lowerWeight: () => 1,

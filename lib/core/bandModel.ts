@@ -77,9 +77,9 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
   const uncertaintyOf = (xUpper: number, xLower: number, absM: number) => Math.max(propagated(xUpper, xLower), floorByAbsM[absM]);
   const check = accuracy.check;
   const statusOf = (branch: Branch, jLower: number): Line["positionStatus"] => {
-    if (accuracy.status !== "validated") return accuracy.status;
+    if (accuracy.status !== "validated" && accuracy.status !== "contradicted") return accuracy.status;
     const absM = Math.abs(runningIndex(branch, jLower));
-    return absM >= check!.absMMin && absM <= check!.absMMax ? "validated" : "extrapolated";
+    return absM >= check!.absMMin && absM <= check!.absMMax ? accuracy.status : "extrapolated";
   };
 
   // The scan stores plain numbers in scratch arrays; Line objects are made once, only for the

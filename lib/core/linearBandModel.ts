@@ -1,7 +1,7 @@
 import { bandLabel, sameBand } from "./band.ts";
 import { bandAccuracy } from "./bandAccuracy.ts";
 import type { BandModel, PositionUncertainty } from "./bandModel.ts";
-import { cachedBandErrors } from "./positionUncertainty.ts";
+import { cachedBandErrors, cachedUncertaintyFunction } from "./positionUncertainty.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { linearPartitionFunction } from "./linearPartitionFunction.ts";
 import { linearStateExpansion } from "./linearStateTerms.ts";
@@ -73,12 +73,12 @@ export function linearBandModel(species: LinearSpeciesModel, band: Band, options
     lower: linearStateExpansion(lower),
     upper: linearStateExpansion(upper),
     zeroEnergy: ground.termEnergy.valueCm,
-    ...cachedBandErrors(species, entry.band.label, () => ({
-      uncertainty: linear.positionErrors
+    ...cachedBandErrors(species, entry.band.label, () => {
+      const uncertainty = linear.positionErrors
         ? componentPositionUncertainty(linear.positionErrors, entry.upperStateIndex, entry.lowerStateIndex)
-        : linearPositionUncertainty(upper, lower, entry.upperStateIndex, entry.lowerStateIndex),
-      accuracy: bandAccuracy(species, entry.band),
-    })),
+        : linearPositionUncertainty(upper, lower, entry.upperStateIndex, entry.lowerStateIndex);
+      return { uncertainty, accuracy: bandAccuracy(species, entry.band, cachedUncertaintyFunction(uncertainty)) };
+    }),
     partitionFunction: options.partitionFunction ?? linearPartitionFunction(linear, options.temperatureK),
     lowerWeight: (j) => nuclearSpinWeight(linear.nuclearSpinWeights, lower.symmetry, j),
     intensity: species.intensities.find((d) => sameBand(d.band, entry.band)) ?? null,

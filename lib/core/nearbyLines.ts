@@ -1,4 +1,4 @@
-import type { WavenumberCm } from "./types.ts";
+import type { Line, WavenumberCm } from "./types.ts";
 
 export interface LocatedLine {
   molecule: string;
@@ -6,6 +6,9 @@ export interface LocatedLine {
   band: string;
   label: string;
   wavenumber: WavenumberCm;
+  /** The line's ± and status, printed beside every position a search shows. */
+  wavenumberUncertainty: WavenumberCm;
+  positionStatus: Line["positionStatus"];
   /** Relative to the strongest line of its own band. */
   relativeIntensity: number;
   /**

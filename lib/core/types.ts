@@ -131,13 +131,17 @@ export interface SpeciesValidation {
 
 /** A band's accuracy status, carried by every computed band. */
 export interface BandAccuracy {
-  status: "validated" | "extrapolated" | "not-validated";
+  status: "validated" | "contradicted" | "extrapolated" | "not-validated";
   check: BandCheck | null;
   /**
    * No line is given a smaller ± than the residuals measured lines show at its |m| or below (the
    * band's own lines when validated, else the molecule's): empty when nothing was measured.
    */
   floor: ResidualEnvelope;
+  /** The measured line that misses furthest, when measured lines contradict the band; else null. */
+  contradiction: { label: string; predictedMinusMeasuredCm: number } | null;
+  /** Measured lines beyond 3× the model's own ± (before the floor): how many, and the furthest. */
+  beyondModelSigma: { count: number; label: string; ratio: number } | null;
 }
 
 /** What every species carries, whatever its structure. */
@@ -193,8 +197,12 @@ export interface Line {
   relativeIntensity: number;
   lineIntensity: LineIntensityCmPerMolecule | null;
   populationFraction: number;
-  /** validated: inside the measured |m| range of a validated band; extrapolated: outside it, or a band without measured lines of its own. */
-  positionStatus: "validated" | "extrapolated" | "not-validated";
+  /**
+   * validated: inside the measured |m| range of a validated band; contradicted: inside the measured
+   * range of a band its measured lines contradict; extrapolated: outside it, or a band without
+   * measured lines of its own.
+   */
+  positionStatus: "validated" | "contradicted" | "extrapolated" | "not-validated";
 }
 
 export interface BandLines {

@@ -1,7 +1,9 @@
 import type { NearbyLine } from "../core/index.ts";
 import type { EmptyFindHints, InterfererRegion, NeighbourLine } from "../atlas/index.ts";
-import { fixed, significant } from "./numbers.ts";
-import { withUncertainty } from "./spectrumCalibrationText.ts";
+import { atDecimals, fixed, positionWithUncertainty, significant } from "./numbers.ts";
+import { positionStatusWords } from "./accuracyText.ts";
+
+const withUncertainty = (value: number, sigma: number) => positionWithUncertainty(value, sigma);
 
 // The words and cells of a position search, the same in `bandatlas find` and the website.
 
@@ -13,24 +15,49 @@ export function findHeadText(o: { windowCm: number; wavenumber: number; given: s
   );
 }
 
-/** Column headings and cells of the matches table. */
+/**
+ * Column headings and cells of the matches table. The position and the offset are rounded to the
+ * line's ± (the offset is as uncertain as the line), with the ± and the status beside them: an
+ * offset of "+0.0006" next to a ± of 0.5 is no match, and the table must say so.
+ */
 export const findColumns: ReadonlyArray<{ heading: string; numeric: boolean; cell: (m: NearbyLine) => string }> = [
   { heading: "molecule", numeric: false, cell: (m) => m.molecule },
   { heading: "species", numeric: false, cell: (m) => m.species },
   { heading: "band", numeric: false, cell: (m) => m.band },
   { heading: "line", numeric: false, cell: (m) => m.label },
-  { heading: "ν̃ / cm⁻¹", numeric: true, cell: (m) => fixed(m.wavenumber, 4) },
-  { heading: "offset / cm⁻¹", numeric: true, cell: (m) => (m.offset >= 0 ? "+" : "") + fixed(m.offset, 4) },
-  { heading: "rel. to gas", numeric: true, cell: (m) => (m.gasRelativeIntensity === null ? "n/a" : significant(m.gasRelativeIntensity, 3)) },
+  { heading: "ν̃ / cm⁻¹", numeric: true, cell: (m) => withUncertainty(m.wavenumber, m.wavenumberUncertainty).value },
+  { heading: "± / cm⁻¹", numeric: true, cell: (m) => withUncertainty(m.wavenumber, m.wavenumberUncertainty).sigma },
+  { heading: "position", numeric: false, cell: (m) => positionStatusWords[m.positionStatus] },
+  {
+    heading: "offset / cm⁻¹",
+    numeric: true,
+    cell: (m) => (m.offset >= 0 ? "+" : "") + atDecimals(m.offset, withUncertainty(m.wavenumber, m.wavenumberUncertainty).decimals),
+  },
+  { heading: "rel. to gas", numeric: true, cell: (m) => (m.gasRelativeIntensity === null ? "unknown" : significant(m.gasRelativeIntensity, 3)) },
   { heading: "rel. in band", numeric: true, cell: (m) => significant(m.relativeIntensity, 3) },
 ];
 
+/**
+ * The matches in two lists: lines whose strength relative to their gas is known, nearest first,
+ * and after them, never ranked among them, lines whose band strength no cited intensity ties to
+ * the gas (a weak overtone may then look as strong as the fundamental).
+ */
+export function findGroups<M extends NearbyLine>(matches: readonly M[]): { known: M[]; unknown: M[] } {
+  return { known: matches.filter((m) => m.gasRelativeIntensity !== null), unknown: matches.filter((m) => m.gasRelativeIntensity === null) };
+}
+
+/** The heading of the second list: why its lines are apart. */
+export const findUnknownStrengthHeading =
+  "Strength unknown: no cited intensity ties these bands to the rest of their gas, so they are listed apart and judged only against their own band's strongest line. They may be far weaker than the lines above.";
+
 /** Said under the table when a match's band strength relative to its gas could not be sourced. */
 export function findUnsourcedNote(matches: readonly NearbyLine[]): string | null {
-  return matches.some((m) => m.gasRelativeIntensity === null)
-    ? "n/a: no cited intensity ties this band's strength to the rest of its gas; it is kept and judged by its own band's strongest line."
-    : null;
+  return matches.some((m) => m.gasRelativeIntensity === null) ? `rel. to gas "unknown": ${findUnknownStrengthHeading}` : null;
 }
+
+/** Said under every matches table. */
+export const findPositionsNote =
+  "Positions and offsets are rounded to each line's ± (two significant digits of it); a match closer than its ± is no closer than that.";
 
 const range = (r: InterfererRegion) => `${r.band} ${r.fromCm}–${r.toCm}`;
 const at = (value: number, sigma: number | null) => {

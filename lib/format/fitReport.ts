@@ -1,6 +1,7 @@
 import { fitDecimals } from "../molecules/fileFit.ts";
 import { textTable } from "./linesTable.ts";
 import { signedSignificant, significant } from "./numbers.ts";
+import { residualSignText } from "./accuracyText.ts";
 
 /** What `bandatlas fit` reports, for any kind of fit (Dunham terms or per-state constants). */
 export interface FitReport {
@@ -15,6 +16,7 @@ export interface FitReport {
     measured: number;
     uncertainty: number;
     calculated: number;
+    /** Calculated − measured, cm⁻¹ (residualSignText). */
     residual: number;
     normalized: number;
     heldOut: boolean;
@@ -28,6 +30,8 @@ export interface FitReport {
   heldOutRmsCm: number | null;
   nextTerms: Array<{ name: string; significance: number; supported: boolean }>;
   rule: string;
+  /** The sign of every residual of the report, in words (residualSignText). */
+  residualSign: string;
 }
 
 /** The report's line rows from a fit's residuals (Dunham or per-state fits alike). */
@@ -46,8 +50,10 @@ export function fitReportLines(
     measured: r.observation.wavenumberCm,
     uncertainty: r.observation.uncertaintyCm,
     calculated: r.calculatedCm,
-    residual: r.residualCm,
-    normalized: r.normalized,
+    // The fit's own residual is measured − calculated; every printed residual of the atlas is
+    // atlas − measured (residualSignText), so the report turns it round once, here.
+    residual: -r.residualCm,
+    normalized: -r.normalized,
     heldOut: r.observation.heldOut,
     source: r.observation.sourceKey,
   }));
@@ -84,7 +90,7 @@ export function fitReportText(r: FitReport): string {
     [false, ...names.map(() => true)],
   );
   const lines = textTable(
-    ["species", "band", "line", "measured / cm⁻¹", "± / cm⁻¹", "calculated / cm⁻¹", "obs − calc / cm⁻¹", "(obs − calc)/σ", "use", "source"],
+    ["species", "band", "line", "measured / cm⁻¹", "± / cm⁻¹", "calculated / cm⁻¹", "calc − meas / cm⁻¹", "(calc − meas)/σ", "use", "source"],
     r.lines.map((l) => [
       l.species,
       l.band,
@@ -99,5 +105,6 @@ export function fitReportText(r: FitReport): string {
     ]),
     [false, false, false, true, true, true, true, true, false, false],
   );
-  return `${header.join("\n")}${params}\n${next}\n${correlation}\n\n${lines}\n`;
+  const sign = `residuals: calculated − measured (${residualSignText}, as on the method page and in calibrate)`;
+  return `${header.join("\n")}${params}\n${next}\n${correlation}\n\n${sign}\n${lines}\n`;
 }

@@ -1,5 +1,6 @@
 import type { Line } from "../core/index.ts";
-import { fixed, significant } from "./numbers.ts";
+import { atDecimals, fixed, positionWithUncertainty, significant, uncertaintyDecimals, wavelengthSigmaUm } from "./numbers.ts";
+import { positionStatusWords } from "./accuracyText.ts";
 
 /**
  * The one table of line columns: the JSON field (the key), its unit, its heading in each output
@@ -27,6 +28,17 @@ export interface LineColumn {
   numeric: boolean;
 }
 
+/**
+ * Wavelengths are positions too: printed to the decimal of their own ±, carried over from the
+ * wavenumber's (air and vacuum differ by 3·10⁻⁴, far below a change of printed place).
+ */
+function wavelengthDecimalsUm(l: Line): number {
+  // Never finer than 10⁻⁶ µm (1 pm): a wavelength is read off a grating or a wavemeter, neither of
+  // which resolves less, and a sheet column has no room for more; the wavenumber keeps every digit
+  // its ± supports (our own choice).
+  return Math.min(uncertaintyDecimals(wavelengthSigmaUm(l.wavenumber, l.wavenumberUncertainty)), 6);
+}
+
 export const lineColumns: readonly LineColumn[] = [
   { key: "label", unit: null, csv: "label", table: "line", page: null, cell: (l) => l.label, numeric: false },
   { key: "branch", unit: null, csv: "branch", table: null, page: null, cell: (l) => l.branch, numeric: false },
@@ -38,7 +50,7 @@ export const lineColumns: readonly LineColumn[] = [
     csv: "wavenumber (cm-1)",
     table: "ν̃ / cm⁻¹",
     page: { name: "wavenumber ν̃", unit: "/ cm⁻¹ (vacuum)" },
-    cell: (l) => fixed(l.wavenumber, 4),
+    cell: (l) => positionWithUncertainty(l.wavenumber, l.wavenumberUncertainty).value,
     numeric: true,
   },
   {
@@ -47,7 +59,7 @@ export const lineColumns: readonly LineColumn[] = [
     csv: "wavenumberUncertainty (cm-1)",
     table: "± / cm⁻¹",
     page: { name: "± ν̃", unit: "/ cm⁻¹" },
-    cell: (l) => significant(l.wavenumberUncertainty, 2),
+    cell: (l) => positionWithUncertainty(l.wavenumber, l.wavenumberUncertainty).sigma,
     numeric: true,
   },
   {
@@ -56,7 +68,8 @@ export const lineColumns: readonly LineColumn[] = [
     csv: "positionStatus",
     table: "position",
     page: { name: "position", unit: "" },
-    cell: (l) => l.positionStatus,
+    cell: (l) => positionStatusWords[l.positionStatus],
+    csvCell: (l) => l.positionStatus,
     numeric: false,
   },
   {
@@ -65,7 +78,7 @@ export const lineColumns: readonly LineColumn[] = [
     csv: "wavelengthVacuum (um)",
     table: "λ vac / µm",
     page: { name: "λ vacuum", unit: "/ µm" },
-    cell: (l) => fixed(l.wavelengthVacuumUm, 6),
+    cell: (l) => atDecimals(l.wavelengthVacuumUm, wavelengthDecimalsUm(l)),
     numeric: true,
   },
   {
@@ -76,8 +89,8 @@ export const lineColumns: readonly LineColumn[] = [
     csv: "wavelengthAir (nm)",
     table: "λ air / µm",
     page: { name: "λ air", unit: "/ µm" },
-    cell: (l) => fixed(l.wavelengthAirNm / 1000, 6),
-    csvCell: (l) => fixed(l.wavelengthAirNm, 3),
+    cell: (l) => atDecimals(l.wavelengthAirNm / 1000, wavelengthDecimalsUm(l)),
+    csvCell: (l) => atDecimals(l.wavelengthAirNm, wavelengthDecimalsUm(l) - 3),
     numeric: true,
   },
   {

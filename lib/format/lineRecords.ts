@@ -1,7 +1,9 @@
 import { bandLabel, type BandLines, type Line } from "../core/index.ts";
+import { bandOriginBound } from "../atlas/index.ts";
 import { accuracyRecord, accuracyText } from "./accuracyText.ts";
 import { csvRow, numeric } from "./csv.ts";
 import { csvLineColumns, lineColumns } from "./lineColumns.ts";
+import { roundedToUncertainty, wavelengthSigmaUm } from "./numbers.ts";
 
 /**
  * What every line table says of its positions: the pressure shift of a filled cell is left out
@@ -16,7 +18,11 @@ export interface LinesDocument {
   species: string;
   band: string;
   temperatureK: number;
+  /** Rounded to its ±, as every position (bandOriginBoundNote). */
   bandOrigin: number;
+  /** The larger ± of the band's first P and R lines; null when it lists none on one side. */
+  bandOriginUncertainty: number | null;
+  bandOriginStatus: Line["positionStatus"] | null;
   partitionFunction: number;
   /** What the positions are (positionsAre): zero-pressure line centres. */
   positions: string;
@@ -50,12 +56,39 @@ export function linesDocument(moleculeId: string, result: BandLines, limitations
     species: result.species,
     band: bandLabel(result.band),
     temperatureK: result.temperatureK,
-    bandOrigin: result.bandOrigin,
+    ...bandOriginRecord(result),
     partitionFunction: result.partitionFunction,
     positions: positionsAre,
     accuracy: accuracyRecord(result.accuracy),
     limitations: [...limitations],
-    lines: result.lines.map((l) => Object.fromEntries(csvLineColumns.map((c) => [c.key, l[c.key]])) as LinesDocument["lines"][number]),
+    lines: result.lines.map((l) => ({
+      ...(Object.fromEntries(csvLineColumns.map((c) => [c.key, l[c.key]])) as LinesDocument["lines"][number]),
+      ...roundedPositions(l),
+    })),
+  };
+}
+
+/**
+ * The positions of a JSON line rounded to their ± (two significant digits of it), as every printed
+ * position is: the digits beyond carry no information, and a reader who copies them would claim it.
+ */
+export function roundedPositions(l: Line): Pick<Line, "wavenumber" | "wavenumberUncertainty" | "wavelengthVacuumUm" | "wavelengthAirNm"> {
+  const sigmaUm = wavelengthSigmaUm(l.wavenumber, l.wavenumberUncertainty);
+  return {
+    wavenumber: roundedToUncertainty(l.wavenumber, l.wavenumberUncertainty),
+    wavenumberUncertainty: roundedToUncertainty(l.wavenumberUncertainty, l.wavenumberUncertainty),
+    wavelengthVacuumUm: roundedToUncertainty(l.wavelengthVacuumUm, sigmaUm),
+    wavelengthAirNm: roundedToUncertainty(l.wavelengthAirNm, sigmaUm * 1000),
+  };
+}
+
+function bandOriginRecord(result: BandLines) {
+  const bound = bandOriginBound(result);
+  const sigma = bound.uncertainty;
+  return {
+    bandOrigin: sigma === null ? result.bandOrigin : roundedToUncertainty(result.bandOrigin, sigma),
+    bandOriginUncertainty: sigma === null ? null : roundedToUncertainty(sigma, sigma),
+    bandOriginStatus: bound.status,
   };
 }
 

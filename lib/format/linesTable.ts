@@ -1,5 +1,6 @@
 import { bandLabel, type BandLines } from "../core/index.ts";
-import { accuracyText } from "./accuracyText.ts";
+import { bandOriginBound } from "../atlas/index.ts";
+import { accuracyText, bandOriginBoundNote, bandOriginText } from "./accuracyText.ts";
 import { lineColumns } from "./lineColumns.ts";
 import { positionsAre } from "./lineRecords.ts";
 import { significant } from "./numbers.ts";
@@ -38,11 +39,12 @@ export function linesTable(result: BandLines, context: LinesTableContext): strin
       : `absolute intensities: ${intensityOriginWords[result.intensityOrigin]}; per molecule of the gas at natural isotopic abundance`;
   const header = [
     `${context.moleculeName} (${context.formula}), species ${result.species}, band ${bandLabel(result.band)}, T = ${result.temperatureK} K`,
-    `band origin ${result.bandOrigin.toFixed(4)} cm⁻¹; partition function Q = ${significant(result.partitionFunction, 6)}; ${result.lines.length} lines, J'' up to ${result.jLowerMax}`,
+    `band origin ${bandOriginText(bandOriginBound(result))}; partition function Q = ${significant(result.partitionFunction, 6)}; ${result.lines.length} lines, J'' up to ${result.jLowerMax}`,
     context.constantsNote,
     `positions: ${positionsAre}`,
     intensity,
     `accuracy: ${accuracyText(result.accuracy)}`,
+    `${bandOriginBoundNote}; positions are rounded to their ± (two significant digits of it)`,
     ...(context.limitations ?? []).map((l) => `KNOWN LIMITATION: ${l}`),
     "",
   ];

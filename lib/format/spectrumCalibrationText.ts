@@ -7,6 +7,8 @@ import { applyCorrectionSentence, residualLines, residualsAfterCorrection } from
 import { assumedConditionsNote, assumedWord, noRecordFields, recordFacts, type CalibrationRecordFields } from "./calibrationRecord.ts";
 import { runVerdict, verdictDocument, verdictLines, verdictRule } from "./calibrationVerdict.ts";
 import { textTable } from "./linesTable.ts";
+import { positionWithUncertainty } from "./numbers.ts";
+import { residualSignText } from "./accuracyText.ts";
 
 /** Everything one calibration run produced, as the table, the JSON, the page and the report show it. */
 export interface CalibrationRun {
@@ -237,6 +239,9 @@ export function calibrationDocument(run: CalibrationRun) {
   };
 }
 
+/** Said under every calibrate line table: the sign, the same as every residual of the atlas. */
+export const calibrationResidualSign = `residual = reference − corrected measured position (${residualSignText}: the sign of every residual the atlas prints)`;
+
 /** The line table's rows, as the CLI and the report print them. */
 export function calibrationLineRows(run: CalibrationRun): { headings: string[]; rows: string[][]; rightAligned: boolean[] } {
   const headings = ["species", "band", "line", "reference/cm⁻¹", "± ref", "measured/cm⁻¹", "± meas", "residual/cm⁻¹", "used", "why not"];
@@ -244,8 +249,9 @@ export function calibrationLineRows(run: CalibrationRun): { headings: string[]; 
     l.reference.species,
     l.reference.band,
     l.reference.label,
-    (l.reference.referenceCm ?? l.reference.wavenumber).toFixed(calibrationPositionDigits),
-    l.reference.referenceUncertaintyCm.toPrecision(2),
+    // The reference is a printed position: rounded to its ± like every other (positionWithUncertainty).
+    positionWithUncertainty(l.reference.referenceCm ?? l.reference.wavenumber, l.reference.referenceUncertaintyCm).value,
+    positionWithUncertainty(l.reference.referenceCm ?? l.reference.wavenumber, l.reference.referenceUncertaintyCm).sigma,
     l.peak ? l.peak.wavenumberCm.toFixed(calibrationPositionDigits) : "—",
     l.measurementSigmaCm === null ? "—" : l.measurementSigmaCm.toPrecision(2),
     l.residualCm === null ? "—" : signed(l.residualCm.toFixed(calibrationPositionDigits)),
@@ -286,6 +292,7 @@ export function calibrationText(run: CalibrationRun): string {
     textTable(budget.headings, budget.rows, budget.rightAligned),
     "",
     textTable(table.headings, table.rows, table.rightAligned),
+    calibrationResidualSign,
     "",
     ...calibrationNotes(run).map((n) => `note: ${n}`),
     calibrationRulesText(run),

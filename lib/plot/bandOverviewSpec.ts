@@ -1,5 +1,6 @@
-import type { AtlasEntry } from "../atlas/index.ts";
-import { fixed } from "../format/index.ts";
+import { bandOriginBound, type AtlasEntry } from "../atlas/index.ts";
+import type { BandLines, Line } from "../core/index.ts";
+import { fixed, positionWithUncertainty } from "../format/index.ts";
 import { bandOriginColour, branchStyle } from "../shared/branchStyle.ts";
 
 export type IntensityScale = "linear" | "log";
@@ -37,6 +38,18 @@ export function overviewPoints(entry: AtlasEntry): OverviewPoint[] {
 }
 
 /** Vega-Lite spec of the band overview: a pure function of the entry's data. */
+/** Positions on the plot are rounded to their ± like every printed position. */
+function originText(band: BandLines): string {
+  const sigma = bandOriginBound(band).uncertainty;
+  if (sigma === null) return `${fixed(band.bandOrigin, 1)} cm⁻¹`;
+  const w = positionWithUncertainty(band.bandOrigin, sigma);
+  return `${w.value} ± ${w.sigma} cm⁻¹`;
+}
+function lineText(line: Line): string {
+  const w = positionWithUncertainty(line.wavenumber, line.wavenumberUncertainty);
+  return `${w.value} ± ${w.sigma} cm⁻¹`;
+}
+
 export function bandOverviewSpec(entry: AtlasEntry, scale: IntensityScale, size = { width: 720, height: 260 }): Record<string, unknown> {
   // The first band is the one the others are compared with (a diatomic's fundamental, a linear
   // molecule's first listed band, which may be a combination band).
@@ -113,7 +126,7 @@ export function bandOverviewSpec(entry: AtlasEntry, scale: IntensityScale, size 
         },
       },
       {
-        data: { values: [{ origin: fundamental.lines.bandOrigin, text: `band origin ${fixed(fundamental.lines.bandOrigin, 2)} cm⁻¹` }] },
+        data: { values: [{ origin: fundamental.lines.bandOrigin, text: `band origin ${originText(fundamental.lines)}` }] },
         layer: [
           { mark: { type: "rule", strokeDash: [1, 3], strokeWidth: 1.5, color: bandOriginColour }, encoding: { x: { field: "origin", type: "quantitative" } } },
           {
@@ -137,8 +150,8 @@ export function bandOverviewDescription(entry: AtlasEntry, scale: IntensityScale
     : "no lines";
   return (
     `Stick spectrum of the ${fundamental.label} band of ${entry.species} at ${entry.temperatureK} K, intensity on a ${scale === "log" ? "logarithmic" : "linear"} scale: ` +
-    `${range}, P branch (triangles, dashed) below and R branch (circles, solid) above the band origin at ${fixed(fundamental.lines.bandOrigin, 2)} cm⁻¹` +
-    (strongest ? `; strongest line ${strongest.label} at ${fixed(strongest.wavenumber, 2)} cm⁻¹` : "") +
+    `${range}, P branch (triangles, dashed) below and R branch (circles, solid) above the band origin at ${originText(fundamental.lines)}` +
+    (strongest ? `; strongest line ${strongest.label} at ${lineText(strongest)}` : "") +
     (hot.length ? `; hot band${hot.length > 1 ? "s" : ""} ${hot.join(", ")} drawn paler` : "; no hot band reaches 0.001 of the strongest line") +
     "."
   );

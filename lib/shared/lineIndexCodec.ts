@@ -1,26 +1,28 @@
 // The wavenumber-search index shipped with the site: every line of the atlas at one temperature
-// (the same lines `bandatlas find` searches), packed as four columns
-//   wavenumber[n] | relativeIntensity[n] | Uint16 group[n] | Uint16 label[n]
-// = 20 bytes a line, base64 in a small JSON file. Wavenumbers and intensities stay exact doubles
-// so the browser's answer is the CLI's answer digit for digit; groups (molecule, species, band,
-// page, and the band's factor from band-relative to gas-relative strength) and labels ("R(12)")
-// are small tables referenced by index.
+// (the same lines `bandatlas find` searches), packed as five columns
+//   wavenumber[n] | relativeIntensity[n] | wavenumberUncertainty[n] | Uint16 group[n] | Uint16 label[n]
+// = 28 bytes a line, base64 in a small JSON file. Wavenumbers, intensities and ± stay exact
+// doubles so the browser's answer is the CLI's answer digit for digit (a position is printed to
+// the decimal of its ±); groups (molecule, species, band, page, the band's factor from
+// band-relative to gas-relative strength, and the lines' position status: a validated band's
+// lines outside its measured range form a second group) and labels ("R(12)") are small tables
+// referenced by index.
 // Packed for gzip (web servers send it compressed): the lines are sorted, so the 64-bit patterns
 // of the positive wavenumbers rise too and are stored as differences from the previous line's; each
 // column is then split into byte planes (all first bytes, then all second bytes, ...), so the
 // near-constant high bytes of a double become long runs. Both steps are exact and undone on load.
 import type { LocatedLine } from "../core/nearbyLines.ts";
 
-export const lineIndexFormat = "bandatlas-line-index-3";
-export const lineIndexBytesPerLine = 20;
+export const lineIndexFormat = "bandatlas-line-index-4";
+export const lineIndexBytesPerLine = 28;
 
 export interface LineIndexFile {
   format: typeof lineIndexFormat;
   temperatureK: number;
   minRelative: number;
   count: number;
-  /** [molecule, species, band, page path, gas factor]: a line's gas-relative strength is its band-relative one × the factor (null: not sourced). */
-  groups: Array<[string, string, string, string, number | null]>;
+  /** [molecule, species, band, page path, gas factor, position status]: a line's gas-relative strength is its band-relative one × the factor (null: not sourced). */
+  groups: Array<[string, string, string, string, number | null, LocatedLine["positionStatus"]]>;
   labels: string[];
   data: string;
 }
@@ -110,6 +112,7 @@ const chunkLines = 1 << 16;
 export interface LineIndexChunk {
   wavenumbers: Float64Array;
   intensities: Float64Array;
+  uncertainties: Float64Array;
   groupOf: Uint16Array;
   labelOf: Uint16Array;
 }
@@ -135,7 +138,7 @@ export interface PackedLineIndex {
 
 /**
  * Gathers an index's lines a few at a time (a build adds each batch of molecules and drops their
- * entries) in compact columns, 20 bytes a line in chunks that are never copied, and encodes them
+ * entries) in compact columns, 28 bytes a line in chunks that are never copied, and encodes them
  * all at the end exactly as if they had come in one list.
  */
 export class LineIndexBuilder {
@@ -154,12 +157,13 @@ export class LineIndexBuilder {
   add(lines: readonly LocatedLine[], pageOf: (line: LocatedLine) => string): void {
     for (const line of lines) {
       // Every line of a group shares its band's factor: gas-relative = band-relative × factor.
-      const g = this.groups.id(`${line.molecule}\u0000${line.species}\u0000${line.band}`, () => [
+      const g = this.groups.id(`${line.molecule}\u0000${line.species}\u0000${line.band}\u0000${line.positionStatus}`, () => [
         line.molecule,
         line.species,
         line.band,
         pageOf(line),
         line.bandToGas,
+        line.positionStatus,
       ]);
       if (g > 0xffff) throw new Error("line index: more than 65536 bands of species at one temperature");
       const l = this.labels.id(line.label, () => line.label);
@@ -170,12 +174,14 @@ export class LineIndexBuilder {
         this.chunks.push({
           wavenumbers: new Float64Array(chunkLines),
           intensities: new Float64Array(chunkLines),
+          uncertainties: new Float64Array(chunkLines),
           groupOf: new Uint16Array(chunkLines),
           labelOf: new Uint16Array(chunkLines),
         });
       const chunk = this.chunks[this.chunks.length - 1];
       chunk.wavenumbers[at] = line.wavenumber;
       chunk.intensities[at] = line.relativeIntensity;
+      chunk.uncertainties[at] = line.wavenumberUncertainty;
       chunk.groupOf[at] = g;
       chunk.labelOf[at] = l;
       this.n++;
@@ -240,8 +246,10 @@ export class LineIndexBuilder {
     planesInto(new Uint8Array(deltaBitsInPlace(sorted).buffer), 8, packed.subarray(0, 8 * n));
     for (let i = 0; i < n; i++) sorted[i] = col("intensities", order[i]);
     planesInto(new Uint8Array(sorted.buffer), 8, packed.subarray(8 * n, 16 * n));
-    planesInto(new Uint8Array(groupColumn.buffer), 2, packed.subarray(16 * n, 18 * n));
-    planesInto(new Uint8Array(labelColumn.buffer), 2, packed.subarray(18 * n, 20 * n));
+    for (let i = 0; i < n; i++) sorted[i] = col("uncertainties", order[i]);
+    planesInto(new Uint8Array(sorted.buffer), 8, packed.subarray(16 * n, 24 * n));
+    planesInto(new Uint8Array(groupColumn.buffer), 2, packed.subarray(24 * n, 26 * n));
+    planesInto(new Uint8Array(labelColumn.buffer), 2, packed.subarray(26 * n, 28 * n));
     return {
       head: { format: lineIndexFormat, temperatureK: this.temperatureK, minRelative: this.minRelative, count: n, groups: groups.values, labels: labels.values },
       packed,
@@ -273,18 +281,20 @@ export function decodeLineIndex(file: LineIndexFile): DecodedLineIndex {
   fromPlanes(packed.subarray(0, 8 * n), 8, bytes.subarray(0, 8 * n));
   undoDeltaBits(new Uint32Array(buffer, 0, 2 * n));
   fromPlanes(packed.subarray(8 * n, 16 * n), 8, bytes.subarray(8 * n, 16 * n));
-  fromPlanes(packed.subarray(16 * n, 18 * n), 2, bytes.subarray(16 * n, 18 * n));
-  fromPlanes(packed.subarray(18 * n, 20 * n), 2, bytes.subarray(18 * n, 20 * n));
+  fromPlanes(packed.subarray(16 * n, 24 * n), 8, bytes.subarray(16 * n, 24 * n));
+  fromPlanes(packed.subarray(24 * n, 26 * n), 2, bytes.subarray(24 * n, 26 * n));
+  fromPlanes(packed.subarray(26 * n, 28 * n), 2, bytes.subarray(26 * n, 28 * n));
   const wavenumbers = new Float64Array(buffer, 0, n);
   const intensities = new Float64Array(buffer, 8 * n, n);
-  const groupOf = new Uint16Array(buffer, 16 * n, n);
-  const labelOf = new Uint16Array(buffer, 18 * n, n);
+  const uncertainties = new Float64Array(buffer, 16 * n, n);
+  const groupOf = new Uint16Array(buffer, 24 * n, n);
+  const labelOf = new Uint16Array(buffer, 26 * n, n);
   return {
     temperatureK: file.temperatureK,
     minRelative: file.minRelative,
     wavenumbers,
     line(i) {
-      const [molecule, species, band, page, factor] = file.groups[groupOf[i]];
+      const [molecule, species, band, page, factor, positionStatus] = file.groups[groupOf[i]];
       const relativeIntensity = intensities[i];
       return {
         molecule,
@@ -292,6 +302,8 @@ export function decodeLineIndex(file: LineIndexFile): DecodedLineIndex {
         band,
         label: file.labels[labelOf[i]],
         wavenumber: wavenumbers[i],
+        wavenumberUncertainty: uncertainties[i],
+        positionStatus,
         relativeIntensity,
         gasRelativeIntensity: factor === null ? null : relativeIntensity * factor,
         bandToGas: factor,

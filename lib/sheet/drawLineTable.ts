@@ -9,26 +9,33 @@ type Doc = PDFKit.PDFDocument;
 export const tableRowHeightPt = 13.5;
 export const tableHeadHeightPt = 31;
 export const strongMark = "★";
-/** Room right of the decimal point for the longest relative intensity, "5.863e-4" at 10 pt. */
-const intensityPointInset = 40;
+/** Room right of the decimal point for the longest relative intensity, "5.863e-4" at 9 pt. */
+const intensityPointInset = 36;
+/** Cells at 9 pt: a position rounded to a ± of 10⁻⁶ cm⁻¹ has twelve digits, and its ± nine. */
+const cellFontPt = 9;
 
 interface Columns {
   j: [number, number];
-  branch: Record<Branch, { start: number; mark: number; wavenumber: number; wavelength: number; intensity: number; end: number }>;
+  branch: Record<
+    Branch,
+    { start: number; mark: number; wavenumber: number; uncertainty: number; status: number; wavelength: number; intensity: number; end: number }
+  >;
 }
 
-// Column right edges as fractions of the table width: J″ | mark ν̃ λ rel.int. | mark ν̃ λ rel.int.
+// Column right edges as fractions of the table width: J″ | mark ν̃ ± status λ rel.int. | the same for R.
 function columns(x: number, width: number): Columns {
   const at = (f: number) => x + f * width;
   const branch = (start: number) => ({
     start: at(start),
-    mark: at(start + 0.035),
-    wavenumber: at(start + 0.19),
-    wavelength: at(start + 0.335),
-    intensity: at(start + 0.45),
-    end: at(start + 0.465),
+    mark: at(start + 0.02),
+    wavenumber: at(start + 0.151),
+    uncertainty: at(start + 0.237),
+    status: at(start + 0.256),
+    wavelength: at(start + 0.35),
+    intensity: at(start + 0.443),
+    end: at(start + 0.475),
   });
-  return { j: [x, at(0.07)], branch: { P: branch(0.07), R: branch(0.535) } };
+  return { j: [x, at(0.05)], branch: { P: branch(0.05), R: branch(0.525) } };
 }
 
 function rightText(doc: Doc, text: string, rightX: number, y: number): void {
@@ -57,6 +64,8 @@ export function drawTableHead(doc: Doc, x: number, y: number, width: number): vo
       .text(`${branch}(J″)  ${style.name}, ${style.rule}`, b.start + 17, y + 3, { lineBreak: false });
     doc.font(sheetFonts.regular).fontSize(8.5);
     rightText(doc, lineColumn("wavenumber").table!, b.wavenumber, y + 18);
+    rightText(doc, "±", b.uncertainty - 4, y + 18);
+    rightText(doc, "st.", b.status, y + 18);
     rightText(doc, lineColumn("wavelengthVacuumUm").table!, b.wavelength, y + 18);
     doc.text(lineColumn("relativeIntensity").table!, b.intensity - intensityPointInset - 7, y + 18, { lineBreak: false });
   }
@@ -80,10 +89,18 @@ function drawCell(doc: Doc, cell: SheetLineCell | null, b: Columns["branch"]["P"
   }
   doc
     .font(cell.strong ? sheetFonts.bold : sheetFonts.regular)
-    .fontSize(10)
+    .fontSize(cellFontPt)
     .fillColor(ink);
-  if (cell.strong) doc.text(strongMark, b.start + 4, y - 0.5, { lineBreak: false });
+  if (cell.strong)
+    doc
+      .fontSize(7)
+      .text(strongMark, b.start + 1.5, y + 0.5, { lineBreak: false })
+      .fontSize(cellFontPt);
   rightText(doc, cell.wavenumber, b.wavenumber, y);
+  doc.font(sheetFonts.regular).fontSize(7.5);
+  rightText(doc, cell.uncertainty, b.uncertainty, y + 1);
+  rightText(doc, cell.status, b.status - 2, y + 1);
+  doc.font(cell.strong ? sheetFonts.bold : sheetFonts.regular).fontSize(cellFontPt);
   rightText(doc, cell.wavelengthVacuumUm, b.wavelength, y);
   decimalText(doc, cell.relativeIntensity, b.intensity - intensityPointInset, y);
 }

@@ -43,7 +43,8 @@ export function drawStickPlot(doc: Doc, box: Box, content: SheetContent): void {
   const origin = sx(content.bandOrigin);
   doc.save().lineWidth(0.8).strokeColor(ink).dash(1, { space: 1.5 }).moveTo(origin, bottom).lineTo(origin, sy(1.06)).stroke().restore();
   doc.font(sheetFonts.regular).fontSize(7.5).fillColor(ink);
-  const originLabel = `band origin ν₀ = ${content.bandOriginText}`;
+  // The value and ± only: the status is in the header line above the caution box.
+  const originLabel = `ν₀ = ${content.bandOriginText.replace(/ \(.*$/, "")}`;
   const originWidth = doc.widthOfString(originLabel);
   const originX = Math.min(Math.max(origin - originWidth / 2, left + 2), right - originWidth - 2);
   doc.text(originLabel, originX, sy(yTop) + 1, { lineBreak: false });

@@ -1,7 +1,8 @@
-import type { AtlasBand, AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
+import { bandOriginBound, type AtlasBand, type AtlasEntry, type CalibrationMarks } from "../atlas/index.ts";
 import { sameBand, type Band, type BandLines, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
 import {
   accuracyText,
+  bandOriginText,
   constantsOriginText,
   sheetCautionDeferral,
   calibrationConditionsText,
@@ -9,6 +10,7 @@ import {
   criteriaPhrase,
   fixed,
   lineCells,
+  positionStatusWords,
   peakShiftDigits,
   significant,
 } from "../format/index.ts";
@@ -22,7 +24,10 @@ export const strongLineFraction = 0.5;
 
 export interface SheetLineCell {
   label: string;
+  /** Rounded to its ±, with the ± beside it and the status as one letter (sheetStatusLetters). */
   wavenumber: string;
+  uncertainty: string;
+  status: string;
   wavelengthVacuumUm: string;
   relativeIntensity: string;
   strong: boolean;
@@ -115,11 +120,23 @@ function calibrationMarksNote(marks: CalibrationMarks, entry: AtlasEntry, band: 
 
 export const cautionDeferral = sheetCautionDeferral;
 
+/**
+ * One letter per line in the narrow sheet table (two branches side by side leave no room for the
+ * words); the legend under the table spells them out (sheetStatusLegend).
+ */
+export const sheetStatusLetters: Record<Line["positionStatus"], string> = { validated: "v", contradicted: "c", extrapolated: "e", "not-validated": "n" };
+export const sheetStatusLegend =
+  "± is the line's standard uncertainty; positions are rounded to it. Status: " +
+  (Object.keys(sheetStatusLetters) as Array<Line["positionStatus"]>).map((s) => `${sheetStatusLetters[s]} ${positionStatusWords[s]}`).join(", ") +
+  ".";
+
 function cellOf(line: Line): SheetLineCell {
   const c = lineCells(line);
   return {
     label: line.label,
     wavenumber: c.wavenumber,
+    uncertainty: c.wavenumberUncertainty,
+    status: sheetStatusLetters[line.positionStatus],
     wavelengthVacuumUm: c.wavelengthVacuumUm,
     relativeIntensity: c.relativeIntensity,
     strong: line.relativeIntensity >= strongLineFraction,
@@ -224,7 +241,7 @@ export function sheetContent(input: SheetContentInput): SheetContent {
         ? `band ${displayText(fundamental.name)} (${displayText(fundamental.label)})`
         : `band ${fundamental.label} (fundamental)`,
     temperatureText,
-    bandOriginText: `${fixed(bandLines.bandOrigin, 4)} cm⁻¹`,
+    bandOriginText: bandOriginText(bandOriginBound(bandLines)),
     summaryText: `${bandLines.lines.length} lines down to ${significant(Math.min(...bandLines.lines.map((l) => l.relativeIntensity)), 1)} of the strongest; partition function Q = ${significant(entry.partitionFunction, 5)}`,
     buildText: describeBuild(build),
     caution: { pictograms: molecule.hazard.ghsPictograms.map(displayText), sentences: molecule.hazard.sentences.map(displayText), deferral: cautionDeferral },

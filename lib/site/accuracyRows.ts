@@ -1,6 +1,6 @@
 import type { AtlasBand, AtlasEntry } from "../atlas/index.ts";
 import { defaultTemperatureK } from "../atlas/index.ts";
-import { bandLabel } from "../core/index.ts";
+import { bandLabel, checkedBandAccuracy, isStateBand, sameBand } from "../core/index.ts";
 import { positionStatusWords, significant } from "../format/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { speciesPagePath } from "../shared/sitePaths.ts";
@@ -34,7 +34,7 @@ export function accuracyRows(molecules: Molecule[], entries: AtlasEntry[]) {
           band,
           path,
           anchor,
-          status: positionStatusWords[accuracy.status === "validated" ? "validated" : accuracy.status],
+          status: positionStatusWords[accuracy.status],
           lines: c ? `${c.lineCount}${c.heldOutCount ? ` (${c.heldOutCount} held out)` : ""}` : "—",
           range: c ? (c.absMMin === c.absMMax ? String(c.absMMin) : `${c.absMMin}–${c.absMMax}`) : "—",
           largest: c ? significant(c.maxAbsResidualCm, 2) : "—",
@@ -43,9 +43,12 @@ export function accuracyRows(molecules: Molecule[], entries: AtlasEntry[]) {
         };
       };
       for (const band of entry.bands) rows.push(row(band.label, band.lines.accuracy, `band-${band.label}`, band.lines.lines.map((l) => l.wavenumberUncertainty)));
+      // Checks of bands the atlas does not build (pure rotation) get rows of their own; a built
+      // band's check is its row above (a linear band has no vUpper/vLower to compare: it was listed twice).
       for (const check of species.model.validation?.checks ?? []) {
-        if (check.band.vUpper !== check.band.vLower) continue;
-        rows.push(row(`${bandLabel(check.band)} (pure rotation)`, { status: "validated", check, floor: check.envelope }, null, []));
+        if (entry.bands.some((b) => sameBand(b.lines.band, check.band))) continue;
+        const pureRotation = !isStateBand(check.band) && check.band.vUpper === check.band.vLower;
+        rows.push(row(`${bandLabel(check.band)}${pureRotation ? " (pure rotation)" : ""}`, checkedBandAccuracy(species.model, check.band), null, []));
       }
     }
   }

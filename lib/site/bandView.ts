@@ -1,6 +1,6 @@
-import type { AtlasBand, AtlasEntry } from "../atlas/index.ts";
+import { bandOriginBound, type AtlasBand, type AtlasEntry } from "../atlas/index.ts";
 import { bandLabel } from "../core/index.ts";
-import { accuracyText, calibrationCellText, calibrationLineKey, fixed, intensityOriginWords, lineColumn, lineColumns, significant, type LineCalibration } from "../format/index.ts";
+import { accuracyText, bandOriginBoundNote, bandOriginText, calibrationCellText, calibrationLineKey, fixed, intensityOriginWords, lineColumn, lineColumns, significant, type LineCalibration } from "../format/index.ts";
 import { downloadPath, lineRowId } from "../shared/sitePaths.ts";
 import { signedSignificant } from "./formatCells.ts";
 
@@ -41,8 +41,8 @@ export function bandView(entry: AtlasEntry, band: AtlasBand, calibration?: Map<s
       // The page's line columns, in the order and digits of lib/format lineColumns.
       cells: pageColumns.map((c) => c.cell(line) || "—"),
       wavenumber: lineColumn("wavenumber").cell(line),
-      // The table shows measured − predicted (the atlas stores predicted − measured).
-      measuredMinusPredicted: residual === undefined ? null : signedSignificant(-residual, 2),
+      // One sign everywhere (residualSignText): the atlas's prediction minus the measured line.
+      predictedMinusMeasured: residual === undefined ? null : signedSignificant(residual, 2),
       calibration: calibrationOf(line.label),
     };
   });
@@ -51,7 +51,8 @@ export function bandView(entry: AtlasEntry, band: AtlasBand, calibration?: Map<s
     kind: band.kind,
     title: `${band.label}${band.name !== band.label ? ` (${band.name})` : ""} ${bandTitles[band.kind]}`,
     anchor: `band-${band.label}`,
-    bandOrigin: fixed(band.lines.bandOrigin, 4),
+    bandOrigin: bandOriginText(bandOriginBound(band.lines)),
+    bandOriginNote: bandOriginBoundNote,
     lineCount: band.lines.lines.length,
     strength: band.kind === "fundamental" || band.strengthRelativeToFundamental === null ? null : significant(band.strengthRelativeToFundamental, 2),
     shownWithFundamental: band.shownWithFundamental,

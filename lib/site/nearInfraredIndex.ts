@@ -1,5 +1,6 @@
-import { defaultTemperatureK, type AtlasEntry } from "../atlas/index.ts";
-import { fixed } from "../format/index.ts";
+import { bandOriginBound, defaultTemperatureK, type AtlasEntry } from "../atlas/index.ts";
+import { fixed, positionStatusWords, positionWithUncertainty, wavelengthSigmaUm } from "../format/index.ts";
+import type { Line } from "../core/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { speciesPagePath } from "../shared/sitePaths.ts";
 
@@ -13,6 +14,9 @@ export const nearInfraredLimitNm = 2500;
  * wavelength. Diatomic overtones and linear-molecule bands appear alike: the rows come from the
  * atlas entries, whatever kind of molecule made them.
  */
+/** A line's vacuum wavelength in nm, rounded to its ±. */
+const lineNm = (l: Line) => positionWithUncertainty(l.wavelengthVacuumUm * 1000, wavelengthSigmaUm(l.wavenumber, l.wavenumberUncertainty) * 1000).value;
+
 /** The rows of some molecules' entries, unsorted (a build adds them batch by batch). */
 export function nearInfraredRowsOf(molecules: Molecule[], entries: AtlasEntry[]) {
   const byId = new Map(molecules.map((m) => [m.id, m]));
@@ -27,6 +31,11 @@ export function nearInfraredRowsOf(molecules: Molecule[], entries: AtlasEntry[])
       const shortestNm = 1e7 / lines.at(-1)!.wavenumber;
       const longestNm = 1e7 / lines[0].wavenumber;
       const originNm = 1e7 / band.lines.bandOrigin;
+      // The origin with its ± (bandOriginBound) and the same ± in nm, each rounded to it.
+      const bound = bandOriginBound(band.lines);
+      const sigmaCm = bound.uncertainty;
+      const cm = sigmaCm === null ? null : positionWithUncertainty(band.lines.bandOrigin, sigmaCm);
+      const nm = sigmaCm === null ? null : positionWithUncertainty(originNm, wavelengthSigmaUm(band.lines.bandOrigin, sigmaCm) * 1000);
       rows.push({
         originNmValue: originNm,
         nearInfrared: shortestNm < nearInfraredLimitNm,
@@ -36,10 +45,11 @@ export function nearInfraredRowsOf(molecules: Molecule[], entries: AtlasEntry[])
         band: band.label,
         bandName: band.name,
         kind: band.kind,
-        originNm: fixed(originNm, 3),
-        originCm: fixed(band.lines.bandOrigin, 4),
-        shortestNm: fixed(shortestNm, 3),
-        longestNm: fixed(longestNm, 3),
+        originNm: nm ? `${nm.value} ± ${nm.sigma}` : fixed(originNm, 0),
+        originCm: cm ? `${cm.value} ± ${cm.sigma}` : fixed(band.lines.bandOrigin, 1),
+        originStatus: bound.status === null ? "—" : positionStatusWords[bound.status],
+        shortestNm: lineNm(lines.at(-1)!),
+        longestNm: lineNm(lines[0]),
         lineCount: lines.length,
         path: speciesPagePath(entry.moleculeId, entry.species, entry.temperatureK),
         anchor: `band-${band.label}`,

@@ -1,8 +1,8 @@
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, gasNameInSentence, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
-import { constantsOriginText, correctionModelWords, moleculeCaution, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
+import { bandOriginBoundNote, residualSignText, constantsOriginText, correctionModelWords, moleculeCaution, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
 import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
-import { apodizations, correctionModels, standardAtmospherePa } from "../core/index.ts";
+import { apodizations, contradictionRuleText, correctionModels, standardAtmospherePa } from "../core/index.ts";
 import { maxSpectrumFileBytes } from "../spectrumFile/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { describeBuild, type BuildIdentity } from "../shared/buildIdentity.ts";
@@ -264,7 +264,14 @@ export function siteData(input: SiteDataInput, batch: MoleculeBatch | null) {
     calibratePage: batch ? null : calibratePageView(input.molecules, input.bench),
     benchPages: molecules.filter((m) => input.bench?.has(m.id)).map((m) => benchPageView(m, input.bench!.get(m.id)!)),
     accuracy: batch ? [] : input.accuracy,
-    nearInfrared: { rows: batch ? [] : sortedNearInfraredRows(input.nearInfraredRows), limitNm: nearInfraredLimitNm, temperatureK: defaultTemperatureK },
+    accuracyRule: contradictionRuleText.replace(/^contradicted: /, ""),
+    residualSign: residualSignText,
+    nearInfrared: {
+      rows: batch ? [] : sortedNearInfraredRows(input.nearInfraredRows),
+      limitNm: nearInfraredLimitNm,
+      temperatureK: defaultTemperatureK,
+      originNote: `Positions are rounded to their ±; ${bandOriginBoundNote}`,
+    },
     temperatures: standardTemperaturesK.map((t) => ({ value: t, token: temperatureToken(t), isDefault: t === defaultTemperatureK })),
     find: { windowCm: defaultFindWindowCm, minRelative: defaultFindMinRelative, temperatureK: defaultTemperatureK },
     search: { nameIndex: input.nameIndexPath, lineIndexes: input.lineIndexPaths.map((x) => ({ token: temperatureToken(x.temperatureK), path: x.path })) },

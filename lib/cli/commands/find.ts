@@ -1,5 +1,15 @@
 import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, findNear } from "../../atlas/index.ts";
-import { emptyFindText, findColumns, fixed, findHeadText, findUnsourcedNote, textTable } from "../../format/index.ts";
+import {
+  emptyFindText,
+  findColumns,
+  findGroups,
+  findPositionsNote,
+  findUnknownStrengthHeading,
+  fixed,
+  findHeadText,
+  roundedToUncertainty,
+  textTable,
+} from "../../format/index.ts";
 import { parseSpectralPosition, positionToWavenumber, unitLabels, windowToWavenumber, type PositionUnit } from "../../core/index.ts";
 import { loadMoleculesOrThrow } from "../../molecules/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
@@ -79,6 +89,7 @@ export function runFind(args: string[]): string {
   const format = formatOption(values.format as string | undefined, ["table", "json"]);
   const molecules = loadMoleculesOrThrow(moleculesDir(values.molecules as string | undefined));
   const { matches, whenNone } = findNear(molecules, wavenumber, windowCm, temperatureK, minRelative);
+  const groups = findGroups(matches);
   // "find 4.66" meant 4.66 µm: asked only of a bare number (no unit written, no --unit) that found nothing.
   const bare = unitText === undefined && /^[\d.,eE+\s]+$/.test(positionals.join(" "));
   const asMicrons = bare && !matches.length && position.value < micronGuessBelow ? micronReading(positionals.join("").trim(), position.value) : null;
@@ -91,7 +102,16 @@ export function runFind(args: string[]): string {
         {
           query: { wavenumber, window: windowCm, temperatureK, minRelative, position: position.value, unit: position.unit, medium: position.medium },
           // bandToGas is the index's packing of gasRelativeIntensity, not a quantity of its own.
-          matches: matches.map(({ bandToGas: _factor, ...m }) => m),
+          // Lines of known strength first, then those whose strength is unknown (findGroups);
+          // positions and offsets rounded to each line's ± as printed.
+          matches: [...groups.known, ...groups.unknown].map(({ bandToGas: _factor, ...m }) => ({
+            ...m,
+            wavenumber: roundedToUncertainty(m.wavenumber, m.wavenumberUncertainty),
+            wavenumberUncertainty: roundedToUncertainty(m.wavenumberUncertainty, m.wavenumberUncertainty),
+            offset: roundedToUncertainty(m.offset, m.wavenumberUncertainty),
+            strengthKnown: m.gasRelativeIntensity !== null,
+          })),
+          positions: findPositionsNote,
           ...(whenNone ? { whenNone: { ...whenNone, didYouMean: asMicrons ? { ...asMicrons, question: micronQuestion } : null } } : {}),
         },
         null,
@@ -102,11 +122,13 @@ export function runFind(args: string[]): string {
   const given = position.unit === "cm-1" ? "" : ` (${position.value} ${unitLabels[position.unit]}, ${position.medium})`;
   const head = findHeadText({ windowCm, wavenumber, given, temperatureK, minRelative, count: matches.length }) + "\n";
   if (whenNone) return head + [...(micronQuestion ? [micronQuestion] : []), ...emptyFindText(whenNone, wavenumber)].join("\n") + "\n";
-  const table = textTable(
-    findColumns.map((c) => c.heading),
-    matches.map((m) => findColumns.map((c) => c.cell(m))),
-    findColumns.map((c) => c.numeric),
-  );
-  const note = findUnsourcedNote(matches);
-  return head + "\n" + table + "\n" + (note ? note + "\n" : "");
+  const table = (list: typeof matches) =>
+    textTable(
+      findColumns.map((c) => c.heading),
+      list.map((m) => findColumns.map((c) => c.cell(m))),
+      findColumns.map((c) => c.numeric),
+    );
+  const known = groups.known.length ? table(groups.known) + "\n" : "";
+  const unknown = groups.unknown.length ? `\n${findUnknownStrengthHeading}\n\n${table(groups.unknown)}\n` : "";
+  return head + "\n" + known + unknown + findPositionsNote + "\n";
 }

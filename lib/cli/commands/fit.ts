@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { isMap, parseDocument } from "yaml";
 import { dunhamTermName, termSupport } from "../../core/index.ts";
-import { fitReportLines, fitReportText, termSupportRule, type FitReport } from "../../format/index.ts";
+import { fitReportLines, fitReportText, residualSignText, termSupportRule, type FitReport } from "../../format/index.ts";
 import {
   fitDecimals,
   MoleculeFileError,
@@ -59,6 +59,7 @@ export function dunhamFitReport(file: DiatomicMoleculeFile, fileName: string, fi
     heldOutRmsCm: heldOut.length ? Math.sqrt(heldOut.reduce((s, r) => s + r.residualCm ** 2, 0) / heldOut.length) : null,
     nextTerms: support.next.map((t) => ({ name: dunhamTermName(t.term), significance: t.significance, supported: t.supported })),
     rule: termSupportRule,
+    residualSign: residualSignText,
   };
 }
 
@@ -83,6 +84,7 @@ export function linearFitReport(file: LinearMoleculeFile, fileName: string, fit:
     heldOutRmsCm: heldOut.length ? Math.sqrt(heldOut.reduce((sum, r) => sum + r.residualCm ** 2, 0) / heldOut.length) : null,
     nextTerms: [],
     rule: termSupportRule,
+    residualSign: residualSignText,
   };
 }
 
