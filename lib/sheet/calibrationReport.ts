@@ -1,4 +1,3 @@
-import { createRequire } from "node:module";
 import { drawCalibrationBudget } from "./calibrationBudgetTable.ts";
 import {
   applyCorrectionSentence,
@@ -16,32 +15,22 @@ import {
   verdictRule,
   type CalibrationRun,
 } from "../format/index.ts";
-import { describeBuild } from "../shared/buildIdentity.ts";
 import { drawCalibrationLineTable } from "./calibrationLineTable.ts";
-import { CalibrationPageFlow } from "./calibrationPageFlow.ts";
 import {
   drawCorrectionBox,
   drawFacts,
   drawParagraph,
   drawReportCaution,
-  drawReportFooter,
   drawReportHeader,
-  drawReportReminder,
   drawReviewLines,
   drawSectionHeading,
   drawVerdictBox,
-  reportFooterHeightPt,
-  reportMonoFont,
-  reportMonoFontFile,
 } from "./calibrationReportParts.ts";
 import { drawResidualPlot, residualPlotHeight } from "./calibrationResidualPlot.ts";
 import { displayText } from "./displayText.ts";
-import { paperSizes, type PaperName } from "./paper.ts";
+import type { PaperName } from "./paper.ts";
 import type { SheetBuildIdentity } from "./sheetInput.ts";
-import { newPdfDocument, pdfBytes } from "./pdfDocument.ts";
-import { marginPt } from "./sheetStyle.ts";
-
-const require = createRequire(import.meta.url);
+import { renderReport, type ReportPages } from "./reportDocument.ts";
 
 export interface CalibrationReportRequest {
   run: CalibrationRun;
@@ -49,25 +38,7 @@ export interface CalibrationReportRequest {
   paper?: PaperName;
 }
 
-function newDocument(run: CalibrationRun, build: SheetBuildIdentity, paper: PaperName): PDFKit.PDFDocument {
-  const doc = newPdfDocument(paper, build, {
-    title: `Wavenumber calibration report: ${displayText(run.fileName)}`,
-    subject: `Wavenumber scale of a spectrum checked against predicted lines of ${run.gasName}; not a certificate`,
-  });
-  doc.registerFont(reportMonoFont, require.resolve(reportMonoFontFile));
-  return doc;
-}
-
-function lay(doc: PDFKit.PDFDocument, run: CalibrationRun, build: SheetBuildIdentity, paper: PaperName): void {
-  const { widthPt, heightPt } = paperSizes[paper];
-  const x = marginPt;
-  const width = widthPt - 2 * marginPt;
-  const top = marginPt * 0.75;
-  const pageBottom = heightPt - marginPt * 0.75;
-  const buildText = describeBuild(build);
-  const flow = new CalibrationPageFlow(doc, x, width, top, pageBottom - reportFooterHeightPt - 4, drawReportReminder);
-
-  doc.addPage();
+function lay({ doc, flow, x, width, top, buildText }: ReportPages, run: CalibrationRun, build: SheetBuildIdentity): void {
   flow.y = drawReportHeader(doc, buildText, `${displayText(run.fileName)} against ${run.gasName}`, x, top, width);
   flow.y = drawReportCaution(doc, run.caution, x, flow.y, width);
 
@@ -107,17 +78,19 @@ function lay(doc: PDFKit.PDFDocument, run: CalibrationRun, build: SheetBuildIden
   drawParagraph(flow, `Made by ${buildText} (commit ${build.commit}).`);
   drawParagraph(flow, `Predicted lines from the molecule file of ${run.gasName}, which cites:`);
   for (const source of run.sources) drawParagraph(flow, `• ${source}`, 8);
-
-  const range = doc.bufferedPageRange();
-  for (let i = 0; i < range.count; i++) {
-    doc.switchToPage(range.start + i);
-    drawReportFooter(doc, `${buildText} · calibration of ${run.fileName} · predicted, not certified`, x, pageBottom, width, i + 1, range.count);
-  }
 }
 
 /** The PDF calibration report of one run, as bytes (A4 unless asked for letter). */
 export async function renderCalibrationReport(request: CalibrationReportRequest): Promise<Uint8Array> {
-  const paper = request.paper ?? "a4";
-  const doc = newDocument(request.run, request.build, paper);
-  return new Uint8Array(await pdfBytes(doc, () => lay(doc, request.run, request.build, paper)));
+  const { run, build } = request;
+  return renderReport(
+    request.paper ?? "a4",
+    build,
+    {
+      title: `Wavenumber calibration report: ${displayText(run.fileName)}`,
+      subject: `Wavenumber scale of a spectrum checked against predicted lines of ${run.gasName}; not a certificate`,
+    },
+    `calibration of ${run.fileName} · predicted, not certified`,
+    (pages) => lay(pages, run, build),
+  );
 }

@@ -1,4 +1,3 @@
-import { createRequire } from "node:module";
 import {
   allGasesCaution,
   predictionNotice,
@@ -10,26 +9,13 @@ import {
   type LogLineProblem,
   type ParsedLog,
 } from "../format/index.ts";
-import { describeBuild } from "../shared/buildIdentity.ts";
-import { CalibrationPageFlow } from "./calibrationPageFlow.ts";
-import {
-  drawParagraph,
-  drawReportCaution,
-  drawReportFooter,
-  drawReportReminder,
-  drawSectionHeading,
-  reportFooterHeightPt,
-  reportMonoFont,
-  reportMonoFontFile,
-} from "./calibrationReportParts.ts";
+import { drawParagraph, drawReportCaution, drawSectionHeading, reportMonoFont } from "./calibrationReportParts.ts";
 import { drawChartScene } from "./drawChartScene.ts";
 import { displayText } from "./displayText.ts";
-import { paperSizes, type PaperName } from "./paper.ts";
-import { newPdfDocument, pdfBytes } from "./pdfDocument.ts";
+import type { PaperName } from "./paper.ts";
+import { renderReport } from "./reportDocument.ts";
 import type { SheetBuildIdentity } from "./sheetInput.ts";
-import { ink, marginPt, sheetFonts } from "./sheetStyle.ts";
-
-const require = createRequire(import.meta.url);
+import { ink, sheetFonts } from "./sheetStyle.ts";
 
 export interface HistoryReportRequest {
   log: ParsedLog;
@@ -41,29 +27,18 @@ export interface HistoryReportRequest {
   paper?: PaperName;
 }
 
-function problemLine(p: LogLineProblem): string {
-  return `line ${p.line}: ${p.message}`;
-}
-
 /** The history of a calibration log as a PDF: the chart of each instrument, the rule, every run, every line not read. */
-export async function renderHistoryReport(request: HistoryReportRequest): Promise<Uint8Array> {
+export function renderHistoryReport(request: HistoryReportRequest): Promise<Uint8Array> {
   const { log, build } = request;
-  const paper = request.paper ?? "a4";
-  const doc = newPdfDocument(paper, build, {
-    title: `Calibration history: ${displayText(request.fileName)}`,
-    subject: "Wavenumber-scale corrections of instruments over time, from a bandatlas calibration log; not a certificate",
-  });
-  doc.registerFont(reportMonoFont, require.resolve(reportMonoFontFile));
-  return new Uint8Array(
-    await pdfBytes(doc, () => {
-      const { widthPt, heightPt } = paperSizes[paper];
-      const x = marginPt;
-      const width = widthPt - 2 * marginPt;
-      const top = marginPt * 0.75;
-      const pageBottom = heightPt - marginPt * 0.75;
-      const buildText = describeBuild(build);
-      const flow = new CalibrationPageFlow(doc, x, width, top, pageBottom - reportFooterHeightPt - 4, drawReportReminder);
-      doc.addPage();
+  return renderReport(
+    request.paper ?? "a4",
+    build,
+    {
+      title: `Calibration history: ${displayText(request.fileName)}`,
+      subject: "Wavenumber-scale corrections of instruments over time, from a bandatlas calibration log; not a certificate",
+    },
+    `history of ${request.fileName} · predicted references, not certified`,
+    ({ doc, flow, x, width, top }) => {
       // The log may hold runs of any gas: the caution for all of them, in full, on page 1.
       flow.y = drawReportCaution(doc, `${allGasesCaution} ${predictionNotice}`, x, top, width);
       doc.font(sheetFonts.bold).fontSize(17).fillColor(ink).text("Calibration history", x, flow.y, { width, lineBreak: false });
@@ -75,13 +50,12 @@ export async function renderHistoryReport(request: HistoryReportRequest): Promis
       );
       if (log.problems.length > 0) {
         drawSectionHeading(flow, "Lines not read", 20);
-        for (const p of log.problems) drawParagraph(flow, `• ${problemLine(p)}`, 8.5, 1);
+        for (const p of log.problems) drawParagraph(flow, `• line ${p.line}: ${p.message}`, 8.5, 1);
         flow.y += 6;
       }
       for (const instrument of request.instruments) {
         const scene = historyChartScene(historySeries(log, instrument));
-        const height = (scene.height * width) / scene.width;
-        flow.ensure(height + 8);
+        flow.ensure((scene.height * width) / scene.width + 8);
         flow.y += drawChartScene(doc, scene, x, flow.y, width) + 8;
       }
       drawParagraph(flow, trendRule, 8);
@@ -92,18 +66,13 @@ export async function renderHistoryReport(request: HistoryReportRequest): Promis
       const rows = table.rows.map((row) => row.map(displayText));
       const lines = textTable(table.headings, rows, table.rightAligned).split("\n");
       const longest = Math.max(...lines.map((l) => l.length));
-      // Monospace, sized so the widest row fits the page.
+      // Monospace, sized so the widest row fits the page (a DejaVu Sans Mono glyph is 0.602 em wide).
       const size = Math.min(7.5, width / (longest * 0.602));
       for (const line of lines) {
         flow.ensure(size * 1.3);
         doc.font(reportMonoFont).fontSize(size).fillColor(ink).text(line, x, flow.y, { lineBreak: false });
         flow.y += size * 1.3;
       }
-      const range = doc.bufferedPageRange();
-      for (let i = 0; i < range.count; i++) {
-        doc.switchToPage(range.start + i);
-        drawReportFooter(doc, `${buildText} · history of ${request.fileName} · predicted references, not certified`, x, pageBottom, width, i + 1, range.count);
-      }
-    }),
+    },
   );
 }
