@@ -6,6 +6,8 @@
 import { calibrateMeasuredSpectrum, type CellModel } from "../atlas/index.ts";
 import { CoreInputError } from "../core/index.ts";
 import type { CalibrationRun } from "../format/spectrumCalibrationText.ts";
+import { noRecordFields } from "../format/calibrationRecord.ts";
+import type { CellConditions } from "../core/index.ts";
 import { readSpectrumText, SpectrumFileError, type MeasuredSpectrum } from "../spectrumFile/index.ts";
 import { loadSpectrumFile, type LoadedFile } from "./calibrateFile.ts";
 import { drawResidualPlot } from "./calibrateResidualPlot.ts";
@@ -44,6 +46,17 @@ function setup(page: HTMLElement) {
   /** The last file read with the last x/y choices: recalculating with another cell or model does not read it again. */
   let spectrum: { key: string; spectrum: MeasuredSpectrum } | null = null;
   let runs = 0;
+  /** The cell fields the visitor changed; the others keep their defaults and are marked "assumed", as on the command line. */
+  const given = new Set<keyof CellConditions>();
+  const conditionOfField: Record<string, keyof CellConditions> = {
+    temperatureK: "temperatureK",
+    pressure: "pressurePa",
+    pressureUnit: "pressurePa",
+    path: "pathCm",
+    pathUnit: "pathCm",
+    moleFraction: "moleFraction",
+  };
+  const allConditions: Array<keyof CellConditions> = ["pathCm", "temperatureK", "pressurePa", "moleFraction"];
 
   const modelOf = (gas: GasInfo) => {
     let model = models.get(gas.id);
@@ -106,6 +119,7 @@ function setup(page: HTMLElement) {
         calibration,
         caution: gas.caution,
         sources: gas.sources,
+        record: { ...noRecordFields, assumedConditions: allConditions.filter((c) => !given.has(c)) },
       };
       showCalibrationRun(calibrationRun);
       result.hidden = false;
@@ -149,6 +163,10 @@ function setup(page: HTMLElement) {
   };
 
   fileInput.addEventListener("change", () => void take(fileInput.files?.[0]));
+  form.addEventListener("input", (event) => {
+    const name = (event.target as HTMLInputElement | null)?.name;
+    if (name && name in conditionOfField) given.add(conditionOfField[name]);
+  });
   form.addEventListener("change", (event) => {
     if (event.target !== fileInput) void calibrate();
   });
