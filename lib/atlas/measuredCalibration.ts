@@ -6,7 +6,6 @@ import {
   cellSpectrum,
   defaultReferenceCriteria,
   defaultSpectrumCalibrationRules,
-  fourierFwhmPerResolution,
   observedSignal,
   correctedWavenumber,
   bandLabel,
@@ -14,7 +13,6 @@ import {
   independentShares,
   type AbsorbingLine,
   type ErrorShare,
-  type AbsorptionPeak,
   type Apodization,
   type CellConditions,
   type CellSpectrum,
@@ -24,6 +22,7 @@ import {
   type SpectrumCalibrationRules,
 } from "../core/index.ts";
 import { cellLinesOfModel, type CellLineSet, type CellModel } from "./cellSpectrum.ts";
+import { invertedSpectrumReason, resolutionOf, saturatedFraction } from "./measuredSpectrumChecks.ts";
 
 /** A measured spectrum as the calibration needs it: ascending wavenumbers, decadic absorbance. */
 export interface MeasuredAbsorbance {
@@ -66,48 +65,6 @@ export interface MeasuredCalibration {
   referenceCriteria: ReferenceCriteria;
 }
 
-/** Peaks whose widths show the instrument: strong, not saturated, both sides free. */
-const widthSignalToNoise = 20;
-/** … and optically thin enough that absorption does not widen them (height ≤ half the saturation level). */
-const widthHeightFraction = 0.5;
-
-/**
- * The resolution from the measured widths: the median FWHM of the clean strong peaks divided
- * by the FWHM the instrument line shape has per unit resolution (fourierFwhmPerResolution).
- * Only peaks well below saturation count: strong absorption widens a line. The gases' own widths at cell pressures (Doppler ≈ 0.006 cm⁻¹ FWHM for HCl at 296 K) are
- * neglected against the instrument's.
- */
-export function estimateResolutionCm(peaks: readonly AbsorptionPeak[], apodization: Apodization, saturationAbsorbance: number): number | null {
-  const widths = peaks
-    .filter((p) => p.signalToNoise >= widthSignalToNoise && !p.flatTop && p.heightAbsorbance <= widthHeightFraction * saturationAbsorbance && p.fwhmCm !== null)
-    .map((p) => p.fwhmCm!)
-    .sort((a, b) => a - b);
-  if (widths.length < 3) return null;
-  return widths[widths.length >> 1] / fourierFwhmPerResolution(apodization);
-}
-
-function resolutionOf(
-  measured: MeasuredAbsorbance,
-  settings: MeasuredCalibrationSettings,
-  peaks: readonly AbsorptionPeak[],
-  rules: SpectrumCalibrationRules,
-): { resolutionCm: number; from: ResolutionOrigin; note: string } {
-  if (settings.resolutionCm !== undefined)
-    return { resolutionCm: settings.resolutionCm, from: "option", note: `resolution ${settings.resolutionCm} cm⁻¹ as given` };
-  if (measured.resolutionCm !== null)
-    return { resolutionCm: measured.resolutionCm, from: "file", note: `resolution ${measured.resolutionCm} cm⁻¹ as the file states` };
-  const estimate = estimateResolutionCm(peaks, settings.apodization, rules.saturationAbsorbance);
-  if (estimate === null) {
-    throw new CalibrationRefused("the file does not state its resolution and too few clean strong peaks show it: give the resolution (--resolution)");
-  }
-  const rounded = Number(estimate.toPrecision(2));
-  return {
-    resolutionCm: rounded,
-    from: "estimated",
-    note: `resolution ${rounded} cm⁻¹ estimated from the median width of the strong peaks, assuming ${settings.apodization} apodization`,
-  };
-}
-
 /**
  * The predicted spectrum is most of the work; the same gas, conditions, instrument and range give
  * the same one, so the last is kept per cell model (a page recalibrating with another model, a
@@ -124,19 +81,6 @@ const gasName = (cell: CellModel) => gasNameInSentence(cell.moleculeName);
 
 /** The coarsest resolution a calibration accepts: beyond 16 cm⁻¹ no rotational line is resolved. */
 export const maxCalibrationResolutionCm = 16;
-
-/** Fraction of the points in [fromCm, toCm] more than `level` above the baseline (the 5th percentile there). */
-function saturatedFraction(measured: MeasuredAbsorbance, fromCm: number, toCm: number, level: number): number {
-  const values: number[] = [];
-  for (let i = 0; i < measured.wavenumberCm.length; i++) {
-    const x = measured.wavenumberCm[i];
-    if (x >= fromCm && x <= toCm) values.push(measured.absorbance[i]);
-  }
-  if (!values.length) return 0;
-  const sorted = [...values].sort((a, b) => a - b);
-  const baseline = sorted[Math.floor(0.05 * (sorted.length - 1))];
-  return values.filter((v) => v - baseline > level).length / values.length;
-}
 
 /**
  * Each reference line's error, source by source: its position's shares from its band model (the
@@ -155,29 +99,6 @@ function shareFinder(cell: CellModel, pressureShiftUncertaintyCm: number): (line
   };
 }
 
-/**
- * A spectrum whose lines point the wrong way once converted to absorbance (a transmittance read as
- * absorbance, or the reverse): in [fromCm, toCm] the values reach much further below their median
- * than above it, or most of them are negative. Null when it looks like absorbance; else why not.
- */
-export function invertedSpectrumReason(measured: MeasuredAbsorbance, fromCm: number, toCm: number): string | null {
-  const values: number[] = [];
-  for (let i = 0; i < measured.wavenumberCm.length; i++) {
-    const x = measured.wavenumberCm[i];
-    if (x >= fromCm && x <= toCm) values.push(measured.absorbance[i]);
-  }
-  if (values.length < 16) return null;
-  const sorted = values.sort((a, b) => a - b);
-  const at = (q: number) => sorted[Math.round(q * (sorted.length - 1))];
-  const median = at(0.5);
-  const down = median - at(0.005);
-  const up = at(0.995) - median;
-  const negative = sorted.filter((v) => v < -0.05).length / sorted.length;
-  if (negative > 0.5) return `${(100 * negative).toFixed(0)} % of its absorbance values are below −0.05`;
-  if (down > 2 * up && down > 0.02) return `its peaks point downward (down to ${down.toFixed(2)} below the median, up to only ${up.toFixed(2)} above)`;
-  return null;
-}
-
 /** Calibrate a measured spectrum of one gas against the atlas's predicted spectrum (pure: runs in the browser too). */
 export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbsorbance, settings: MeasuredCalibrationSettings): MeasuredCalibration {
   const rules = { ...(settings.rules ?? defaultSpectrumCalibrationRules), ...(settings.requireValidated ? { requireValidated: true } : {}) };
@@ -193,8 +114,22 @@ export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbs
   if (!inRange.length) {
     const lo = Math.min(...listed.map((l) => l.wavenumber));
     const hi = Math.max(...listed.map((l) => l.wavenumber));
+    // A rare species may have its lines there (D35Cl in an HCl cell at natural abundance, 1.5·10⁻⁴):
+    // an enriched cell of it is calibrated by selecting it, and the refusal says which and how.
+    const strongestOf = new Map<string, number>();
+    for (const l of set.lines) strongestOf.set(l.species, Math.max(strongestOf.get(l.species) ?? 0, l.intensity));
+    const there = [
+      ...new Set(
+        set.lines
+          .filter((l) => l.wavenumber >= measuredFrom && l.wavenumber <= measuredTo && l.intensity >= criteria.minRelativeStrength * strongestOf.get(l.species)!)
+          .map((l) => l.species),
+      ),
+    ];
+    const hint = there.length
+      ? `; the lines of ${there.join(" and ")} do lie there: for a cell enriched in ${there.length > 1 ? "them" : "it"}, select ${there.length > 1 ? "them" : "it"} (--species ${there.join(",")})`
+      : "";
     throw new CalibrationRefused(
-      `the spectrum covers ${measuredFrom.toFixed(1)}–${measuredTo.toFixed(1)} cm⁻¹, where ${gasName(cell)} has no lines (its lines lie at ${lo.toFixed(0)}–${hi.toFixed(0)} cm⁻¹)`,
+      `the spectrum covers ${measuredFrom.toFixed(1)}–${measuredTo.toFixed(1)} cm⁻¹, where ${gasName(cell)} has no lines at natural abundance (its lines lie at ${lo.toFixed(0)}–${hi.toFixed(0)} cm⁻¹)${hint}`,
     );
   }
   const inRangeFrom = Math.min(...inRange.map((l) => l.wavenumber));

@@ -1,8 +1,9 @@
 import type { AbsorptionPeak } from "./absorptionPeaks.ts";
 import type { CalibrationReference } from "./calibrationReferences.ts";
-import { CoreInputError } from "./coreInputError.ts";
 import { correctionBudget, type CorrectionBudget } from "./correctionBudget.ts";
-import { defaultScaleSearchBounds, hypothesisWavenumber, searchScale, type ScaleHypothesis, type ScaleSearchBounds } from "./scaleSearch.ts";
+import { sortReferenceLines, type CalibratedLine } from "./calibratedLines.ts";
+import { hypothesisWavenumber, searchScale, type ScaleHypothesis } from "./scaleSearch.ts";
+import { CalibrationRefused, defaultSpectrumCalibrationRules, type SpectrumCalibrationRules } from "./spectrumCalibrationRules.ts";
 import type { WavenumberCm } from "./types.ts";
 import {
   correctedWavenumber,
@@ -12,84 +13,6 @@ import {
   type CorrectionPoint,
   type WavenumberCorrection,
 } from "./wavenumberCorrection.ts";
-
-/** A calibration the data do not support: the message is one sentence for the user. */
-export class CalibrationRefused extends CoreInputError {
-  constructor(message: string) {
-    super(message);
-    this.name = "CalibrationRefused";
-  }
-}
-
-/** Our own thresholds (common practice, no source); every output states them. */
-export interface SpectrumCalibrationRules {
-  /** A peak this many times the noise or more counts as measured well enough to use. */
-  minSignalToNoise: number;
-  /**
-   * Saturated: a peak at least this high above its baseline (transmittance ≤ 10 % at the
-   * apparent peak), or a flat top. There the detector's nonlinearity and the unresolved line
-   * core distort the shape the position is read from.
-   */
-  saturationAbsorbance: number;
-  /**
-   * Blended by a strong neighbour: a measured peak within this many resolutions, at least twice
-   * as high and at least half the saturation level, widens in absorbance beyond what an optically
-   * thin prediction gives and pulls the line's apparent peak (seen in real HCl cells: the H³⁷Cl
-   * lines beside strong H³⁵Cl lines).
-   */
-  strongNeighbourResolutions: number;
-  /** At least this fraction of the strong references (≥ 10 % of the strongest) must find a peak. */
-  minMatchedFraction: number;
-  /** Refuse when a different assignment gathers at least this fraction of the best one's votes. */
-  ambiguityRatio: number;
-  /**
-   * No peak position is taken as more precise than this fraction of the resolution: what a peak
-   * fit cannot see (line-shape asymmetry, residual phase error, baseline, unresolved neighbours)
-   * leaves each line's position uncertain by about a hundredth of R on good FTIR spectra (our own
-   * floor, common practice, no source; its coverage is tested on distorted synthetic spectra).
-   */
-  peakFloorFraction: number;
-  /** Refuse a model two of whose fitted terms correlate beyond this (our own rule, common practice, no source). */
-  maxTermCorrelation: number;
-  /**
-   * Refuse a best assignment within this fraction of the search's edge: the instrument's error
-   * may lie beyond what was searched, and a vote cut off at the edge is not a maximum.
-   */
-  edgeFraction: number;
-  /** Use only references validated against measured lines (a traceable correction or none). */
-  requireValidated: boolean;
-  bounds: ScaleSearchBounds;
-}
-
-export const defaultSpectrumCalibrationRules: SpectrumCalibrationRules = {
-  minSignalToNoise: 10,
-  saturationAbsorbance: 1,
-  strongNeighbourResolutions: 3,
-  minMatchedFraction: 0.5,
-  ambiguityRatio: 0.8,
-  peakFloorFraction: 0.01,
-  maxTermCorrelation: 0.99,
-  edgeFraction: 0.98,
-  requireValidated: false,
-  bounds: defaultScaleSearchBounds,
-};
-
-export type RejectionReason = "weak" | "saturated" | "blended" | "uncertain-reference" | "residual";
-
-export interface CalibratedLine {
-  reference: CalibrationReference;
-  peak: AbsorptionPeak | null;
-  /** reference − corrected measured position, cm⁻¹ (null without a peak). */
-  residualCm: WavenumberCm | null;
-  /** Measured (with its floor) and reference ± in quadrature, cm⁻¹ (null without a peak). */
-  sigmaCm: WavenumberCm | null;
-  /** The peak's ± raised to the per-line floor, cm⁻¹ (null without a peak). */
-  measurementSigmaCm: WavenumberCm | null;
-  used: boolean;
-  reason: RejectionReason | null;
-  /** Why, in words, for an unused line. */
-  detail: string | null;
-}
 
 export interface SpectrumCalibrationResult {
   gasName: string;
@@ -117,17 +40,6 @@ export interface SpectrumCalibrationResult {
 }
 
 const fmt = (x: number, digits: number) => x.toFixed(digits);
-
-function strongNeighbour(peaks: readonly AbsorptionPeak[], own: AbsorptionPeak, resolutionCm: number, rules: SpectrumCalibrationRules): AbsorptionPeak | null {
-  let found: AbsorptionPeak | null = null;
-  for (const p of peaks) {
-    if (p === own || Math.abs(p.wavenumberCm - own.wavenumberCm) > rules.strongNeighbourResolutions * resolutionCm) continue;
-    if (p.heightAbsorbance >= 2 * own.heightAbsorbance && p.heightAbsorbance >= 0.5 * rules.saturationAbsorbance) {
-      if (!found || p.heightAbsorbance > found.heightAbsorbance) found = p;
-    }
-  }
-  return found;
-}
 
 /**
  * Calibrate a measured spectrum's wavenumber scale against predicted references: assign peaks
@@ -199,48 +111,7 @@ export function calibrateSpectrum(
     );
   }
 
-  const lines: CalibratedLine[] = references.map((reference) => {
-    const index = peakOf.get(reference);
-    const peak = index === undefined ? null : peaks[index];
-    const measurementSigma = peak ? Math.max(peak.wavenumberUncertaintyCm, rules.peakFloorFraction * resolutionCm) : null;
-    const sigma = measurementSigma === null ? null : Math.hypot(measurementSigma, reference.referenceUncertaintyCm);
-    const reject = (reason: RejectionReason, detail: string): CalibratedLine => ({
-      reference,
-      peak,
-      residualCm: null,
-      sigmaCm: sigma,
-      measurementSigmaCm: measurementSigma,
-      used: false,
-      reason,
-      detail,
-    });
-    if (!peak) return reject("weak", "no peak found there");
-    if (peak.flatTop || peak.heightAbsorbance >= rules.saturationAbsorbance) {
-      return reject("saturated", peak.flatTop ? "flat-topped peak" : `peak absorbance ${fmt(peak.heightAbsorbance, 2)} ≥ ${rules.saturationAbsorbance}`);
-    }
-    if (reference.blended || reference.referenceCm === null) {
-      return reject(
-        "blended",
-        reference.referenceCm === null ? "no peak of its own at this resolution" : `a line within ${fmt(reference.nearestNeighbourCm!, 3)} cm⁻¹ (≤ resolution)`,
-      );
-    }
-    const pulling = strongNeighbour(peaks, peak, resolutionCm, rules);
-    if (pulling) {
-      return reject(
-        "blended",
-        `beside a strong peak at ${fmt(pulling.wavenumberCm, 2)} cm⁻¹ (absorbance ${fmt(pulling.heightAbsorbance, 2)}) whose wing the prediction cannot give`,
-      );
-    }
-    if (!reference.precise) return reject("uncertain-reference", `reference ± ${reference.referenceUncertaintyCm.toPrecision(2)} cm⁻¹ > resolution/4`);
-    if (rules.requireValidated && reference.positionStatus !== "validated") {
-      return reject(
-        "uncertain-reference",
-        `position ${reference.positionStatus === "extrapolated" ? "extrapolated beyond" : "not validated against"} measured lines, and validated references were required`,
-      );
-    }
-    if (peak.signalToNoise < rules.minSignalToNoise) return reject("weak", `signal-to-noise ${fmt(peak.signalToNoise, 1)} < ${rules.minSignalToNoise}`);
-    return { reference, peak, residualCm: null, sigmaCm: sigma, measurementSigmaCm: measurementSigma, used: true, reason: null, detail: null };
-  });
+  const lines = sortReferenceLines(references, peaks, peakOf, resolutionCm, rules);
 
   const candidates = lines.filter((l) => l.used);
   const needed = minimumLines[model];
