@@ -41,6 +41,8 @@ export interface AtlasEntry {
    * cell model does). Natural abundance and the partition function are in both.
    */
   principalStrength: number;
+  /** A reference-cell gas of its own: find judges it against its own bands, not the natural gas. */
+  ownCells: boolean;
 }
 
 /**
@@ -80,6 +82,7 @@ export function atlasEntry(molecule: Molecule, species: SpeciesInfo, temperature
     partitionFunction: q,
     bands,
     residuals: lineResiduals(species.model),
+    ownCells: species.model.ownCells === true,
     principalStrength: fundamental.strongestLineIntensity ?? fundamental.strongestLinePerDebyeSquared * unitDipoleSquared(molecule, species, computed[0].band),
   };
 }

@@ -15,7 +15,10 @@ export function atlasLines(molecules: Molecule[], temperatureK: number, minRelat
  */
 export function gasStrengthFactors(entries: AtlasEntry[]): Map<AtlasEntry, Array<number | null>> {
   const strongestOf = new Map<string, number>();
+  // A species in cells of its own is judged against its own bands only (no natural mixture holds it).
+  const tied = (e: AtlasEntry) => !e.ownCells;
   for (const e of entries) {
+    if (!tied(e)) continue;
     for (const b of e.bands) {
       if (b.strengthRelativeToFundamental === null) continue;
       const s = e.principalStrength * b.strengthRelativeToFundamental;
@@ -28,7 +31,7 @@ export function gasStrengthFactors(entries: AtlasEntry[]): Map<AtlasEntry, Array
     out.set(
       e,
       e.bands.map((b) =>
-        b.strengthRelativeToFundamental === null || !(strongest > 0) ? null : (e.principalStrength * b.strengthRelativeToFundamental) / strongest,
+        b.strengthRelativeToFundamental === null || !(strongest > 0) || !tied(e) ? null : (e.principalStrength * b.strengthRelativeToFundamental) / strongest,
       ),
     );
   }

@@ -21,6 +21,8 @@ export function bandOriginBound(band: BandLines): BandOriginBound {
   const below = band.lines.filter((l) => l.wavenumber < origin).at(-1);
   const above = band.lines.find((l) => l.wavenumber > origin);
   if (!below || !above) return { wavenumber: origin, uncertainty: null, status: null };
-  const status = weakestFirst.find((s) => s === below.positionStatus || s === above.positionStatus)!;
-  return { wavenumber: origin, uncertainty: Math.max(below.wavenumberUncertainty, above.wavenumberUncertainty), status };
+  // The origin is the model's: a certified neighbour bounds it by the model's own ± and status there.
+  const [b, a] = [below.model ?? below, above.model ?? above];
+  const status = weakestFirst.find((s) => s === b.positionStatus || s === a.positionStatus)!;
+  return { wavenumber: origin, uncertainty: Math.max(b.wavenumberUncertainty, a.wavenumberUncertainty), status };
 }

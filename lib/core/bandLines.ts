@@ -1,6 +1,7 @@
 import { bandLabel, sameBand, vibrationalBand } from "./band.ts";
 import { bandAccuracy } from "./bandAccuracy.ts";
 import { bandLinesFromModel, type BandModel, type PositionUncertainty } from "./bandModel.ts";
+import { certifiedPositions } from "./certifiedPositions.ts";
 import { componentsFromUncertainties } from "./positionErrors.ts";
 import { cachedBandErrors, cachedUncertaintyFunction } from "./positionUncertainty.ts";
 import { CoreInputError } from "./coreInputError.ts";
@@ -68,6 +69,7 @@ export function diatomicBandModel(species: DiatomicSpeciesModel, band: Vibration
     partitionFunction: options.partitionFunction ?? computePartitionFunction(species.dunham, options.temperatureK),
     // Nuclear-spin degeneracy of a heteronuclear diatomic is the same for every level and cancels.
     lowerWeight: () => 1,
+    certified: certifiedPositions(species, band),
     intensity: bandIntensityDataFor(species.intensities, band),
     abundance: species.abundance,
   };

@@ -1,6 +1,7 @@
 import { airRefractiveIndexEdlen } from "./airWavelength.ts";
 import { cachedFloor, cachedUncertaintyFunction, type PositionUncertainty } from "./positionUncertainty.ts";
 import { checkTemperature } from "./band.ts";
+import type { CertifiedPositions } from "./certifiedPositions.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { hermanWallisFactor } from "./hermanWallis.ts";
 import { hoenlLondon, runningIndex } from "./hoenlLondon.ts";
@@ -33,6 +34,8 @@ export interface BandModel {
   lowerWeight: (jLower: number) => number;
   intensity: BandIntensityData | null;
   abundance: number;
+  /** Lines whose position and ± a cited standard certifies (by label): they replace the model's. */
+  certified: CertifiedPositions;
 }
 
 export interface ModelLineOptions {
@@ -76,7 +79,7 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
   const floorByAbsM = cachedFloor(accuracy);
   const uncertaintyOf = (xUpper: number, xLower: number, absM: number) => Math.max(propagated(xUpper, xLower), floorByAbsM[absM]);
   const check = accuracy.check;
-  const statusOf = (branch: Branch, jLower: number): Line["positionStatus"] => {
+  const statusOf = (branch: Branch, jLower: number): Exclude<Line["positionStatus"], "certified"> => {
     if (accuracy.status !== "validated" && accuracy.status !== "contradicted") return accuracy.status;
     const absM = Math.abs(runningIndex(branch, jLower));
     return absM >= check!.absMMin && absM <= check!.absMMax ? accuracy.status : "extrapolated";
@@ -157,18 +160,24 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
   for (const i of order) {
     const shape = shapes[i];
     if (shape < keepAbove || !(strongestShape > 0)) continue;
-    const wavenumber = wavenumbers[i];
+    const modelWavenumber = wavenumbers[i];
     const jLower = jLowers[i];
     const branch: Branch = isR[i] ? "R" : "P";
+    const label = isR[i] ? labelsR[jLower] : labelsP[jLower];
+    // A certified line keeps the model's intensity but takes the standard's position and ±.
+    const certified = model.certified.get(label);
+    const wavenumber = certified?.wavenumber ?? modelWavenumber;
+    const modelUncertainty = isR[i]
+      ? uncertaintyOf((jLower + 1) * (jLower + 2), jLower * (jLower + 1), jLower + 1)
+      : uncertaintyOf((jLower - 1) * jLower, jLower * (jLower + 1), jLower);
+    const modelStatus = statusOf(branch, jLower);
     lines.push({
-      label: isR[i] ? labelsR[jLower] : labelsP[jLower],
+      label,
       branch,
       jLower,
       jUpper: isR[i] ? jLower + 1 : jLower - 1,
       wavenumber,
-      wavenumberUncertainty: isR[i]
-        ? uncertaintyOf((jLower + 1) * (jLower + 2), jLower * (jLower + 1), jLower + 1)
-        : uncertaintyOf((jLower - 1) * jLower, jLower * (jLower + 1), jLower),
+      wavenumberUncertainty: certified ? certified.uncertaintyCm : modelUncertainty,
       wavelengthVacuumUm: 1e4 / wavenumber,
       wavelengthAirNm: 1e7 / wavenumber / airRefractiveIndexEdlen(wavenumber),
       frequencyThz: wavenumber * speedOfLightMs * 1e-10,
@@ -176,7 +185,8 @@ export function bandLinesFromModel(model: BandModel, options: ModelLineOptions):
       relativeIntensity: shape / strongestShape,
       lineIntensity: dipole === null ? null : toAbsolute * shape,
       populationFraction: populations[i],
-      positionStatus: statusOf(branch, jLower),
+      positionStatus: certified ? "certified" : modelStatus,
+      ...(certified ? { model: { wavenumber: modelWavenumber, wavenumberUncertainty: modelUncertainty, positionStatus: modelStatus } } : {}),
     });
   }
 

@@ -1,3 +1,4 @@
+import { measuredGrade } from "./certifiedPositions.ts";
 import type { AbsorptionPeak } from "./absorptionPeaks.ts";
 import type { CalibrationReference } from "./calibrationReferences.ts";
 import type { SpectrumCalibrationRules } from "./spectrumCalibrationRules.ts";
@@ -79,7 +80,7 @@ export function sortReferenceLines(
       );
     }
     if (!reference.precise) return reject("uncertain-reference", `reference ± ${reference.referenceUncertaintyCm.toPrecision(2)} cm⁻¹ > resolution/4`);
-    if (rules.requireValidated && reference.positionStatus !== "validated") {
+    if (rules.requireValidated && !measuredGrade(reference.positionStatus)) {
       return reject(
         "uncertain-reference",
         `position ${reference.positionStatus === "extrapolated" ? "extrapolated beyond" : "not validated against"} measured lines, and validated references were required`,

@@ -2,6 +2,7 @@ import type { AbsorbingLine } from "./absorbingLines.ts";
 import { observedSignal, type CellSpectrum } from "./cellTransmittance.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import type { WavenumberCm } from "./types.ts";
+import { measuredGrade } from "./certifiedPositions.ts";
 
 /** What makes a line calibration-grade at a resolution R. */
 export interface CalibrationCriteria {
@@ -127,7 +128,7 @@ export function calibrationCandidates(
     const line = sorted[i];
     if (line.wavenumber < fromCm || line.wavenumber > toCm) continue;
     if (line.intensity < criteria.strongFraction * strongest) continue;
-    if (line.positionStatus !== "validated" || line.wavenumberUncertainty > criteria.maxUncertaintyFraction * resolutionCm) continue;
+    if (!measuredGrade(line.positionStatus) || line.wavenumberUncertainty > criteria.maxUncertaintyFraction * resolutionCm) continue;
     const nearest = nearestNeighbourCm(sorted, i, criteria.neighbourFraction * line.intensity);
     if (nearest !== null && nearest <= criteria.isolationMultiple * resolutionCm) continue;
     out.push({ line, strongest, nearestNeighbourCm: nearest });

@@ -20,6 +20,7 @@ export type BudgetPart = "measurement" | ErrorShareKind;
 /** The parts in the order every output lists them. */
 export const budgetParts: readonly BudgetPart[] = [
   "measurement",
+  "certified",
   "constants",
   "omitted-term",
   "isotope-scaling",

@@ -3,10 +3,12 @@ import { bandLabel, vibrationalBand } from "./band.ts";
 import { linearBandModel } from "./linearBandModel.ts";
 import { cachedFloor } from "./positionUncertainty.ts";
 import type { BandModel } from "./bandModel.ts";
+import { certifiedShareSource } from "./certifiedPositions.ts";
 import type { Band, Branch, SpeciesModel, WavenumberCm } from "./types.ts";
 
 /** What kind of error source moves a line: the groups of a calibration's uncertainty budget. */
-export type ErrorShareKind = "constants" | "omitted-term" | "isotope-scaling" | "residual-floor" | "pressure-shift" | "line-shape";
+/** certified: a line a cited standard lists, whose error is its own measurement (shared with no other line). */
+export type ErrorShareKind = "certified" | "constants" | "omitted-term" | "isotope-scaling" | "residual-floor" | "pressure-shift" | "line-shape";
 
 /**
  * One error source's share of a line's position error: the shift (one standard deviation, with
@@ -33,7 +35,16 @@ function kindOf(id: string): ErrorShareKind {
  * by every line of the band: residuals of a model against measured lines vary smoothly with J, so
  * neighbouring lines miss together (our own conservative choice).
  */
-export function lineErrorSharesOfModel(model: Pick<BandModel, "uncertainty" | "accuracy" | "species" | "band">, branch: Branch, jLower: number): ErrorShare[] {
+export function lineErrorSharesOfModel(
+  model: Pick<BandModel, "uncertainty" | "accuracy" | "species" | "band"> & Partial<Pick<BandModel, "certified">>,
+  branch: Branch,
+  jLower: number,
+): ErrorShare[] {
+  // A certified line's position is the standard's measurement, not the model's: its error is that
+  // measurement's ± alone, independent of every other line (each line was measured on its own).
+  const label = `${branch}(${jLower})`;
+  const certified = model.certified?.get(label);
+  if (certified) return [{ source: certifiedShareSource(model.species, bandLabel(model.band), label), kind: "certified", shiftCm: certified.uncertaintyCm }];
   const jUpper = branch === "R" ? jLower + 1 : jLower - 1;
   const xUpper = jUpper * (jUpper + 1);
   const xLower = jLower * (jLower + 1);

@@ -1,6 +1,7 @@
 import { bandLabel, sameBand } from "./band.ts";
 import { bandAccuracy } from "./bandAccuracy.ts";
 import type { BandModel, PositionUncertainty } from "./bandModel.ts";
+import { certifiedPositions } from "./certifiedPositions.ts";
 import { cachedBandErrors, cachedUncertaintyFunction } from "./positionUncertainty.ts";
 import { CoreInputError } from "./coreInputError.ts";
 import { linearPartitionFunction } from "./linearPartitionFunction.ts";
@@ -83,5 +84,6 @@ export function linearBandModel(species: LinearSpeciesModel, band: Band, options
     lowerWeight: (j) => nuclearSpinWeight(linear.nuclearSpinWeights, lower.symmetry, j),
     intensity: species.intensities.find((d) => sameBand(d.band, entry.band)) ?? null,
     abundance: species.abundance,
+    certified: certifiedPositions(species, entry.band),
   };
 }

@@ -1,3 +1,4 @@
+import { measuredGrade } from "./certifiedPositions.ts";
 import type { AbsorptionPeak } from "./absorptionPeaks.ts";
 import type { CalibrationReference } from "./calibrationReferences.ts";
 import { correctionBudget, type CorrectionBudget } from "./correctionBudget.ts";
@@ -117,7 +118,7 @@ export function calibrateSpectrum(
   const needed = minimumLines[model];
   if (rules.requireValidated && candidates.length < needed) {
     const found = lines.filter((l) => l.peak).length;
-    const validated = lines.filter((l) => l.peak && l.reference.positionStatus === "validated").length;
+    const validated = lines.filter((l) => l.peak && measuredGrade(l.reference.positionStatus)).length;
     throw new CalibrationRefused(
       `validated references were required: ${validated} of the ${found} lines of ${gasName} found in ${span} ${validated === 1 ? "is" : "are"} validated against measured lines and usable, the ${model} model needs at least ${needed}`,
     );

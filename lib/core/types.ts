@@ -83,6 +83,12 @@ export interface ReferenceLine {
   sourceKey: string;
   /** Kept out of the fit of this molecule's constants and used only to test it. */
   heldOut: boolean;
+  /**
+   * Set when the file marks the line's source as a certified standard (`certifiedPositions`): the
+   * line is then the reference position of its band's line, with this ± (the source's, widened by
+   * what the source's cell pressure may move it); null for a line that only checks the model.
+   */
+  certifiedUncertainty: WavenumberCm | null;
 }
 
 /**
@@ -160,6 +166,8 @@ interface SpeciesModelBase {
   referenceLines: ReferenceLine[];
   /** Residual checks against measured lines; absent: not validated. */
   validation?: SpeciesValidation;
+  /** A reference-cell gas of its own (enriched): its strength is not tied to the natural gas's. */
+  ownCells?: boolean;
 }
 
 /** One isotopologue of a ¹Σ⁺ diatomic: masses resolved, constants as one Y_kl table. */
@@ -198,11 +206,14 @@ export interface Line {
   lineIntensity: LineIntensityCmPerMolecule | null;
   populationFraction: number;
   /**
-   * validated: inside the measured |m| range of a validated band; contradicted: inside the measured
+   * certified: the position and ± of a line a cited standard lists (the file marks its source
+   * `certifiedPositions`), not the model's; validated: inside the measured |m| range of a validated band; contradicted: inside the measured
    * range of a band its measured lines contradict; extrapolated: outside it, or a band without
    * measured lines of its own.
    */
-  positionStatus: "validated" | "contradicted" | "extrapolated" | "not-validated";
+  positionStatus: "certified" | "validated" | "contradicted" | "extrapolated" | "not-validated";
+  /** A certified line only: the model's own position, ± and status, the check of the standard's value. */
+  model?: { wavenumber: WavenumberCm; wavenumberUncertainty: WavenumberCm; positionStatus: Exclude<Line["positionStatus"], "certified"> };
 }
 
 export interface BandLines {

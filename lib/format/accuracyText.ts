@@ -6,6 +6,7 @@ import { positionWithUncertainty, signedSignificant, significant } from "./numbe
 // JSON, the species pages, the bench sheets and the method page.
 
 export const positionStatusWords: Record<Line["positionStatus"], string> = {
+  certified: "certified",
   validated: "validated",
   contradicted: "contradicted by measured lines",
   extrapolated: "extrapolated",

@@ -1,8 +1,9 @@
-import type { BudgetPart, SpectrumCalibrationResult } from "../core/index.ts";
+import { measuredGrade, type BudgetPart, type SpectrumCalibrationResult } from "../core/index.ts";
 
 /** What each part of a correction's uncertainty budget is, in the words every output uses. */
 export const budgetPartWords: Record<BudgetPart, string> = {
   measurement: "measurement (peak fit, per-line floor, observed scatter)",
+  certified: "reference: certified line positions (each line's own ±)",
   constants: "reference: constants (covariance, second set)",
   "omitted-term": "reference: Dunham terms the constants leave out",
   "isotope-scaling": "reference: isotope scaling",
@@ -58,7 +59,7 @@ export type ReferenceStanding = "validated" | "partly-validated" | "not-validate
 
 export function referenceStanding(result: SpectrumCalibrationResult): { standing: ReferenceStanding; unvalidated: number; used: number } {
   const used = result.lines.filter((l) => l.used);
-  const unvalidated = used.filter((l) => l.reference.positionStatus !== "validated").length;
+  const unvalidated = used.filter((l) => !measuredGrade(l.reference.positionStatus)).length;
   const standing = unvalidated === 0 ? "validated" : unvalidated === used.length ? "not-validated" : "partly-validated";
   return { standing, unvalidated, used: used.length };
 }

@@ -12,7 +12,15 @@ import { split } from "./givenConstants.ts";
 import { buildLinearMolecule } from "./linearMolecule.ts";
 import type { LinearFileFit } from "./linearFit.ts";
 import type { MoleculeFile } from "./linearSchema.ts";
-import { gasBroadening, gasPressureShift, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
+import {
+  certifiedAllowanceCm,
+  gasBroadening,
+  gasPressureShift,
+  moleculeIdentity,
+  referenceLineOf,
+  type Molecule,
+  type SpeciesInfo,
+} from "./moleculeIdentity.ts";
 import { isotope } from "./isotopes.ts";
 import type { DiatomicMoleculeFile } from "./schema.ts";
 import { speciesConstants } from "./speciesConstants.ts";
@@ -93,7 +101,8 @@ export function buildDiatomicMolecule(file: DiatomicMoleculeFile, fileName: stri
     const info = models.find((m) => sameSpecies(m.model.massNumbers, group.massNumbers))!;
     const [vUpper, vLower] = group.band.split("-").map(Number);
     const band = { vUpper, vLower };
-    for (const line of group.lines) info.model.referenceLines.push(referenceLineOf(line, band, group.source));
+    const allowance = certifiedAllowanceCm(file, group.source);
+    for (const line of group.lines) info.model.referenceLines.push(referenceLineOf(line, band, group.source, allowance));
   }
   const validations = moleculeValidation(
     models.map((m) => m.model),

@@ -1,5 +1,13 @@
 import { moleculeValidation, transitionDipoleFromBandStrength, type LinearSpeciesData, type LinearState, type LinearSpeciesModel } from "../core/index.ts";
-import { gasBroadening, gasPressureShift, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
+import {
+  certifiedAllowanceCm,
+  gasBroadening,
+  gasPressureShift,
+  moleculeIdentity,
+  referenceLineOf,
+  type Molecule,
+  type SpeciesInfo,
+} from "./moleculeIdentity.ts";
 import { linearFitErrors, type LinearFileFit } from "./linearFit.ts";
 import type { GivenConstant } from "./givenConstants.ts";
 import { isotope } from "./isotopes.ts";
@@ -65,6 +73,7 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string, 
       intensities: [],
       referenceLines: [],
       linear,
+      ...(entry.ownCells ? { ownCells: true } : {}),
     };
     for (const b of entry.bands) {
       if (!b.bandStrength) continue;
@@ -83,7 +92,8 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string, 
     }
     for (const group of entry.referenceLines ?? []) {
       const band = linear.bands.find((x) => x.band.label === group.band)!.band;
-      for (const line of group.lines) model.referenceLines.push(referenceLineOf(line, band, group.source));
+      const allowance = certifiedAllowanceCm(file, group.source);
+      for (const line of group.lines) model.referenceLines.push(referenceLineOf(line, band, group.source, allowance));
     }
     const spellings = new Set([...speciesSpellings(file.atoms, entry.massNumbers), label.toLowerCase()]);
     return {

@@ -68,6 +68,9 @@ const linearSpeciesSchema = mapping(
     massNumbers,
     label: text("the species label (e.g. 12C16O2)").optional(),
     reference: z.boolean({ error: (i) => `expected true or false, got ${describeInput(i.input)}` }).optional(),
+    // true: a reference-cell gas of its own (an isotopically enriched cell, as a standard's), so its
+    // lines are not weighed against the natural gas's strongest line.
+    ownCells: z.boolean({ error: (i) => `expected true or false, got ${describeInput(i.input)}` }).optional(),
     nuclearSpinWeights: mapping(
       { evenJ: numberIn("(a statistical weight)"), oddJ: numberIn("(a statistical weight)"), source: sourceKey },
       "nuclear-spin weights of the ground state's even and odd J",

@@ -85,9 +85,36 @@ export function gasPressureShift(block: NonNullable<IdentityFields["pressureShif
 
 type FileLine = z.infer<typeof referenceLineSchema>;
 
-/** A measured line of a file as the species model keeps it. */
-export function referenceLineOf(line: FileLine, band: Band, sourceKey: string): ReferenceLine {
-  return { band, label: line.label, wavenumber: line.wavenumber, uncertainty: line.uncertainty ?? null, sourceKey, heldOut: line.heldOut === true };
+const standardAtmospherePa = 101325; // Pa per atm, by definition
+
+/**
+ * How far a certified source's lines may lie from their zero-pressure centres, cm⁻¹: none when its
+ * values are zero-pressure values, else the cell pressure times the file's self shift plus its ±
+ * (a bound, not applied: the standard's value stays as printed); null when the source is not a
+ * certified standard, or its cell pressure has no cited shift to bound it with.
+ */
+export function certifiedAllowanceCm(fields: Pick<IdentityFields, "sources" | "pressureShift">, sourceKey: string): number | null {
+  const marked = fields.sources[sourceKey]?.certifiedPositions;
+  if (marked === undefined) return null;
+  const pressurePa = marked === true ? 0 : marked.cellPressurePa;
+  if (pressurePa === 0) return 0;
+  const self = fields.pressureShift?.self;
+  return self ? (pressurePa / standardAtmospherePa) * (Math.abs(self.cmPerAtm) + self.uncertaintyCmPerAtm) : null;
+}
+
+/** A measured line of a file as the species model keeps it; `allowanceCm` from certifiedAllowanceCm. */
+export function referenceLineOf(line: FileLine, band: Band, sourceKey: string, allowanceCm: number | null = null): ReferenceLine {
+  const u = line.uncertainty ?? null;
+  return {
+    band,
+    label: line.label,
+    wavenumber: line.wavenumber,
+    uncertainty: u,
+    sourceKey,
+    heldOut: line.heldOut === true,
+    // Certified only with a stated ±: a listed value without one cannot be a reference position.
+    certifiedUncertainty: allowanceCm === null || u === null ? null : Math.hypot(u, allowanceCm),
+  };
 }
 
 /** A measured line of a file as a fit sees it (a line without an uncertainty is refused before any fit runs). */

@@ -23,6 +23,19 @@ export const sourceSchema = mapping(
     citation: text("the full citation (authors, title, journal, volume, pages, year)"),
     url: text("a web address").optional(),
     doi: text("a DOI").optional(),
+    // A certified standard (a metrology body's recommended values, a reference material's
+    // certificate): its measured lines become the reference positions of their lines.
+    certifiedPositions: z
+      .union(
+        [
+          z.literal(true),
+          mapping({ cellPressurePa: numberIn("Pa").nonnegative({ error: "a pressure cannot be negative" }) }, "the certified values' cell pressure"),
+        ],
+        {
+          error: (issue) => `expected true, or { cellPressurePa } when the certified values apply to a filled cell, got ${describeInput(issue.input)}`,
+        },
+      )
+      .optional(),
   },
   "a source",
 );

@@ -124,7 +124,14 @@ export const cautionDeferral = sheetCautionDeferral;
  * One letter per line in the narrow sheet table (two branches side by side leave no room for the
  * words); the legend under the table spells them out (sheetStatusLegend).
  */
-export const sheetStatusLetters: Record<Line["positionStatus"], string> = { validated: "v", contradicted: "c", extrapolated: "e", "not-validated": "n" };
+// s: a standard's listed line (c is taken by contradicted).
+export const sheetStatusLetters: Record<Line["positionStatus"], string> = {
+  certified: "s",
+  validated: "v",
+  contradicted: "c",
+  extrapolated: "e",
+  "not-validated": "n",
+};
 export const sheetStatusLegend =
   "± is the line's standard uncertainty; positions are rounded to it. Status: " +
   (Object.keys(sheetStatusLetters) as Array<Line["positionStatus"]>).map((s) => `${sheetStatusLetters[s]} ${positionStatusWords[s]}`).join(", ") +
