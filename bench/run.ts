@@ -4,6 +4,7 @@
 import { benchBrowserCalibrate } from "./browserCalibrate.ts";
 import { benchBrowserSearch } from "./browserSearch.ts";
 import { benchCalibrateSpectrum } from "./calibrateSpectrum.ts";
+import { benchCliStart } from "./cliStart.ts";
 import { benchCellTransmittance } from "./cellTransmittance.ts";
 import { benchCoreLines } from "./coreLines.ts";
 import { benchIncremental } from "./incrementalBuild.ts";
@@ -16,7 +17,7 @@ const known = ["--quick", "--help", "-h"];
 if (args.includes("--help") || args.includes("-h") || args.some((a) => a.startsWith("-") && !known.includes(a))) {
   console.log(`npm run bench [-- [--quick] [section-prefix]]
 
-Prints every speed figure with its target. Sections: core, cell, calibrate, sheets, build, scale, incremental,
+Prints every speed figure with its target. Sections: core, cell, calibrate, cli, sheets, build, scale, incremental,
 browser (a prefix picks them). The full run builds atlases of 50, 500 and 2000 invented molecules
 and takes many minutes; --quick uses 10 and 20 (and 50 for the browser) instead.`);
   process.exit(args.includes("--help") || args.includes("-h") ? 0 : 2);
@@ -34,6 +35,7 @@ const sections: Array<{ name: string; run: () => Promise<string[]> | string[] }>
   },
   { name: "cell: CO transmittance, 300 cm⁻¹ at 0.002 cm⁻¹, all species, FT 0.5 cm⁻¹, Node", run: benchCellTransmittance },
   { name: "calibrate: a 65 536-point CO spectrum from CSV text to the correction, Node", run: benchCalibrateSpectrum },
+  { name: "cli: whole commands beside a bare node start", run: benchCliStart },
   { name: "sheets: one bench sheet, one core", run: benchSheetRender },
   { name: "build: shipped atlas, cold, beside a bare Eleventy baseline", run: benchShippedBuild },
   { name: "scale: invented molecules, full builds", run: () => benchScale(quick ? [10, 20] : [50, 500, 2000]) },
