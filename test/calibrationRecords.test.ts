@@ -173,6 +173,8 @@ describe("calibrate with a record (invented instrument, operator, cell and dates
     // measured − true = −k·ν: the scale reads low by about 150 ppm × ν.
     for (const c of tight.verdictChecks) expect(c.errorCm / c.wavenumberCm / -1e-6).toBeCloseTo(tight.correction.scalePpm, -0.5);
     expect((await verdict("1000 ppm")).verdict).toBe("pass");
+    // Unquoted, as a user types it: the unit word joins its number.
+    expect(JSON.parse(await ok("calibrate", co150, "--gas", "co", "--tolerance", "1000", "ppm", "--format", "json")).verdict).toBe("pass");
     expect((await verdict("150 ppm")).verdict).toBe("undecided");
     const at = await verdict("0.5 cm-1 at 2100,2200");
     expect(at.verdictChecks.map((c: { wavenumberCm: number }) => c.wavenumberCm)).toEqual([2100, 2200]);

@@ -49,7 +49,11 @@ export function joinUnitWords(args: string[]): string[] {
   const unitWord = /^[a-zA-Z]+$/;
   for (let i = 0; i < args.length; i++) {
     const a = args[i];
-    if (
+    // calibrate's --tolerance 5 ppm / 0.01 cm-1 (a check list after "at" still needs quotes).
+    if (a === "--tolerance" && /^[+\d.]/.test(args[i + 1] ?? "") && /^(ppm|cm-1|cm⁻¹)$/i.test(args[i + 2] ?? "")) {
+      out.push(a, `${args[i + 1]} ${args[i + 2]}`);
+      i += 2;
+    } else if (
       ["--pressure", "--path", "--temperature"].includes(a) &&
       i + 2 < args.length + 1 &&
       args[i + 2] !== undefined &&
@@ -133,5 +137,5 @@ export function describeConditions(c: CellConditions, instrument: Instrument): s
       : instrument.kind === "fourier-transform"
         ? `FT, resolution ${instrument.resolutionCm} cm⁻¹ (max. OPD ${(1 / instrument.resolutionCm).toPrecision(4)} cm), ${instrument.apodization} apodization`
         : "monochromatic";
-  return `${c.pathCm} cm cell, ${c.temperatureK} K, ${(c.pressurePa / 100).toPrecision(5)} mbar (${((c.pressurePa * 760) / standardAtmospherePa).toPrecision(5)} Torr) total, mole fraction ${c.moleFraction} in air; ${inst}`;
+  return `${c.pathCm} cm cell, ${c.temperatureK} K, ${(c.pressurePa / 100).toPrecision(5)} mbar (${((c.pressurePa * 760) / standardAtmospherePa).toPrecision(5)} Torr) total, ${c.moleFraction === 1 ? "the pure gas" : `mole fraction ${c.moleFraction} in air`}; ${inst}`;
 }
