@@ -1,4 +1,5 @@
 import type { Band } from "../core/index.ts";
+import { windowToWavenumber, type SpectralPosition } from "../core/spectralPosition.ts";
 
 /** The standard temperatures of the atlas, set here and nowhere else. */
 export const standardTemperaturesK: readonly number[] = [273.15, 296, 298.15, 1000];
@@ -20,5 +21,14 @@ export const atlasBands: ReadonlyArray<{ band: Band; kind: BandKind }> = [
 export const hotBandDisplayFraction = 1e-3;
 /** Default half-width of the `find` window (CLI and the website's wavenumber search), cm⁻¹. */
 export const defaultFindWindowCm = 1.0;
+/**
+ * The one window rule of `find` and the website's search: a half-width given is in the position's
+ * own unit (typed or chosen: "1532.83 nm" with the menu at cm⁻¹ is nm); none given is
+ * defaultFindWindowCm in cm⁻¹, whatever the unit (±1 nm would be ±4 cm⁻¹ at 1.5 µm).
+ */
+export function findWindowCm(position: SpectralPosition, halfWidthGiven: number | null): number {
+  return halfWidthGiven === null ? defaultFindWindowCm : windowToWavenumber(position, halfWidthGiven);
+}
+
 /** Default threshold of `find`, relative to the strongest line of each band. */
 export const defaultFindMinRelative = 1e-3;

@@ -12,6 +12,7 @@ import {
 } from "../core/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 import { speciesBands } from "./moleculeBands.ts";
+import { maxSpectrumRangeCm } from "./cellUnits.ts";
 import {
   calibrationApodization,
   calibrationResolutionsCm,
@@ -59,6 +60,22 @@ export function spectrumRange(molecule: Molecule, set: CellLineSet, resolutionCm
   const principal = bandLabel(speciesBands(molecule.species[0])[0].band);
   const lines = set.lines.filter((l) => l.band === principal);
   return strongLinesRange(lines.length ? lines : set.lines, spectrumRangeFraction, resolutionCm);
+}
+
+/**
+ * The bench page's default range: \`bandatlas spectrum\`'s (the principal band), rounded out to
+ * 10 cm⁻¹ for a readable form, so the page opens on what the CLI shows and within the one limit
+ * (maxSpectrumRangeCm; a band wider than that is shown around its middle).
+ */
+export function benchDefaultRange(molecule: Molecule, set: CellLineSet, resolutionCm: number): { fromCm: number; toCm: number } {
+  const band = spectrumRange(molecule, set, resolutionCm);
+  let fromCm = Math.max(10, Math.floor(band.fromCm / 10) * 10);
+  let toCm = Math.ceil(band.toCm / 10) * 10;
+  if (toCm - fromCm > maxSpectrumRangeCm) {
+    const middle = Math.round((fromCm + toCm) / 20) * 10;
+    [fromCm, toCm] = [middle - maxSpectrumRangeCm / 2, middle + maxSpectrumRangeCm / 2];
+  }
+  return { fromCm, toCm };
 }
 
 export interface MoleculeCalibrationLines extends MoleculeCellSpectrum {

@@ -27,3 +27,10 @@ export const pressureUnitsPa: Readonly<Record<string, number>> = {
 export const lengthUnitsCm: Readonly<Record<string, number>> = { m: 100, cm: 1, mm: 0.1 };
 /** Above this total pressure the ideal-gas and Voigt models mean nothing (100 atm). */
 export const maxCellPressurePa = 100 * standardAtmospherePa;
+
+/**
+ * The widest range one cell spectrum may span, the same for `bandatlas spectrum` and the bench
+ * page (defined once here, where both already read their units): the page computes in the
+ * browser, where a wider range takes many seconds, and every principal band of the atlas fits.
+ */
+export const maxSpectrumRangeCm = 1000;

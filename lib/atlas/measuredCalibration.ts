@@ -121,7 +121,9 @@ export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbs
     const there = [
       ...new Set(
         set.lines
-          .filter((l) => l.wavenumber >= measuredFrom && l.wavenumber <= measuredTo && l.intensity >= criteria.minRelativeStrength * strongestOf.get(l.species)!)
+          .filter(
+            (l) => l.wavenumber >= measuredFrom && l.wavenumber <= measuredTo && l.intensity >= criteria.minRelativeStrength * strongestOf.get(l.species)!,
+          )
           .map((l) => l.species),
       ),
     ];

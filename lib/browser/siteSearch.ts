@@ -3,18 +3,12 @@
 // with textContent, never innerHTML.
 import MiniSearch from "minisearch";
 import { findColumns, findGroups, findHeadText, findPositionsNote, findUnknownStrengthHeading } from "../format/findText.ts";
-import {
-  parseSpectralPosition,
-  positionToWavenumber,
-  unitLabels,
-  windowToWavenumber,
-  type PositionUnit,
-  type SpectralPosition,
-} from "../core/spectralPosition.ts";
+import { parseSpectralPosition, positionToWavenumber, unitLabels, type PositionUnit, type SpectralPosition } from "../core/spectralPosition.ts";
 import { decodeLineIndex, type DecodedLineIndex, type LineIndexFile } from "../shared/lineIndexCodec.ts";
 import { nameIndexOptions, nameSearchOptions } from "../shared/nameSearchOptions.ts";
 import { searchWavenumber } from "./wavenumberSearch.ts";
 import { lineRowId } from "../shared/sitePaths.ts";
+import { findWindowCm } from "../atlas/atlasConfig.ts";
 import { el } from "./dom.ts";
 
 const root = document.documentElement.dataset.root ?? "";
@@ -87,8 +81,10 @@ function setupWavenumberSearch(form: HTMLFormElement) {
       return fail(`${(error as Error).message}.`);
     }
     const wavenumber = positionToWavenumber(position);
-    const windowGiven = Number(field("window").value.trim());
-    const windowCm = windowGiven > 0 ? windowToWavenumber(position, windowGiven) : NaN;
+    // The CLI's rule (findWindowCm): an empty field is the default in cm⁻¹, a number is in the position's unit.
+    const windowText = field("window").value.trim();
+    const windowGiven = windowText === "" ? null : Number(windowText.replace(",", "."));
+    const windowCm = windowGiven === null || windowGiven > 0 ? findWindowCm(position, windowGiven) : NaN;
     const minRelative = Number(field("minRelative").value.trim());
     const token = field("temperature").value;
     if (!(windowCm > 0) || windowCm > 500) return fail("The window (half-width) must be above 0 and at most 500 cm⁻¹ (in the position's unit).");

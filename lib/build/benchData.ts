@@ -1,8 +1,7 @@
-import { calibrationMarks, calibrationRange, cellLineSet, cellModel, defaultCellConditions, type CalibrationMarks, type CellModel } from "../atlas/index.ts";
-import { defaultCalibrationCriteria } from "../core/index.ts";
+import { benchDefaultRange, calibrationMarks, cellLineSet, cellModel, defaultCellConditions, type CalibrationMarks, type CellModel } from "../atlas/index.ts";
 import type { Molecule } from "../molecules/index.ts";
 
-/** The bench page's default window: lines down to 0.01 of the strongest, a margin for this resolution, rounded out to 10 cm⁻¹. */
+/** The bench page's default resolution, at which its default range (benchDefaultRange) takes its margin. */
 export const benchDefaultResolutionCm = 0.5;
 
 /** What the build computes once per molecule for its bench page, species pages and sheets. */
@@ -17,14 +16,13 @@ export interface MoleculeBenchData {
 
 export function moleculeBenchData(molecule: Molecule): MoleculeBenchData {
   const model = cellModel(molecule);
-  const range = calibrationRange(cellLineSet(molecule, defaultCellConditions), benchDefaultResolutionCm, {
-    ...defaultCalibrationCriteria,
-    strongFraction: 0.01,
-  });
+  // The CLI's default range (the principal band), so the page opens where \`spectrum\` does and
+  // inside the one range limit; it used to span every band (HCl 2640–5790 cm⁻¹, refused by the page).
+  const range = benchDefaultRange(molecule, cellLineSet(molecule, defaultCellConditions), benchDefaultResolutionCm);
   return {
     moleculeId: molecule.id,
     marks: calibrationMarks(molecule),
     model,
-    defaultRangeCm: { fromCm: Math.max(10, Math.floor(range.fromCm / 10) * 10), toCm: Math.ceil(range.toCm / 10) * 10 },
+    defaultRangeCm: range,
   };
 }

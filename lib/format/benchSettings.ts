@@ -1,6 +1,6 @@
 // The bench page's settings and their URL query (so a setting can be shared): parsing with one
 // plain message per bad field, and the instrument they describe.
-import { lengthUnitsCm, pressureUnitsPa } from "../atlas/cellUnits.ts";
+import { lengthUnitsCm, maxSpectrumRangeCm, pressureUnitsPa } from "../atlas/cellUnits.ts";
 import { apodizations, type Apodization, type Instrument } from "../core/instrumentLineShape.ts";
 
 /** The bench's line-shape choices: the FT apodizations, and a grating's Gaussian slit. */
@@ -32,7 +32,7 @@ export interface BenchSettings {
 }
 
 /** What one browser computation may ask for (a range wider than this would take many seconds). */
-export const benchLimits = { maxRangeCm: 1000, maxResolutionCm: 100 };
+export const benchLimits = { maxRangeCm: maxSpectrumRangeCm, maxResolutionCm: 100 };
 
 export function instrumentOf(s: BenchSettings): Instrument {
   return s.lineShape === gratingLineShape
@@ -90,7 +90,7 @@ export function readBenchSettings(query: URLSearchParams, defaults: BenchSetting
   if (!(settings.toCm > settings.fromCm)) problems.push(`The range ${settings.fromCm} to ${settings.toCm} cm⁻¹ is empty: “to” must be above “from”.`);
   else if (settings.toCm - settings.fromCm > benchLimits.maxRangeCm)
     problems.push(
-      `The range ${settings.fromCm} to ${settings.toCm} cm⁻¹ is wider than ${benchLimits.maxRangeCm} cm⁻¹: narrow it (the CLI's bandatlas spectrum takes up to 2000 cm⁻¹).`,
+      `The range ${settings.fromCm} to ${settings.toCm} cm⁻¹ is wider than ${benchLimits.maxRangeCm} cm⁻¹, the limit of this page and of bandatlas spectrum: narrow it.`,
     );
   return { settings, problems };
 }

@@ -18,3 +18,4 @@ export * from "./calibrationLog.ts";
 export * from "./calibrationHistory.ts";
 export * from "./chartScene.ts";
 export * from "./historyChart.ts";
+export * from "./validationSummary.ts";

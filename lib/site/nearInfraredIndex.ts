@@ -14,8 +14,15 @@ export const nearInfraredLimitNm = 2500;
  * wavelength. Diatomic overtones and linear-molecule bands appear alike: the rows come from the
  * atlas entries, whatever kind of molecule made them.
  */
-/** A line's vacuum wavelength in nm, rounded to its ±. */
-const lineNm = (l: Line) => positionWithUncertainty(l.wavelengthVacuumUm * 1000, wavelengthSigmaUm(l.wavenumber, l.wavenumberUncertainty) * 1000).value;
+/**
+ * A wavelength in nm rounded to its ±, but never finer than 0.001 nm (1 pm), as the line tables
+ * print wavelengths: a finer ± is shown as "< 0.001".
+ */
+function nmWithUncertainty(nm: number, sigmaNm: number): { value: string; sigma: string } {
+  const w = positionWithUncertainty(nm, sigmaNm);
+  return w.decimals > 3 ? { value: nm.toFixed(3), sigma: "< 0.001" } : w;
+}
+const lineNm = (l: Line) => nmWithUncertainty(l.wavelengthVacuumUm * 1000, wavelengthSigmaUm(l.wavenumber, l.wavenumberUncertainty) * 1000).value;
 
 /** The rows of some molecules' entries, unsorted (a build adds them batch by batch). */
 export function nearInfraredRowsOf(molecules: Molecule[], entries: AtlasEntry[]) {
@@ -35,7 +42,7 @@ export function nearInfraredRowsOf(molecules: Molecule[], entries: AtlasEntry[])
       const bound = bandOriginBound(band.lines);
       const sigmaCm = bound.uncertainty;
       const cm = sigmaCm === null ? null : positionWithUncertainty(band.lines.bandOrigin, sigmaCm);
-      const nm = sigmaCm === null ? null : positionWithUncertainty(originNm, wavelengthSigmaUm(band.lines.bandOrigin, sigmaCm) * 1000);
+      const nm = sigmaCm === null ? null : nmWithUncertainty(originNm, wavelengthSigmaUm(band.lines.bandOrigin, sigmaCm) * 1000);
       rows.push({
         originNmValue: originNm,
         nearInfrared: shortestNm < nearInfraredLimitNm,

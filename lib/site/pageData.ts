@@ -1,6 +1,7 @@
 import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
 import { calibrationResolutionsCm, defaultCellConditions, gasNameInSentence, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
-import { bandOriginBoundNote, residualSignText, constantsOriginText, correctionModelWords, moleculeCaution, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
+import { bandOriginBoundNote, residualSignText, validationSummary, constantsOriginText, correctionModelWords, moleculeCaution, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
+import { constantSymbol, constantUnit, fieldNameDiffers } from "./constantSymbols.ts";
 import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
 import { apodizations, contradictionRuleText, correctionModels, standardAtmospherePa } from "../core/index.ts";
 import { maxSpectrumFileBytes } from "../spectrumFile/index.ts";
@@ -70,6 +71,9 @@ export function moleculeView(molecule: Molecule, hasBench = false) {
             source: citationOf(molecule, species.given.sourceKey),
             values: species.given.values.map((v) => ({
               name: v.name,
+              symbol: constantSymbol(v.name),
+              showName: fieldNameDiffers(v.name),
+              unit: constantUnit(v.name),
               value: String(v.valueCm),
               uncertainty: significant(v.uncertaintyCm, 2),
               uncertaintyImplied: v.uncertaintyImplied,
@@ -264,6 +268,8 @@ export function siteData(input: SiteDataInput, batch: MoleculeBatch | null) {
     calibratePage: batch ? null : calibratePageView(input.molecules, input.bench),
     benchPages: molecules.filter((m) => input.bench?.has(m.id)).map((m) => benchPageView(m, input.bench!.get(m.id)!)),
     accuracy: batch ? [] : input.accuracy,
+    // Which gases, bands and J ranges measured lines stand behind, where the home page promises calibration.
+    validation: batch ? "" : validationSummary(input.molecules).text,
     accuracyRule: contradictionRuleText.replace(/^contradicted: /, ""),
     residualSign: residualSignText,
     nearInfrared: {

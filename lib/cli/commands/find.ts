@@ -1,4 +1,4 @@
-import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, findNear } from "../../atlas/index.ts";
+import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, findNear, findWindowCm } from "../../atlas/index.ts";
 import {
   emptyFindText,
   findColumns,
@@ -10,7 +10,7 @@ import {
   roundedToUncertainty,
   textTable,
 } from "../../format/index.ts";
-import { parseSpectralPosition, positionToWavenumber, unitLabels, windowToWavenumber, type PositionUnit } from "../../core/index.ts";
+import { parseSpectralPosition, positionToWavenumber, unitLabels, type PositionUnit } from "../../core/index.ts";
 import { loadMoleculesOrThrow } from "../../molecules/index.ts";
 import { moleculesDir } from "../moleculeSource.ts";
 import { formatOption, numberOption, parseCommandLine, temperatureOption } from "../options.ts";
@@ -81,7 +81,7 @@ export function runFind(args: string[]): string {
   const windowGiven = values.window === undefined ? null : numberOption("window", values.window as string, NaN);
   if (windowGiven !== null && !(windowGiven > 0))
     throw new UsageError(`--window ${values.window}: the half-width must be above 0 (a number in the position's unit)`);
-  const windowCm = windowGiven === null ? defaultFindWindowCm : windowToWavenumber(position, windowGiven);
+  const windowCm = findWindowCm(position, windowGiven);
   if (windowCm > 500) throw new UsageError(`--window ${values.window}: the half-width must be at most 500 cm⁻¹ (${windowCm.toPrecision(3)} cm⁻¹ given)`);
   const temperatureK = temperatureOption(values.temperature as string | undefined, defaultTemperatureK);
   const minRelative = numberOption("min-relative", values["min-relative"] as string | undefined, defaultFindMinRelative);

@@ -1,4 +1,4 @@
-import { cellLineSet, moleculeCellSpectrum, spectrumRange, spectrumRangeFraction } from "../../atlas/index.ts";
+import { cellLineSet, maxSpectrumRangeCm, moleculeCellSpectrum, spectrumRange, spectrumRangeFraction } from "../../atlas/index.ts";
 import { relativeThinAbsorbance } from "../../core/index.ts";
 import {
   allGasesCaution,
@@ -65,7 +65,8 @@ export function runSpectrum(args: string[]): string {
     throw new UsageError(
       `--${given.fromCm === undefined ? "to" : "from"} ${given.fromCm ?? given.toCm}: the range would be ${fromCm.toFixed(1)} to ${toCm.toFixed(1)} cm⁻¹ (the other end is the band's); give both --from and --to`,
     );
-  if (toCm - fromCm > 2000) throw new UsageError(`--from ${fromCm} --to ${toCm}: at most 2000 cm⁻¹ at a time`);
+  if (toCm - fromCm > maxSpectrumRangeCm)
+    throw new UsageError(`--from ${fromCm} --to ${toCm}: at most ${maxSpectrumRangeCm} cm⁻¹ at a time (the bench page's limit too)`);
   // Which ends came from the principal band because no --from/--to gave them.
   const rangeCm = { from: fromCm, to: toCm, endsFromBand: [...(given.fromCm === undefined ? ["from"] : []), ...(given.toCm === undefined ? ["to"] : [])] };
   const { set, spectrum } = moleculeCellSpectrum(molecule, { conditions, fromCm, toCm, instrument }, lineSet);
