@@ -252,9 +252,17 @@ describe("every README command that needs no file of the user's", () => {
         .map((f) => f.replace(/\.yaml$/, ""));
       expect(out).toContain(`${shipped.length} molecule files valid: ${shipped.sort().join(", ")}`);
     },
-    "new so2": (out, dir) => {
-      expect(out).toContain("so2.yaml");
-      expect(readFileSync(join(dir, "so2.yaml"), "utf8")).toMatch(/^id: so2$/m);
+    // Issue 21: the README's example is a molecule the model can build (a diatomic, a linear one),
+    // never a bent one such as SO2.
+    "new hbr": (out, dir) => {
+      expect(out).toContain("hbr.yaml");
+      expect(readFileSync(join(dir, "hbr.yaml"), "utf8")).toMatch(/^id: hbr$/m);
+    },
+    "new ocs --linear": (out, dir) => {
+      expect(out).toContain("ocs.yaml");
+      const text = readFileSync(join(dir, "ocs.yaml"), "utf8");
+      expect(text).toMatch(/^structure: linear$/m);
+      expect(text).toMatch(/^id: ocs$/m);
     },
     "sheet co --temperature 296 --paper a4": (_, dir) => {
       // pdftotext (poppler-utils) reads the sheet as a reader would; R(0) from the CRC Maki table.

@@ -12,15 +12,7 @@ import { split } from "./givenConstants.ts";
 import { buildLinearMolecule } from "./linearMolecule.ts";
 import type { LinearFileFit } from "./linearFit.ts";
 import type { MoleculeFile } from "./linearSchema.ts";
-import {
-  certifiedAllowanceCm,
-  gasBroadening,
-  gasPressureShift,
-  moleculeIdentity,
-  referenceLineOf,
-  type Molecule,
-  type SpeciesInfo,
-} from "./moleculeIdentity.ts";
+import { certifiedAllowanceCm, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
 import { isotope } from "./isotopes.ts";
 import type { DiatomicMoleculeFile } from "./schema.ts";
 import { speciesConstants } from "./speciesConstants.ts";
@@ -114,8 +106,6 @@ export function buildDiatomicMolecule(file: DiatomicMoleculeFile, fileName: stri
     ...moleculeIdentity(file, fileName),
     species: models,
     structure: "diatomic",
-    broadening: file.broadening ? gasBroadening(file.broadening) : null,
-    pressureShift: file.pressureShift ? gasPressureShift(file.pressureShift) : null,
   };
 }
 

@@ -14,3 +14,4 @@ export type { ParseOptions, ParseResult } from "./parseResult.ts";
 export type { MoleculeFile } from "./linearSchema.ts";
 export * from "./moleculeIdentity.ts";
 export * from "./diatomicChecks.ts";
+export * from "./abundantSpecies.ts";

@@ -1,5 +1,5 @@
 import type { LinearStateSymmetry } from "../core/index.ts";
-import type { Found } from "./identityChecks.ts";
+import { sourceChecker, type Found } from "./identityChecks.ts";
 import { impliedUncertainty } from "./givenConstants.ts";
 import { isotope, stableMassNumbers } from "./isotopes.ts";
 import type { LinearMoleculeFile } from "./linearSchema.ts";
@@ -41,10 +41,7 @@ export function withUncertainty(m: StateConstant) {
 export function linearSemanticProblems(file: LinearMoleculeFile): Found[] {
   const out: Found[] = [];
   const add = (path: Path, message: string) => out.push({ path, message });
-  const sourceKeys = Object.keys(file.sources);
-  const checkSource = (path: Path, key: string) => {
-    if (!sourceKeys.includes(key)) add(path, `source "${key}" is not listed under \`sources\` (known: ${sourceKeys.join(", ") || "none"})`);
-  };
+  const checkSource = sourceChecker(file, add);
   if (!linearElectronicState.test(file.electronicState.trim())) {
     add(["electronicState"], `electronic state "${file.electronicState}" is not modelled: only ¹Σ⁺ ground states (written "X 1Σ+" or "X 1Σg+") are`);
   }

@@ -1,13 +1,5 @@
 import { moleculeValidation, transitionDipoleFromBandStrength, type LinearSpeciesData, type LinearState, type LinearSpeciesModel } from "../core/index.ts";
-import {
-  certifiedAllowanceCm,
-  gasBroadening,
-  gasPressureShift,
-  moleculeIdentity,
-  referenceLineOf,
-  type Molecule,
-  type SpeciesInfo,
-} from "./moleculeIdentity.ts";
+import { certifiedAllowanceCm, moleculeIdentity, referenceLineOf, type Molecule, type SpeciesInfo } from "./moleculeIdentity.ts";
 import { linearFitErrors, type LinearFileFit } from "./linearFit.ts";
 import type { GivenConstant } from "./givenConstants.ts";
 import { isotope } from "./isotopes.ts";
@@ -120,7 +112,5 @@ export function buildLinearMolecule(file: LinearMoleculeFile, fileName: string, 
     ...moleculeIdentity(file, fileName),
     species,
     structure: "linear",
-    broadening: file.broadening ? gasBroadening(file.broadening) : null,
-    pressureShift: file.pressureShift ? gasPressureShift(file.pressureShift) : null,
   };
 }

@@ -48,11 +48,29 @@ export interface Molecule {
   pressureShift?: GasPressureShift | null;
 }
 
-type IdentityKeys = "id" | "file" | "name" | "formula" | "casNumber" | "aliases" | "limitations" | "electronicState" | "atoms" | "hazard" | "sources";
+type IdentityKeys =
+  | "id"
+  | "file"
+  | "name"
+  | "formula"
+  | "casNumber"
+  | "aliases"
+  | "limitations"
+  | "electronicState"
+  | "atoms"
+  | "hazard"
+  | "sources"
+  | "broadening"
+  | "pressureShift";
 
-/** The fields every form of molecule file shares: identity, hazard note and sources. */
+/**
+ * The fields every form of molecule file shares, built here once for both forms: identity,
+ * hazard note, sources, and the gas's cited broadening and pressure shift.
+ */
 export function moleculeIdentity(file: IdentityFields, fileName: string): Pick<Molecule, IdentityKeys> {
   return {
+    broadening: file.broadening ? gasBroadening(file.broadening) : null,
+    pressureShift: file.pressureShift ? gasPressureShift(file.pressureShift) : null,
     id: file.id,
     file: fileName,
     name: file.name,
