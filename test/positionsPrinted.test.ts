@@ -97,6 +97,20 @@ describe("one residual sign", () => {
   });
 });
 
+describe("calibration-lines", () => {
+  it("prints each line's position to the decimal of its ±, in the text and the JSON", async () => {
+    const { stdout } = await runCli(["calibration-lines", "co", "--resolution", "1"]);
+    const rows = stdout.split("\n").filter((l) => /^12C16O\s+1-0\s+[PR]\(\d+\)/.test(l));
+    expect(rows.length).toBeGreaterThan(0);
+    for (const row of rows) {
+      const [, , , position, sigma] = row.trim().split(/\s+/);
+      expect(position.split(".")[1]?.length ?? 0, row).toBe(sigma.split(".")[1]?.length ?? 0);
+    }
+    const json = JSON.parse((await runCli(["calibration-lines", "co", "--resolution", "1", "--format", "json"])).stdout);
+    for (const l of json.lines) expect(l.wavenumber).toBe(roundedToUncertainty(l.wavenumber, l.wavenumberUncertainty));
+  });
+});
+
 describe("find", () => {
   it("prints HCl R(0) with its ± and status, and the offset no finer than the ±", async () => {
     const { stdout } = await runCli(["find", "2906.3", "--window", "1"]);

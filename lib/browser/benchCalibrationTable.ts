@@ -1,5 +1,5 @@
 import type { CalibrationLine } from "../core/index.ts";
-import { significant } from "../format/numbers.ts";
+import { positionWithUncertainty, significant } from "../format/numbers.ts";
 import { calibrationWavenumberDigits, peakShiftDigits } from "../format/spectrumCells.ts";
 import type { BenchSettings } from "../format/benchSettings.ts";
 import { el } from "./dom.ts";
@@ -38,8 +38,9 @@ export function calibrationTable(c: { settings: BenchSettings; lines: Calibratio
       el("th", l.label, { scope: "row" }),
       el("td", l.species),
       el("td", l.band),
-      el("td", calibrationWavenumberDigits(l.wavenumber)),
-      el("td", significant(l.wavenumberUncertainty, 2)),
+      // As the CLI's calibration-lines: the position rounded to its ±, the ± beside it.
+      el("td", positionWithUncertainty(l.wavenumber, l.wavenumberUncertainty).value),
+      el("td", positionWithUncertainty(l.wavenumber, l.wavenumberUncertainty).sigma),
       el("td", significant(l.relativeToStrongest, 3)),
       el("td", l.apparentWavenumber === null ? "no peak" : calibrationWavenumberDigits(l.apparentWavenumber)),
       el("td", peakShiftDigits(l.peakShiftCm) || "no peak"),
