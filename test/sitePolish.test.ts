@@ -145,8 +145,14 @@ describe("the site at 1280 px", () => {
   it("fits the species page's line table and the bands-by-wavelength table in the page at 1280 px", async () => {
     for (const path of ["molecules/co/12C16O-296K/index.html", "molecules/c2h2/12C2H2-296K/index.html", "near-infrared/index.html"]) {
       await page.goto(base + path);
+      // The table's right edge against its container's content box (a table-wrap, or main and its padding).
       const overflow = await page.evaluate(() =>
-        Math.max(...[...document.querySelectorAll("table.lines")].map((t) => t.getBoundingClientRect().width - t.parentElement!.getBoundingClientRect().width)),
+        Math.max(
+          ...[...document.querySelectorAll("table.lines")].map((t) => {
+            const box = t.parentElement!;
+            return t.getBoundingClientRect().right - (box.getBoundingClientRect().right - parseFloat(getComputedStyle(box).paddingRight));
+          }),
+        ),
       );
       expect(overflow, path).toBeLessThanOrEqual(0);
       expect(await page.evaluate(() => document.documentElement.scrollWidth), path).toBeLessThanOrEqual(1280);
