@@ -1,7 +1,9 @@
 // The folders of lib/ form layers (lib/README.md): each imports only folders below it, so no two
 // folders import each other and lib/core stays runnable in the browser without Node. The graph is
 // read by test/helpers/importGraph.ts (every import form, worker and bundle entries included).
+import { readdirSync, readFileSync } from "node:fs";
 import { builtinModules } from "node:module";
+import { dirname, join, relative, resolve, sep } from "node:path";
 import { describe, expect, it } from "vitest";
 import { buildGraph, codeFilesUnder, folderCycles, folderOf, libDir, referencesOf } from "./helpers/importGraph.ts";
 
@@ -116,5 +118,33 @@ describe("import layers of lib/", () => {
     expect(folders.has("cli→build")).toBe(true);
     expect(graph.external.some((x) => x.file.startsWith("lib/") && x.specifier.startsWith("node:"))).toBe(true);
     expect([...graph.followed]).toContain("eleventy.config.ts");
+  });
+
+  it("keeps lib/core's own folders in their layers: fitting, positions, intensities, bands, spectra, calibration", () => {
+    // Lowest first; a core folder imports only earlier ones (and the shared types, constants and error at core's top).
+    const coreLayers = ["fitting", "positions", "intensities", "bands", "spectra", "calibration"];
+    const coreDir = join(libDir, "core");
+    const subOf = (path: string) => relative(coreDir, path).split(sep);
+    const wrong: string[] = [];
+    for (const file of codeFilesUnder(coreDir).filter((f) => f.endsWith(".ts"))) {
+      const [from, ...rest] = subOf(file);
+      if (rest.length === 0) continue; // core's top-level files (index, types, constants, error) may import anything of core
+      const fromRank = coreLayers.indexOf(from);
+      const { references } = referencesOf(file, readFileSync(file, "utf8"));
+      for (const r of references) {
+        if (!r.specifier.startsWith(".")) continue;
+        const [to, ...toRest] = subOf(resolve(dirname(file), r.specifier));
+        if (toRest.length === 0 || to === from) continue; // core's top-level files, or the same folder
+        const toRank = coreLayers.indexOf(to);
+        if (toRank < 0 || fromRank < 0 || toRank > fromRank) wrong.push(`${relative(coreDir, file)}:${r.line} imports ${r.specifier}`);
+      }
+    }
+    expect(wrong, "a core folder may import only the folders listed before it").toEqual([]);
+    expect(
+      readdirSync(coreDir, { withFileTypes: true })
+        .filter((e) => e.isDirectory())
+        .map((e) => e.name)
+        .sort(),
+    ).toEqual([...coreLayers].sort());
   });
 });

@@ -1,5 +1,5 @@
 import type { Band } from "../core/index.ts";
-import { windowToWavenumber, type SpectralPosition } from "../core/spectralPosition.ts";
+import { windowToWavenumber, type SpectralPosition } from "../core/positions/spectralPosition.ts";
 
 /** The standard temperatures of the atlas, set here and nowhere else. */
 export const standardTemperaturesK: readonly number[] = [273.15, 296, 298.15, 1000];

@@ -3,7 +3,7 @@
 // with textContent, never innerHTML.
 import MiniSearch from "minisearch";
 import { findColumns, findGroups, findHeadText, findPositionsNote, findUnknownStrengthHeading } from "../format/findText.ts";
-import { parseSpectralPosition, positionToWavenumber, unitLabels, type PositionUnit, type SpectralPosition } from "../core/spectralPosition.ts";
+import { parseSpectralPosition, positionToWavenumber, unitLabels, type PositionUnit, type SpectralPosition } from "../core/positions/spectralPosition.ts";
 import { decodeLineIndex, type DecodedLineIndex, type LineIndexFile } from "../shared/lineIndexCodec.ts";
 import { nameIndexOptions, nameSearchOptions } from "../shared/nameSearchOptions.ts";
 import { searchWavenumber } from "./wavenumberSearch.ts";

@@ -1,4 +1,4 @@
-import { nearbyLines, type NearbyLine } from "../core/nearbyLines.ts";
+import { nearbyLines, type NearbyLine } from "../core/spectra/nearbyLines.ts";
 import type { DecodedLineIndex, IndexedLine } from "../shared/lineIndexCodec.ts";
 
 /** First index whose wavenumber is ≥ value (the index is sorted by wavenumber). */

@@ -1,5 +1,5 @@
 // Plain data shared by the core, the atlas and every renderer. Units live in the type aliases.
-import type { LinearSpeciesData } from "./linearTypes.ts";
+import type { LinearSpeciesData } from "./positions/linearTypes.ts";
 
 /** Wavenumber in cm⁻¹ (vacuum). */
 export type WavenumberCm = number;

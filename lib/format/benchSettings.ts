@@ -1,7 +1,7 @@
 // The bench page's settings and their URL query (so a setting can be shared): parsing with one
 // plain message per bad field, and the instrument they describe.
 import { lengthUnitsCm, maxSpectrumRangeCm, pressureUnitsPa } from "../atlas/cellUnits.ts";
-import { apodizations, type Apodization, type Instrument } from "../core/instrumentLineShape.ts";
+import { apodizations, type Apodization, type Instrument } from "../core/spectra/instrumentLineShape.ts";
 
 /** The bench's line-shape choices: the FT apodizations, and a grating's Gaussian slit. */
 export const gratingLineShape = "grating-gaussian-slit";

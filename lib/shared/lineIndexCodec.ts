@@ -11,7 +11,7 @@
 // of the positive wavenumbers rise too and are stored as differences from the previous line's; each
 // column is then split into byte planes (all first bytes, then all second bytes, ...), so the
 // near-constant high bytes of a double become long runs. Both steps are exact and undone on load.
-import type { LocatedLine } from "../core/nearbyLines.ts";
+import type { LocatedLine } from "../core/spectra/nearbyLines.ts";
 
 export const lineIndexFormat = "bandatlas-line-index-4";
 export const lineIndexBytesPerLine = 28;
