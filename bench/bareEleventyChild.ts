@@ -19,6 +19,8 @@ try {
   );
   const eleventy = new Eleventy(input, join(root, "site"), {
     quietMode: true,
+    // A bare baseline: not the project's compiled eleventy.config.js in the working directory.
+    configPath: false as unknown as string,
     config(config: any) {
       config.addGlobalData(
         "items",
