@@ -4,7 +4,8 @@
 // residual and the used lines' bars, and a longer bar is cut at the frame with an arrow. The x
 // axis spans the spectra plot's range with its margins, so a line sits under its peak above.
 import type { MeasuredCalibration } from "../atlas/index.ts";
-import { calibrationPlotWords, type CalibrationRun } from "../format/spectrumCalibrationText.ts";
+import { calibrationPlotWords } from "../format/calibrationReportWords.ts";
+import type { CalibrationRun } from "../format/spectrumCalibrationText.ts";
 import { axisTicks } from "../shared/axisTicks.ts";
 import { el } from "./dom.ts";
 

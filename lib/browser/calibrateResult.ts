@@ -1,8 +1,8 @@
 // The words of one calibration run on the page, all from lib/format as the CLI prints them: the
 // report's header lines, the correction box, the line table, notes, rules, and the two downloads
 // (the JSON the same bytes as `--format json`, the text the same as the table output).
+import { calibrationDocument } from "../format/calibrationDocument.ts";
 import {
-  calibrationDocument,
   calibrationLineRows,
   calibrationNotes,
   calibrationRulesText,

@@ -3,7 +3,8 @@
 import type { BuildIdentity } from "../shared/buildIdentity.ts";
 import { toleranceAtCm } from "../core/index.ts";
 import { checkWavenumbersCm } from "./calibrationVerdict.ts";
-import { calibrationDocument, type CalibrationRun } from "./spectrumCalibrationText.ts";
+import { calibrationDocument } from "./calibrationDocument.ts";
+import type { CalibrationRun } from "./spectrumCalibrationText.ts";
 import { noRecordFields, type CalibrationRecordFields } from "./calibrationRecord.ts";
 
 /** The value of every record's `schema` field: a line without it is not ours. */

@@ -10,6 +10,8 @@ export * from "./cautions.ts";
 export * from "./lineColumns.ts";
 export * from "./findText.ts";
 export * from "./spectrumCalibrationText.ts";
+export * from "./calibrationDocument.ts";
+export * from "./calibrationReportWords.ts";
 export * from "./correctionBudgetText.ts";
 export * from "./calibrationRecord.ts";
 export * from "./calibrationVerdict.ts";

@@ -2,10 +2,10 @@ import type { CellConditions, RejectionReason } from "../core/index.ts";
 import { standardAtmospherePa } from "../core/index.ts";
 import type { MeasuredCalibration } from "../atlas/index.ts";
 import type { MeasuredSpectrum } from "../spectrumFile/index.ts";
-import { budgetDocument, budgetTable, referenceStanding, referenceStandingLine } from "./correctionBudgetText.ts";
-import { applyCorrectionSentence, residualLines, residualsAfterCorrection } from "./applyCorrectionText.ts";
+import { budgetTable, referenceStandingLine } from "./correctionBudgetText.ts";
+import { applyCorrectionSentence, residualLines } from "./applyCorrectionText.ts";
 import { assumedConditionsNote, assumedWord, noRecordFields, recordFacts, type CalibrationRecordFields } from "./calibrationRecord.ts";
-import { runVerdict, verdictDocument, verdictLines, verdictRule } from "./calibrationVerdict.ts";
+import { runVerdict, verdictLines, verdictRule } from "./calibrationVerdict.ts";
 import { textTable } from "./linesTable.ts";
 import { positionWithUncertainty } from "./numbers.ts";
 import { residualSignText } from "./accuracyText.ts";
@@ -34,10 +34,10 @@ export function withUncertainty(value: number, sigma: number): { value: string; 
   return { value: value.toFixed(decimals), sigma: sigma.toFixed(decimals) };
 }
 
-const signed = (text: string) => (text.startsWith("-") ? text.replace("-", "−") : `+${text}`);
+export const signed = (text: string) => (text.startsWith("-") ? text.replace("-", "−") : `+${text}`);
 /** Wavenumbers of peaks and references: 0.0001 cm⁻¹, below any measured ± here. */
 export const calibrationPositionDigits = 4;
-const position = (x: number | null) => (x === null ? null : Number(x.toFixed(calibrationPositionDigits)));
+export const calibrationPosition = (x: number | null) => (x === null ? null : Number(x.toFixed(calibrationPositionDigits)));
 
 export const rejectionWords: Record<RejectionReason, string> = {
   weak: "weak",
@@ -65,7 +65,7 @@ export function conditionsText(c: CellConditions, assumed: ReadonlyArray<keyof C
   ].join(", ");
 }
 
-const recordOf = (run: CalibrationRun) => run.record ?? noRecordFields;
+export const recordOf = (run: CalibrationRun) => run.record ?? noRecordFields;
 
 /** The correction in words, one line per term, for the table, the page and the report's box. */
 export function correctionLines(run: CalibrationRun): string[] {
@@ -152,94 +152,6 @@ export function calibrationNotes(run: CalibrationRun): string[] {
   return notes;
 }
 
-/** The `--format json` document: the shape the issue fixed, with fields added after it. */
-export function calibrationDocument(run: CalibrationRun) {
-  const { calibration } = run;
-  const { result } = calibration;
-  const c = result.correction;
-  const k = withUncertainty(c.scale * 1e6, c.scaleUncertainty * 1e6);
-  const o = withUncertainty(c.offsetCm, c.offsetUncertaintyCm);
-  const q = withUncertainty(c.quadraticPerCm, c.quadraticUncertaintyPerCm);
-  const x = run.spectrum.wavenumberCm;
-  const record = recordOf(run);
-  return {
-    record: {
-      instrument: record.instrument,
-      operator: record.operator,
-      cell: { id: record.cellId, filledOn: record.cellFilledOn },
-      measuredOn: record.measuredOn,
-      measuredOnFrom: record.measuredOnFrom,
-      tolerance: record.tolerance,
-    },
-    ...verdictDocument(runVerdict(run)),
-    gas: run.gas,
-    file: run.fileName,
-    sha256: run.sha256,
-    model: c.model,
-    resolutionCm: calibration.resolutionCm,
-    correction: {
-      scalePpm: c.model === "offset" ? 0 : Number(k.value),
-      scalePpmUncertainty: c.model === "offset" ? 0 : Number(k.sigma),
-      offsetCm: c.model === "scale" ? 0 : Number(o.value),
-      offsetCmUncertainty: c.model === "scale" ? 0 : Number(o.sigma),
-      ...(c.model === "quadratic"
-        ? { quadraticPerCm: Number(q.value), quadraticPerCmUncertainty: Number(q.sigma), quadraticCentreCm: position(c.centreCm) }
-        : {}),
-      scaleOffsetCorrelation: c.model === "linear" || c.model === "quadratic" ? Number(c.scaleOffsetCorrelation.toFixed(3)) : null,
-      reducedChiSquared: Number.isFinite(c.reducedChiSquared) ? Number(c.reducedChiSquared.toFixed(3)) : null,
-      meaning: correctionModelWords[c.model],
-      budget: budgetDocument(result),
-      referenceStanding: referenceStanding(result).standing,
-      referenceStandingNote: referenceStandingLine(result),
-    },
-    apply: applyCorrectionSentence(run),
-    residualsAfterCorrection: residualsAfterCorrection(run).map((r) => ({
-      wavenumberCm: Number(r.wavenumberCm.toFixed(4)),
-      expandedUncertaintyCm: Number(r.expandedCm.toPrecision(2)),
-      afterLaserOnlyCm: r.afterLaserOnlyCm === null ? null : Number(r.afterLaserOnlyCm.toPrecision(3)),
-    })),
-    rmsResidualCm: Number(result.rmsResidualCm.toPrecision(2)),
-    linesUsed: result.usedCount,
-    lines: result.lines.map((l) => ({
-      label: l.reference.label,
-      species: l.reference.species,
-      band: l.reference.band,
-      reference: position(l.reference.referenceCm ?? l.reference.wavenumber),
-      measured: position(l.peak?.wavenumberCm ?? null),
-      residual: position(l.residualCm),
-      used: l.used,
-      reason: l.reason,
-      detail: l.detail,
-      referenceUncertainty: Number(l.reference.referenceUncertaintyCm.toPrecision(2)),
-      measuredUncertainty: l.measurementSigmaCm === null ? null : Number(l.measurementSigmaCm.toPrecision(2)),
-      positionStatus: l.reference.positionStatus,
-      wavenumber: position(l.reference.wavenumber),
-      relativeStrength: Number(l.reference.relativeToStrongest.toPrecision(3)),
-    })),
-    resolution: { cm: calibration.resolutionCm, from: calibration.resolutionFrom, note: calibration.resolutionNote },
-    apodization: calibration.apodization,
-    conditions: run.conditions,
-    conditionsAssumed: record.assumedConditions,
-    spectrum: {
-      format: run.spectrum.format,
-      points: x.length,
-      fromCm: position(x[0]),
-      toCm: position(x[x.length - 1]),
-      ordinate: run.spectrum.ordinate,
-      ordinateFrom: run.spectrum.ordinateFrom,
-      abscissaUnit: run.spectrum.abscissaUnit,
-      abscissaFrom: run.spectrum.abscissaFrom,
-      title: run.spectrum.title,
-      instrument: run.spectrum.instrument,
-      noiseAbsorbance: Number(calibration.noiseAbsorbance.toPrecision(2)),
-    },
-    rules: calibrationRulesText(run),
-    notes: calibrationNotes(run),
-    caution: `${run.caution}`,
-  };
-}
-
-/** Said under every calibrate line table: the sign, the same as every residual of the atlas. */
 export const calibrationResidualSign = `residual = reference − corrected measured position (${residualSignText}: the sign of every residual the atlas prints)`;
 
 /** The line table's rows, as the CLI and the report print them. */
@@ -300,62 +212,4 @@ export function calibrationText(run: CalibrationRun): string {
     run.caution,
     "",
   ].join("\n");
-}
-
-/** One labelled fact of the report's header sections; `mono` for values read character by character (hashes). */
-export interface CalibrationFact {
-  label: string;
-  value: string;
-  mono?: boolean;
-}
-
-/** What was measured and how, as the PDF report lists it: the spectrum file, then the cell and the instrument. */
-export function calibrationReportFacts(run: CalibrationRun): { spectrum: CalibrationFact[]; cell: CalibrationFact[] } {
-  const { calibration, spectrum } = run;
-  const x = spectrum.wavenumberCm;
-  const record = recordOf(run);
-  const facts: CalibrationFact[] = [
-    { label: "file", value: run.fileName },
-    { label: "SHA-256", value: run.sha256, mono: true },
-    { label: "format", value: spectrum.format === "jcamp-dx" ? "JCAMP-DX" : "CSV" },
-    { label: "points", value: String(x.length) },
-    { label: "range", value: `${x[0].toFixed(2)}–${x[x.length - 1].toFixed(2)} cm⁻¹` },
-  ];
-  if (spectrum.title) facts.push({ label: "title", value: spectrum.title });
-  if (spectrum.instrument) facts.push({ label: "instrument", value: spectrum.instrument });
-  return {
-    spectrum: facts,
-    cell: [
-      { label: "gas", value: `${run.gasName} (${run.gas})` },
-      { label: "cell", value: conditionsText(run.conditions, record.assumedConditions) },
-      { label: "FT resolution", value: `${calibration.resolutionCm} cm⁻¹ (${calibration.resolutionFrom})` },
-      { label: "apodization", value: calibration.apodization },
-    ],
-  };
-}
-
-/** The words of the report's residual plot: axis titles, the key to its markers and what it leaves out. */
-export function calibrationPlotWords(run: CalibrationRun): {
-  xTitle: string;
-  yTitle: string;
-  used: string;
-  rejected: { reason: RejectionReason; words: string; count: number }[];
-  caption: string;
-} {
-  const lines = run.calibration.result.lines;
-  const plotted = lines.filter((l) => l.peak !== null && l.residualCm !== null);
-  const reasons = Object.keys(rejectionWords) as RejectionReason[];
-  const rejected = reasons
-    .map((reason) => ({ reason, words: `not used: ${rejectionWords[reason]}`, count: plotted.filter((l) => !l.used && l.reason === reason).length }))
-    .filter((r) => r.count > 0);
-  const missing = lines.length - plotted.length;
-  return {
-    xTitle: "measured peak wavenumber / cm⁻¹",
-    yTitle: "residual / cm⁻¹",
-    used: `used in the fit (${plotted.filter((l) => l.used).length})`,
-    rejected,
-    caption:
-      "Residual = reference − corrected measured position; bars ± σ (measured and reference ± in quadrature); an arrow marks a bar cut at the frame." +
-      (missing > 0 ? ` ${missing} line${missing === 1 ? "" : "s"} without a peak ${missing === 1 ? "is" : "are"} not plotted.` : ""),
-  };
 }
