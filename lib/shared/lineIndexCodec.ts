@@ -12,6 +12,7 @@
 // column is then split into byte planes (all first bytes, then all second bytes, ...), so the
 // near-constant high bytes of a double become long runs. Both steps are exact and undone on load.
 import type { LocatedLine } from "../core/spectra/nearbyLines.ts";
+import { toBase64, fromBase64, fromPlanes, deltaBitsInPlace, undoDeltaBits, planesInto, FirstSeenNumbering } from "./lineIndexBytes.ts";
 
 export const lineIndexFormat = "bandatlas-line-index-4";
 export const lineIndexBytesPerLine = 28;
@@ -31,81 +32,6 @@ export interface IndexedLine extends LocatedLine {
   page: string;
 }
 
-function toBase64(bytes: Uint8Array): string {
-  let binary = "";
-  for (let i = 0; i < bytes.length; i += 0x8000) binary += String.fromCharCode(...bytes.subarray(i, i + 0x8000));
-  return btoa(binary);
-}
-
-function fromBase64(text: string): Uint8Array {
-  const binary = atob(text);
-  const bytes = new Uint8Array(binary.length);
-  for (let i = 0; i < binary.length; i++) bytes[i] = binary.charCodeAt(i);
-  return bytes;
-}
-
-function fromPlanes(planes: Uint8Array, width: number, out: Uint8Array): void {
-  const count = planes.length / width;
-  for (let b = 0; b < width; b++) {
-    const plane = b * count;
-    for (let i = 0; i < count; i++) out[i * width + b] = planes[plane + i];
-  }
-}
-
-/**
- * Sorted positive doubles as differences of their bit patterns (little-endian 32-bit halves,
- * exact), in place: from the last line down, each line's pattern less the one before it.
- */
-function deltaBitsInPlace(values: Float64Array): Uint32Array {
-  const halves = new Uint32Array(values.buffer, values.byteOffset, 2 * values.length);
-  for (let i = values.length - 1; i >= 0; i--) {
-    const lo = i > 0 ? halves[2 * i - 2] : 0;
-    const hi = i > 0 ? halves[2 * i - 1] : 0;
-    const l = halves[2 * i];
-    const h = halves[2 * i + 1];
-    const borrow = l < lo ? 1 : 0;
-    halves[2 * i] = (l - lo) >>> 0;
-    halves[2 * i + 1] = (h - hi - borrow) >>> 0;
-  }
-  return halves;
-}
-
-function undoDeltaBits(deltas: Uint32Array): void {
-  let lo = 0;
-  let hi = 0;
-  for (let i = 0; i < deltas.length / 2; i++) {
-    const sum = lo + deltas[2 * i];
-    const carry = sum > 0xffffffff ? 1 : 0;
-    lo = sum >>> 0;
-    hi = (hi + deltas[2 * i + 1] + carry) >>> 0;
-    deltas[2 * i] = lo;
-    deltas[2 * i + 1] = hi;
-  }
-}
-
-/** Byte planes of `width`-byte items written straight into `out` (item i's byte b at b·count + i). */
-function planesInto(bytes: Uint8Array, width: number, out: Uint8Array): void {
-  const count = bytes.length / width;
-  for (let i = 0; i < count; i++) for (let b = 0; b < width; b++) out[b * count + i] = bytes[i * width + b];
-}
-
-/** Numbers distinct keys 0, 1, 2 … in the order they are first seen, keeping a value for each. */
-class FirstSeenNumbering<K, V> {
-  readonly values: V[] = [];
-  private ids = new Map<K, number>();
-
-  id(key: K, value: () => V): number {
-    let id = this.ids.get(key);
-    if (id === undefined) {
-      id = this.values.length;
-      this.values.push(value());
-      this.ids.set(key, id);
-    }
-    return id;
-  }
-}
-
-/** Lines per storage chunk of a builder: columns grow a chunk at a time, never copied. */
 const chunkLines = 1 << 16;
 
 /** One chunk of a builder's columns (chunkLines lines; the last may be part full). */
