@@ -1,39 +1,26 @@
-import type { AtlasEntry, CalibrationMarks } from "../atlas/index.ts";
-import { calibrationResolutionsCm, defaultCellConditions, gasNameInSentence, defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, lengthUnitsCm, pressureUnitsPa, standardTemperaturesK } from "../atlas/index.ts";
-import { bandOriginBoundNote, residualSignText, validationSummary, constantsOriginText, correctionModelWords, moleculeCaution, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
+import type { AtlasEntry } from "../atlas/index.ts";
+import { defaultFindMinRelative, defaultFindWindowCm, defaultTemperatureK, standardTemperaturesK } from "../atlas/index.ts";
+import { bandOriginBoundNote, residualSignText, validationSummary, constantsOriginText, allGasesCaution, hazardSummaryDeferral, predictionNotice, calibrationByLine, calibrationConditionsText, calibrationCriteriaText, fixed, resolutionsText, significant } from "../format/index.ts";
 import { constantSymbol, constantUnit, fieldNameDiffers } from "./constantSymbols.ts";
-import { lineShapeNames, type BenchSettings } from "../format/benchSettings.ts";
-import { apodizations, contradictionRuleText, correctionModels, standardAtmospherePa } from "../core/index.ts";
-import { maxSpectrumFileBytes } from "../spectrumFile/index.ts";
+import { contradictionRuleText } from "../core/index.ts";
 import type { Molecule, SpeciesInfo } from "../molecules/index.ts";
 import { describeBuild, type BuildIdentity } from "../shared/buildIdentity.ts";
 import { accuracyRows, citationOf } from "./accuracyRows.ts";
 import { bandView } from "./bandView.ts";
 import { speciesDisplay } from "./formatCells.ts";
-import { ghsPictogramName } from "../shared/ghsPictograms.ts";
 import { nearInfraredLimitNm, sortedNearInfraredRows, type NearInfraredRow } from "./nearInfraredIndex.ts";
-import { benchModelPath, benchPagePath, calibratePagePath, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
+import { benchPagePath, calibratePagePath, moleculePagePath, sheetPath, speciesPagePath, temperatureToken } from "../shared/sitePaths.ts";
+
+import { hazardView } from "./hazardView.ts";
+import { benchPageView, calibratePageView, type BenchInput } from "./toolPageViews.ts";
+
+export type { BenchInput };
 
 /** Plots of one entry, rendered beforehand (lib/plot) and inlined by the template. */
 export interface EntryPlots {
   linearSvg: string;
   logSvg: string;
   description: string;
-}
-
-export interface HazardView {
-  pictograms: Array<{ code: string; name: string }>;
-  sentences: string[];
-  /** Known limitations of the constants, shown with the caution on every page of the molecule. */
-  limitations: string[];
-}
-
-function hazardView(molecule: Molecule): HazardView {
-  return {
-    pictograms: molecule.hazard.ghsPictograms.map((code) => ({ code, name: ghsPictogramName(code) })),
-    sentences: molecule.hazard.sentences,
-    limitations: molecule.limitations,
-  };
 }
 
 function constantsNote(molecule: Molecule, species: SpeciesInfo): string {
@@ -92,12 +79,6 @@ export function moleculeView(molecule: Molecule, hasBench = false) {
 
 
 /** What the build computed once per molecule for the bench page and the calibration marks. */
-export interface BenchInput {
-  marks: CalibrationMarks;
-  defaultRangeCm: { fromCm: number; toCm: number };
-}
-
-/** The legend of the calibration column: on pages at the marks' temperature, a pointer elsewhere. */
 function calibrationView(molecule: Molecule, entry: AtlasEntry, bench: BenchInput | undefined) {
   if (!bench) return null;
   const marks = bench.marks;
@@ -120,71 +101,6 @@ function calibrationView(molecule: Molecule, entry: AtlasEntry, bench: BenchInpu
 }
 
 /** The bench page of one molecule: form defaults, choices, and where its cell model is. */
-export function benchPageView(molecule: Molecule, bench: BenchInput) {
-  const c = defaultCellConditions;
-  const defaults: BenchSettings = {
-    temperatureK: c.temperatureK,
-    pressure: Number(((c.pressurePa * 760) / standardAtmospherePa).toPrecision(6)),
-    pressureUnit: "Torr",
-    path: c.pathCm,
-    pathUnit: "cm",
-    moleFraction: c.moleFraction,
-    resolutionCm: 0.5,
-    lineShape: "triangular",
-    fromCm: bench.defaultRangeCm.fromCm,
-    toCm: bench.defaultRangeCm.toCm,
-    at: null,
-  };
-  return {
-    moleculeId: molecule.id,
-    moleculeName: molecule.name,
-    formula: molecule.formula,
-    path: benchPagePath(molecule.id),
-    moleculePath: moleculePagePath(molecule.id),
-    modelPath: benchModelPath(molecule.id),
-    speciesPath: speciesPagePath(molecule.id, molecule.species[0].model.label, defaultTemperatureK),
-    hazard: hazardView(molecule),
-    absolute: bench.marks.intensityScale === "absolute",
-    defaults,
-    defaultsJson: JSON.stringify(defaults),
-    pressureUnits: Object.keys(pressureUnitsPa),
-    lengthUnits: Object.keys(lengthUnitsCm),
-    lineShapes: Object.entries(lineShapeNames).map(([value, name]) => ({ value, name })),
-    resolutions: [...calibrationResolutionsCm, 8],
-    criteria: calibrationCriteriaText(bench.marks),
-  };
-}
-
-/**
- * The calibrate page: every gas with a bench cell model (the browser calibrates against it), with
- * what a calibration run takes from the Molecule, which the browser does not have (its name in a
- * sentence, its caution, its sources: as `bandatlas calibrate` fills them), and the form's choices.
- * The cell fields start where the bench pages' do (the atlas's default cell, in the same units).
- */
-export function calibratePageView(molecules: Molecule[], bench: Map<string, BenchInput> | undefined) {
-  const views = molecules.filter((m) => bench?.has(m.id)).map((m) => ({ molecule: m, view: benchPageView(m, bench!.get(m.id)!) }));
-  const gases = views.map(({ molecule, view }) => ({
-    id: view.moleculeId,
-    name: view.moleculeName,
-    formula: view.formula,
-    modelPath: view.modelPath,
-    gasName: gasNameInSentence(molecule.name),
-    caution: moleculeCaution(molecule),
-    sources: molecule.sources.map((s) => s.citation),
-  }));
-  const first = views[0]?.view;
-  return {
-    path: calibratePagePath(),
-    gases,
-    gasesJson: JSON.stringify(gases.map(({ id, modelPath, gasName, caution, sources }) => ({ id, modelPath, gasName, caution, sources }))),
-    cell: first ? { defaults: first.defaults, pressureUnits: first.pressureUnits, lengthUnits: first.lengthUnits } : null,
-    // The CLI's default apodization and model.
-    apodizations: apodizations.map((a) => ({ value: a, name: lineShapeNames[a], isDefault: a === "triangular" })),
-    models: correctionModels.map((m) => ({ value: m, name: correctionModelWords[m], isDefault: m === "scale" })),
-    maxFileMb: maxSpectrumFileBytes / (1024 * 1024),
-  };
-}
-
 export function speciesPageView(molecule: Molecule, entry: AtlasEntry, plots: EntryPlots, sheetsAvailable: boolean, allEntries: AtlasEntry[], bench?: BenchInput) {
   const path = speciesPagePath(entry.moleculeId, entry.species, entry.temperatureK);
   const sameSpecies = allEntries.filter((e) => e.moleculeId === entry.moleculeId && e.species === entry.species);
