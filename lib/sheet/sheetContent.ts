@@ -1,5 +1,5 @@
 import { bandOriginBound, type AtlasBand, type AtlasEntry, type CalibrationMarks } from "../atlas/index.ts";
-import { sameBand, type Band, type BandLines, type Branch, type Line, type SpeciesModel } from "../core/index.ts";
+import { sameBand, type Band, type BandLines, type Branch, type SpeciesModel } from "../core/index.ts";
 import {
   accuracyText,
   bandOriginText,
@@ -9,8 +9,6 @@ import {
   intensityOriginWords,
   criteriaPhrase,
   fixed,
-  lineCells,
-  positionStatusWords,
   peakShiftDigits,
   significant,
 } from "../format/index.ts";
@@ -19,26 +17,9 @@ import { SheetInputError, type SheetBuildIdentity } from "./sheetInput.ts";
 import { describeBuild } from "../shared/buildIdentity.ts";
 import { displayText, safeLink } from "./displayText.ts";
 
-/** Lines at least this fraction of the band's strongest are marked strong in the table. */
-export const strongLineFraction = 0.5;
+import { tableRows, type SheetTableRow } from "./sheetTableRows.ts";
 
-export interface SheetLineCell {
-  label: string;
-  /** Rounded to its ±, with the ± beside it and the status as one letter (sheetStatusLetters). */
-  wavenumber: string;
-  uncertainty: string;
-  status: string;
-  wavelengthVacuumUm: string;
-  relativeIntensity: string;
-  strong: boolean;
-}
-
-/** One row of the table: P(J'') and R(J'') of the same lower level side by side. */
-export interface SheetTableRow {
-  jLower: number;
-  p: SheetLineCell | null;
-  r: SheetLineCell | null;
-}
+export { sheetStatusLegend, sheetStatusLetters, strongLineFraction, tableRows, type SheetLineCell, type SheetTableRow } from "./sheetTableRows.ts";
 
 export interface SheetStick {
   wavenumber: number;
@@ -125,42 +106,6 @@ export const cautionDeferral = sheetCautionDeferral;
  * words); the legend under the table spells them out (sheetStatusLegend).
  */
 // s: a standard's listed line (c is taken by contradicted).
-export const sheetStatusLetters: Record<Line["positionStatus"], string> = {
-  certified: "s",
-  validated: "v",
-  contradicted: "c",
-  extrapolated: "e",
-  "not-validated": "n",
-};
-export const sheetStatusLegend =
-  "± is the line's standard uncertainty; positions are rounded to it. Status: " +
-  (Object.keys(sheetStatusLetters) as Array<Line["positionStatus"]>).map((s) => `${sheetStatusLetters[s]} ${positionStatusWords[s]}`).join(", ") +
-  ".";
-
-function cellOf(line: Line): SheetLineCell {
-  const c = lineCells(line);
-  return {
-    label: line.label,
-    wavenumber: c.wavenumber,
-    uncertainty: c.wavenumberUncertainty,
-    status: sheetStatusLetters[line.positionStatus],
-    wavelengthVacuumUm: c.wavelengthVacuumUm,
-    relativeIntensity: c.relativeIntensity,
-    strong: line.relativeIntensity >= strongLineFraction,
-  };
-}
-
-export function tableRows(lines: Line[]): SheetTableRow[] {
-  const byJ = new Map<number, SheetTableRow>();
-  for (const line of lines) {
-    let row = byJ.get(line.jLower);
-    if (!row) byJ.set(line.jLower, (row = { jLower: line.jLower, p: null, r: null }));
-    if (line.branch === "P") row.p = cellOf(line);
-    else row.r = cellOf(line);
-  }
-  return [...byJ.values()].sort((a, b) => a.jLower - b.jLower);
-}
-
 function sourcesOf(molecule: Molecule, entry: AtlasEntry, speciesIndex: number, band: Band): SheetSource[] {
   const model = molecule.species[speciesIndex].model;
   const roles = new Map<string, string[]>();
