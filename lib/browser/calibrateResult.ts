@@ -19,47 +19,58 @@ function headerLines(text: string): string[] {
   return lines.slice(0, lines.indexOf(""));
 }
 
-function lineTable(run: CalibrationRun): HTMLTableElement {
-  const { headings, rows, rightAligned } = calibrationLineRows(run);
-  const lines = run.calibration.result.lines;
-  const table = el("table", undefined, { class: "calibration-result", id: "calibrate-line-table" });
-  table.append(
-    el(
-      "caption",
-      `${lines.length} lines of ${run.gasName} in the range, ${run.calibration.result.usedCount} used in the fit; residual = reference − corrected measured position`,
-    ),
-  );
+/**
+ * A result table from lib/format's headings and rows: one cell per row is its row header, and
+ * each row may carry a class (used/rejected lines, the budget's total).
+ */
+function resultTable(
+  id: string,
+  caption: string,
+  { headings, rows, rightAligned }: { headings: string[]; rows: string[][]; rightAligned: boolean[] },
+  rowHeaderColumn: number,
+  rowClass: (r: number) => string | null,
+): HTMLTableElement {
+  const table = el("table", undefined, { class: "calibration-result", id });
+  table.append(el("caption", caption));
   const head = el("tr");
   headings.forEach((h, i) => head.append(el("th", h, { scope: "col", ...(rightAligned[i] ? { class: "num" } : {}) })));
   table.append(el("thead"));
   table.tHead!.append(head);
   const body = el("tbody");
   rows.forEach((cells, r) => {
-    const tr = el("tr", undefined, { class: lines[r].used ? "used" : "rejected" });
-    cells.forEach((c, i) => tr.append(el(i === 2 ? "th" : "td", c, { ...(i === 2 ? { scope: "row" } : {}), ...(rightAligned[i] ? { class: "num" } : {}) })));
+    const cls = rowClass(r);
+    const tr = el("tr", undefined, cls ? { class: cls } : {});
+    cells.forEach((c, i) => {
+      const header = i === rowHeaderColumn;
+      tr.append(el(header ? "th" : "td", c, { ...(header ? { scope: "row" } : {}), ...(rightAligned[i] ? { class: "num" } : {}) }));
+    });
     body.append(tr);
   });
   table.append(body);
   return table;
 }
 
+function lineTable(run: CalibrationRun): HTMLTableElement {
+  const lines = run.calibration.result.lines;
+  return resultTable(
+    "calibrate-line-table",
+    `${lines.length} lines of ${run.gasName} in the range, ${run.calibration.result.usedCount} used in the fit; residual = reference − corrected measured position`,
+    calibrationLineRows(run),
+    2,
+    (r) => (lines[r].used ? "used" : "rejected"),
+  );
+}
+
 /** The uncertainty budget of k and c, part by part, the total last. */
 function budgetElement(run: CalibrationRun): HTMLTableElement {
-  const { headings, rows, rightAligned } = budgetTable(run.calibration.result);
-  const table = el("table", undefined, { class: "calibration-result", id: "calibrate-budget-table" });
-  table.append(el("caption", "Uncertainty budget: each part's standard uncertainty of k and c; sources shared by many lines are propagated as shared"));
-  const head = el("tr");
-  headings.forEach((h, i) => head.append(el("th", h, { scope: "col", ...(rightAligned[i] ? { class: "num" } : {}) })));
-  table.append(el("thead"));
-  table.tHead!.append(head);
-  const body = el("tbody");
-  rows.forEach((cells, r) => {
-    const tr = el("tr", undefined, r === rows.length - 1 ? { class: "total" } : {});
-    cells.forEach((c, i) => tr.append(el(i === 0 ? "th" : "td", c, { ...(i === 0 ? { scope: "row" } : {}), ...(rightAligned[i] ? { class: "num" } : {}) })));
-    body.append(tr);
-  });
-  table.append(body);
-  return table;
+  const budget = budgetTable(run.calibration.result);
+  return resultTable(
+    "calibrate-budget-table",
+    "Uncertainty budget: each part's standard uncertainty of k and c; sources shared by many lines are propagated as shared",
+    budget,
+    0,
+    (r) => (r === budget.rows.length - 1 ? "total" : null),
+  );
 }
 
 /** Blob URLs of the last run, released when the next one replaces them. */

@@ -32,25 +32,20 @@ export function drawCalibrationBudget(flow: CalibrationPageFlow, run: Calibratio
   let y = flow.y;
   drawRow(table.headings, y, true);
   y += rowPt;
-  doc
-    .save()
-    .lineWidth(0.6)
-    .strokeColor(ink)
-    .moveTo(x, y - 1.5)
-    .lineTo(x + width, y - 1.5)
-    .stroke()
-    .restore();
+  // A rule under the headings and one above the total.
+  const rule = (at: number) =>
+    doc
+      .save()
+      .lineWidth(0.6)
+      .strokeColor(ink)
+      .moveTo(x, at - 1.5)
+      .lineTo(x + width, at - 1.5)
+      .stroke()
+      .restore();
+  rule(y);
   table.rows.forEach((row, i) => {
     const last = i === table.rows.length - 1;
-    if (last)
-      doc
-        .save()
-        .lineWidth(0.6)
-        .strokeColor(ink)
-        .moveTo(x, y - 1.5)
-        .lineTo(x + width, y - 1.5)
-        .stroke()
-        .restore();
+    if (last) rule(y);
     drawRow(row, y, last);
     y += rowPt;
   });
