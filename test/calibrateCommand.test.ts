@@ -7,6 +7,7 @@ import { describe, expect, it } from "vitest";
 import { runCli } from "../lib/cli/main.ts";
 import { cellModel, defaultCellConditions, selectMolecule } from "../lib/atlas/index.ts";
 import { shippedMolecules } from "./helpers/shipped.ts";
+import { coCellJcamp } from "./helpers/coCellJcamp.ts";
 import { measuredSpectrum, seededRandom, trueSpectrum } from "../lib/atlas/syntheticSpectrum.ts";
 
 const spectra = join(import.meta.dirname, "fixtures", "spectra");
@@ -125,32 +126,8 @@ describe("real spectra from two teaching-laboratory FTIRs", () => {
 
 describe("a JCAMP-DX file", () => {
   it("a synthetic CO cell written as JCAMP-DX (XFACTOR/YFACTOR, transmittance, ##RESOLUTION) with a +150 ppm scale error: recovered within 3σ", async () => {
-    const cell = cellModel(selectMolecule(shippedMolecules(), "co"));
-    const truth = trueSpectrum(cell, defaultCellConditions, 0.5, "triangular", 1995, 2265);
-    const error = { scale: 150e-6, offsetCm: 0, noiseAbsorbance: 0.001, tiltPerCm: 0, baselineAbsorbance: 0 };
-    const m = measuredSpectrum(truth, 2000, 2260, 0.125, error, seededRandom(21));
-    const y = Array.from(m.absorbance, (a) => Math.round(10 ** -a * 1e5));
-    const rows: string[] = [];
-    for (let i = 0; i < y.length; i += 10) rows.push(`${Math.round(m.wavenumberCm[i] * 1000)} ${y.slice(i, i + 10).join(" ")}`);
-    const text = [
-      "##TITLE=invented CO cell spectrum made by the bandatlas cell model",
-      "##JCAMP-DX=4.24",
-      "##DATA TYPE=INFRARED SPECTRUM",
-      "##XUNITS=1/CM",
-      "##YUNITS=TRANSMITTANCE",
-      "##RESOLUTION=0.5",
-      "##XFACTOR=0.001",
-      "##YFACTOR=0.00001",
-      `##FIRSTX=${m.wavenumberCm[0]}`,
-      `##LASTX=${m.wavenumberCm[y.length - 1]}`,
-      `##NPOINTS=${y.length}`,
-      `##FIRSTY=${y[0] * 1e-5}`,
-      "##XYDATA=(X++(Y..Y))",
-      ...rows,
-      "##END=",
-    ].join("\n");
     const path = join(dir, "co-cell.jdx");
-    writeFileSync(path, text);
+    writeFileSync(path, coCellJcamp({ scale: 150e-6, seed: 21, jcampVersion: "4.24", firstY: true }));
     const doc = await calibrate(path, "--gas", "co");
     // true = measured·(1 + k): the file's scale is 150 ppm short, so k = +150 ppm.
     expect(Math.abs(doc.correction.scalePpm - 150)).toBeLessThan(3 * doc.correction.scalePpmUncertainty);

@@ -8,13 +8,11 @@ import { appendFileSync, mkdtempSync, readFileSync, writeFileSync } from "node:f
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { cellModel, defaultCellConditions, selectMolecule } from "../lib/atlas/index.ts";
 import { checkVerdict, controlLimits, shiftAtWavenumber, trendBreaks, type WavenumberCorrection } from "../lib/core/index.ts";
 import { runCli } from "../lib/cli/main.ts";
 import { calibrationLogSchema, parseCalibrationLog, type CalibrationLogEntry } from "../lib/format/index.ts";
 import { jcampMeasuredOn } from "../lib/spectrumFile/jcampDate.ts";
-import { shippedMolecules } from "./helpers/shipped.ts";
-import { measuredSpectrum, seededRandom, trueSpectrum } from "../lib/atlas/syntheticSpectrum.ts";
+import { coCellJcamp } from "./helpers/coCellJcamp.ts";
 import { pdfText } from "./sheetHelpers.ts";
 
 const hunter = join(import.meta.dirname, "fixtures", "spectra", "hcl-dcl-hunter", "HCl_spectrum.csv");
@@ -110,35 +108,10 @@ describe("JCAMP-DX dates", () => {
   });
 });
 
-/** A synthetic CO cell with a +150 ppm scale error, written as JCAMP-DX with an (invented) date. */
+/** A synthetic CO cell with a known scale error, written as JCAMP-DX with an (invented) date. */
 function coJcamp(name: string, scale: number, seed: number, date: string | null): string {
-  const cell = cellModel(selectMolecule(shippedMolecules(), "co"));
-  const truth = trueSpectrum(cell, defaultCellConditions, 0.5, "triangular", 1995, 2265);
-  const m = measuredSpectrum(truth, 2000, 2260, 0.125, { scale, offsetCm: 0, noiseAbsorbance: 0.001, tiltPerCm: 0, baselineAbsorbance: 0 }, seededRandom(seed));
-  const y = Array.from(m.absorbance, (a) => Math.round(10 ** -a * 1e5));
-  const rows: string[] = [];
-  for (let i = 0; i < y.length; i += 10) rows.push(`${Math.round(m.wavenumberCm[i] * 1000)} ${y.slice(i, i + 10).join(" ")}`);
   const path = join(dir, name);
-  writeFileSync(
-    path,
-    [
-      "##TITLE=invented CO cell spectrum made by the bandatlas cell model",
-      "##JCAMP-DX=5.01",
-      "##DATA TYPE=INFRARED SPECTRUM",
-      ...(date ? [`##LONG DATE=${date} 09:00:00`] : []),
-      "##XUNITS=1/CM",
-      "##YUNITS=TRANSMITTANCE",
-      "##RESOLUTION=0.5",
-      "##XFACTOR=0.001",
-      "##YFACTOR=0.00001",
-      `##FIRSTX=${m.wavenumberCm[0]}`,
-      `##LASTX=${m.wavenumberCm[y.length - 1]}`,
-      `##NPOINTS=${y.length}`,
-      "##XYDATA=(X++(Y..Y))",
-      ...rows,
-      "##END=",
-    ].join("\n"),
-  );
+  writeFileSync(path, coCellJcamp({ scale, seed, jcampVersion: "5.01", ...(date ? { longDate: date } : {}) }));
   return path;
 }
 
