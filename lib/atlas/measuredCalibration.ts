@@ -134,19 +134,19 @@ export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbs
       `the spectrum covers ${measuredFrom.toFixed(1)}–${measuredTo.toFixed(1)} cm⁻¹, where ${gasName(cell)} has no lines at natural abundance (its lines lie at ${lo.toFixed(0)}–${hi.toFixed(0)} cm⁻¹)${hint}`,
     );
   }
-  const inRangeFrom = Math.min(...inRange.map((l) => l.wavenumber));
-  const inRangeTo = Math.max(...inRange.map((l) => l.wavenumber));
+  const linesFrom = Math.min(...inRange.map((l) => l.wavenumber));
+  const linesTo = Math.max(...inRange.map((l) => l.wavenumber));
+  // Measured once: the saturation refusal (below) and the inverted-spectrum check both read it.
+  const black = saturatedFraction(measured, linesFrom, linesTo, rules.saturationAbsorbance);
+  const bandIsBlack = black > 0.05;
   // A black band also reaches far from its median: the saturation message comes first (below).
-  const inverted =
-    saturatedFraction(measured, inRangeFrom, inRangeTo, rules.saturationAbsorbance) > 0.05 ? null : invertedSpectrumReason(measured, inRangeFrom, inRangeTo);
+  const inverted = bandIsBlack ? null : invertedSpectrumReason(measured, linesFrom, linesTo);
   if (inverted) {
     throw new CalibrationRefused(
       `the spectrum, read as absorbance, does not look like absorption: ${inverted}; check what its y values are (--y transmittance, percent or absorbance)`,
     );
   }
   const { peaks: allPeaks, noiseAbsorbance } = absorptionPeaks(x, measured.absorbance, 5);
-  const linesFrom = Math.min(...inRange.map((l) => l.wavenumber));
-  const linesTo = Math.max(...inRange.map((l) => l.wavenumber));
   // Widths only from peaks among the gas's lines: other gases and other bands in the file say nothing of it.
   const nearLines = allPeaks.filter((p) => p.wavenumberCm >= linesFrom - 2 && p.wavenumberCm <= linesTo + 2);
   const resolution = resolutionOf(measured, settings, nearLines, rules);
@@ -170,8 +170,7 @@ export function calibrateMeasuredSpectrum(cell: CellModel, measured: MeasuredAbs
     result = calibrateSpectrum(gasName(cell), peaks, references, resolutionCm, { fromCm, toCm }, settings.model, rules);
   } catch (error) {
     // A black band has no peaks left to find: say that, not that the gas is wrong.
-    const black = saturatedFraction(measured, linesFrom, linesTo, rules.saturationAbsorbance);
-    if (error instanceof CalibrationRefused && black > 0.05) {
+    if (error instanceof CalibrationRefused && bandIsBlack) {
       throw new CalibrationRefused(
         `the spectrum is saturated: ${(100 * black).toFixed(0)} % of the points between ${linesFrom.toFixed(0)} and ${linesTo.toFixed(0)} cm⁻¹ absorb more than ${rules.saturationAbsorbance} above the baseline; lower the pressure, dilute the gas or shorten the path, then record again`,
       );
